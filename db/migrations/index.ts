@@ -1,0 +1,4 @@
+import * as initialSchema from './0001-initial-schema';
+
+// Every migration, in order. Listed explicitly so that tsx, vitest and any bundler load them the same way.
+export const MIGRATIONS = [{ name: '0001-initial-schema', ...initialSchema }];

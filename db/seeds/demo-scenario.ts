@@ -1,0 +1,47 @@
+import { randomUUID } from 'node:crypto';
+import { readFile } from 'node:fs/promises';
+import path from 'node:path';
+import { recordAuditEvent } from '@/lib/audit/record-audit-event';
+import { hashPassword } from '@/lib/auth/password';
+import { Revision, Scheme, User, database } from '@/lib/db';
+import { DEMO_USERS } from './demo-users';
+
+const DEMO_CASE = path.resolve('db', 'seeds', 'cases', 'harrowfield-broad-crested.json');
+
+/** The demo: five users, one per role, and the Harrowfield Mill weir scheme with a draft revision. Idempotent. */
+export async function seedDemoScenario() {
+  const sequelize = database();
+  if ((await User.count()) > 0) return { seeded: false, users: [] };
+  const hashes = await Promise.all(DEMO_USERS.map((u) => hashPassword(u.password)));
+  const inputsJson = await readFile(DEMO_CASE, 'utf8').catch(() => null);
+  await sequelize.transaction(async (transaction) => {
+    const ids = new Map<string, string>();
+    for (const [i, u] of DEMO_USERS.entries()) {
+      const id = randomUUID();
+      ids.set(u.role, id);
+      await User.create({ id, email: u.email, name: u.name, role: u.role, passwordHash: hashes[i], status: 'active', organisation: u.organisation }, { transaction });
+    }
+    const designerId = ids.get('designer')!;
+    const schemeId = randomUUID();
+    await Scheme.create(
+      {
+        id: schemeId,
+        reference: 'SM-0001',
+        name: 'Harrowfield Mill weir renewal',
+        watercourse: 'River Wendle',
+        site: 'Harrowfield Mill, Wendle Valley',
+        description: 'Replacement of the derelict mill weir by a broad-crested weir to hold the mill pond level (demo scenario, invented).',
+        designerId,
+      },
+      { transaction },
+    );
+    if (inputsJson) {
+      await Revision.create(
+        { id: randomUUID(), schemeId, number: 1, wizardStep: 'results', inputsJson, resultsJson: null, inputsSha256: null, resultsSha256: null, revisionSha256: null, engineVersion: null, authorId: designerId, checkerId: null, basedOnRevisionId: null, submittedAt: null, countersignedAt: null },
+        { transaction },
+      );
+    }
+    await recordAuditEvent({ actorId: null, action: 'demo.seeded', entityType: 'scheme', entityId: schemeId, schemeId, details: { users: DEMO_USERS.map((u) => u.email) } }, transaction);
+  });
+  return { seeded: true, users: DEMO_USERS.map(({ role, email, password }) => ({ role, email, password })) };
+}

@@ -1,0 +1,44 @@
+import type { Metadata } from 'next';
+import { EmptyState } from '@/components/ui/empty-state';
+import { PageHeader } from '@/components/ui/page-header';
+import { StatusLabel } from '@/components/ui/status-label';
+import { ANY_ROLE } from '@/lib/auth/authorize';
+import { requirePageRole } from '@/lib/auth/page-guard';
+import { listSchemes } from '@/lib/schemes/list-schemes';
+
+export const metadata: Metadata = { title: 'Schemes' };
+
+export default async function SchemesPage() {
+  const user = await requirePageRole(ANY_ROLE, '/schemes');
+  const schemes = await listSchemes(user);
+  return (
+    <>
+      <PageHeader eyebrow="Register" title="Schemes">{user.role === 'planning' ? 'Schemes with a certificate.' : 'Weir and spillway schemes you can see.'}</PageHeader>
+      {schemes.length === 0 ? (
+        <EmptyState title="No schemes to show yet." />
+      ) : (
+        <table className="w-full border-collapse text-sm">
+          <caption className="sr-only">Schemes</caption>
+          <thead>
+            <tr className="border-b border-paper-edge text-left text-ink-soft">
+              <th scope="col" className="py-2 pr-4">Reference</th>
+              <th scope="col" className="py-2 pr-4">Scheme</th>
+              <th scope="col" className="py-2 pr-4">Watercourse and site</th>
+              <th scope="col" className="py-2">Latest revision</th>
+            </tr>
+          </thead>
+          <tbody>
+            {schemes.map((s) => (
+              <tr key={s.id} className="border-b border-paper-edge">
+                <td className="num py-2 pr-4">{s.reference}</td>
+                <td className="py-2 pr-4 font-semibold">{s.name}</td>
+                <td className="py-2 pr-4">{s.watercourse} at {s.site}</td>
+                <td className="py-2">{s.latestRevision ? <span className="flex items-center gap-2"><span className="num">rev. {s.latestRevision.number}</span><StatusLabel status={s.latestRevision.status} /></span> : '—'}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,65 @@
+import 'server-only';
+import { Op, type WhereOptions } from 'sequelize';
+import type { SessionUser } from '@/lib/auth/current-session';
+import { AuditEvent, Certificate, Invitation, Letter, Revision, Scheme, User, database } from '@/lib/db';
+
+export interface HomeItem {
+  id: string;
+  title: string;
+  detail: string;
+  status: string;
+}
+
+export interface RoleHome {
+  sections: { heading: string; empty: string; items: HomeItem[] }[];
+}
+
+async function revisionItems(where: WhereOptions<Revision>, excludeAuthor?: string): Promise<HomeItem[]> {
+  const revisions = await Revision.findAll({ where: excludeAuthor ? { [Op.and]: [where, { authorId: { [Op.ne]: excludeAuthor } }] } : where, order: [['updatedAt', 'DESC']], limit: 20 });
+  const schemes = new Map((await Scheme.findAll({ where: { id: revisions.map((r) => r.schemeId) } })).map((s) => [s.id, s]));
+  return revisions.map((r) => {
+    const scheme = schemes.get(r.schemeId);
+    return { id: r.id, title: `${scheme?.reference ?? ''} ${scheme?.name ?? 'Scheme'} — revision ${r.number}`, detail: `${scheme?.watercourse ?? ''} at ${scheme?.site ?? ''}`, status: r.status };
+  });
+}
+
+/** What is waiting for the signed-in user, by role. */
+export async function loadRoleHome(user: SessionUser): Promise<RoleHome> {
+  database();
+  switch (user.role) {
+    case 'designer': {
+      const mine = (await Scheme.findAll({ where: { designerId: user.id }, attributes: ['id'] })).map((s) => s.id);
+      return {
+        sections: [
+          { heading: 'Drafts and returned revisions', empty: 'No drafts. Start a scheme from the Schemes page.', items: await revisionItems({ schemeId: mine, status: ['draft', 'returned'] }) },
+          { heading: 'Waiting for check', empty: 'Nothing is with a checker.', items: await revisionItems({ schemeId: mine, status: 'submitted' }) },
+        ],
+      };
+    }
+    case 'checker':
+      return { sections: [{ heading: 'Checks to do', empty: 'No revision is waiting for your check.', items: await revisionItems({ status: 'submitted', [Op.or]: [{ checkerId: user.id }, { checkerId: null }] }, user.id) }] };
+    case 'liaison': {
+      const queued = await Letter.count({ where: { status: ['queued', 'failed'] } });
+      return {
+        sections: [
+          { heading: 'Certified revisions with landowners to inform', empty: 'No certified revision yet.', items: await revisionItems({ status: 'countersigned' }) },
+          { heading: 'Letters to send', empty: 'No letter is waiting to be sent.', items: queued ? [{ id: 'queued', title: `${queued} letter(s) queued or failed`, detail: 'Open the scheme’s letters to send them.', status: 'queued' }] : [] },
+        ],
+      };
+    }
+    case 'planning': {
+      const certificates = await Certificate.findAll({ order: [['issuedAt', 'DESC']], limit: 20 });
+      return { sections: [{ heading: 'Certificates to download', empty: 'No certificate has been issued yet.', items: certificates.map((c) => ({ id: c.id, title: c.number, detail: `Issued ${c.issuedAt.slice(0, 10)}`, status: c.status })) }] };
+    }
+    case 'admin': {
+      const invitations = await Invitation.findAll({ where: { acceptedAt: null }, order: [['createdAt', 'DESC']], limit: 20 });
+      const events = await AuditEvent.findAll({ order: [['id', 'DESC']], limit: 8 });
+      return {
+        sections: [
+          { heading: 'Invitations not yet accepted', empty: 'Every invited user has accepted.', items: invitations.map((i) => ({ id: i.id, title: i.email, detail: `Invited as ${i.role}, expires ${i.expiresAt.slice(0, 10)}`, status: 'invited' })) },
+          { heading: `Recent audit events (${await User.count()} users)`, empty: 'No audit events yet.', items: events.map((e) => ({ id: String(e.id), title: e.action, detail: `${e.at.replace('T', ' ').slice(0, 19)} UTC`, status: e.entityType })) },
+        ],
+      };
+    }
+  }
+}

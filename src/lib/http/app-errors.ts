@@ -1,0 +1,65 @@
+// Domain failures of the portal, each mapped once to an HTTP status (see to-http-response.ts).
+
+export interface FieldIssue {
+  path: string;
+  message: string;
+}
+
+export class AppError extends Error {
+  constructor(
+    message: string,
+    readonly status: 400 | 401 | 403 | 404 | 409 | 413 | 422 | 429,
+  ) {
+    super(message);
+    this.name = new.target.name;
+  }
+}
+
+export class UnauthenticatedError extends AppError {
+  constructor(message = 'Sign in to continue.') {
+    super(message, 401);
+  }
+}
+
+export class ForbiddenError extends AppError {
+  constructor(message = 'Your role does not allow this.') {
+    super(message, 403);
+  }
+}
+
+export class NotFoundError extends AppError {
+  constructor(message = 'Not found.') {
+    super(message, 404);
+  }
+}
+
+export class ConflictError extends AppError {
+  constructor(message: string) {
+    super(message, 409);
+  }
+}
+
+export class ThrottledError extends AppError {
+  constructor(message: string) {
+    super(message, 429);
+  }
+}
+
+export class InvalidRequestError extends AppError {
+  constructor(
+    readonly issues: FieldIssue[],
+    message = 'Some fields need attention.',
+  ) {
+    super(message, 400);
+  }
+}
+
+/** Well-formed input that the domain cannot act on (for example a case with no physical solution). */
+export class UnprocessableError extends AppError {
+  constructor(
+    message: string,
+    readonly issues: FieldIssue[] = [],
+  ) {
+    super(message, 422);
+  }
+}

@@ -1,0 +1,17 @@
+import 'server-only';
+import { EngineError } from '@/lib/hydraulics/errors';
+import { AppError, InvalidRequestError, UnprocessableError } from './app-errors';
+
+/** The one place domain and engine errors become JSON responses; anything unexpected is a logged 500 with no detail. */
+export function toHttpResponse(error: unknown): Response {
+  if (error instanceof InvalidRequestError || error instanceof UnprocessableError) {
+    return Response.json({ error: error.message, issues: error.issues }, { status: error.status });
+  }
+  if (error instanceof AppError) return Response.json({ error: error.message }, { status: error.status });
+  if (error instanceof EngineError) {
+    const status = error.code === 'invalid-input' ? 400 : 422;
+    return Response.json({ error: error.message, code: error.code, issues: [{ path: error.field, message: error.message }] }, { status });
+  }
+  console.error('Unexpected error in a route handler', error);
+  return Response.json({ error: 'Something went wrong on the server. The problem has been logged.' }, { status: 500 });
+}

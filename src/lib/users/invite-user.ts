@@ -1,0 +1,39 @@
+import 'server-only';
+import { createHash, randomBytes, randomUUID } from 'node:crypto';
+import { recordAuditEvent } from '@/lib/audit/record-audit-event';
+import type { SessionUser } from '@/lib/auth/current-session';
+import { ROLE_LABELS } from '@/lib/auth/roles';
+import { Invitation, User, database } from '@/lib/db';
+import { ConflictError } from '@/lib/http/app-errors';
+import { sendMail } from '@/lib/mail/send-mail';
+import type { InviteUserInput } from '@/lib/validation/auth-schemas';
+
+const INVITATION_DAYS = 7;
+
+export function invitationTokenHash(token: string): string {
+  return createHash('sha256').update(token).digest('hex');
+}
+
+/** Creates an invited (not yet active) account and e-mails a one-time link; only the token's hash is stored. */
+export async function inviteUser({ input, admin, baseUrl }: { input: InviteUserInput; admin: SessionUser; baseUrl: string }) {
+  const sequelize = database();
+  const token = randomBytes(32).toString('base64url');
+  const invitation = await sequelize.transaction(async (transaction) => {
+    if (await User.findOne({ where: { email: input.email }, transaction })) throw new ConflictError(`An account for ${input.email} exists already.`);
+    const userId = randomUUID();
+    await User.create({ id: userId, email: input.email, name: input.name, role: input.role, passwordHash: null, status: 'invited', organisation: null }, { transaction });
+    const created = await Invitation.create(
+      { id: randomUUID(), email: input.email, role: input.role, tokenHash: invitationTokenHash(token), invitedBy: admin.id, expiresAt: new Date(Date.now() + INVITATION_DAYS * 86400_000).toISOString(), acceptedAt: null },
+      { transaction },
+    );
+    await recordAuditEvent({ actorId: admin.id, action: 'user.invited', entityType: 'user', entityId: userId, details: { email: input.email, role: input.role } }, transaction);
+    return created;
+  });
+  const link = `${baseUrl}/invitation/${token}`;
+  await sendMail({
+    to: input.email,
+    subject: 'Your Sillmark account',
+    text: `Hello ${input.name},\n\n${admin.name} has invited you to Sillmark as ${ROLE_LABELS[input.role]}.\nSet your password within ${INVITATION_DAYS} days here:\n\n${link}\n\nIf you did not expect this, ignore this message.\n`,
+  });
+  return { invitationId: invitation.id, email: input.email };
+}

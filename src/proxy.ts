@@ -1,0 +1,30 @@
+import { NextResponse, type NextRequest } from 'next/server';
+
+const SESSION_COOKIE = 'sillmark_session';
+const PUBLIC_PAGES = ['/sign-in', '/invitation', '/verify'];
+const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
+
+/**
+ * Cheap checks only: cross-origin writes are refused, anonymous page visits go to sign-in.
+ * Every page, handler and action still checks the session and role itself on the server.
+ */
+export function proxy(request: NextRequest) {
+  if (!SAFE_METHODS.has(request.method)) {
+    const origin = request.headers.get('origin');
+    const host = request.headers.get('x-forwarded-host') ?? request.headers.get('host');
+    if (origin && (() => { try { return new URL(origin).host !== host; } catch { return true; } })()) {
+      return NextResponse.json({ error: 'Cross-origin requests that change data are refused.' }, { status: 403 });
+    }
+  }
+  const { pathname } = request.nextUrl;
+  const isPage = !pathname.startsWith('/api/') && !pathname.startsWith('/_next/');
+  if (isPage && request.method === 'GET' && !request.cookies.has(SESSION_COOKIE) && pathname !== '/' && !PUBLIC_PAGES.some((p) => pathname.startsWith(p))) {
+    const url = request.nextUrl.clone();
+    url.pathname = '/sign-in';
+    url.search = `?next=${encodeURIComponent(pathname)}`;
+    return NextResponse.redirect(url);
+  }
+  return NextResponse.next();
+}
+
+export const config = { matcher: ['/((?!_next/static|_next/image|favicon.ico).*)'] };
