@@ -5,7 +5,8 @@ import { existsSync, readFileSync, readdirSync, statSync, writeFileSync } from '
 import path from 'node:path';
 
 const INPUTS = ['src', 'fonts', 'public', 'next.config.mjs', 'tailwind.config.ts', 'tsconfig.json', 'package-lock.json', '.postcssrc.json'];
-const STAMP = path.join('.next', 'sillmark-build-stamp');
+const DIST = process.env.NEXT_DIST_DIR ?? '.next';
+const STAMP = path.join(DIST, 'sillmark-build-stamp');
 
 function* files(entry) {
   if (!existsSync(entry)) return;
@@ -21,7 +22,7 @@ export function sourceHash() {
 
 export function buildIfNeeded({ log = console.log } = {}) {
   const wanted = sourceHash();
-  const built = existsSync(STAMP) && existsSync(path.join('.next', 'BUILD_ID')) ? readFileSync(STAMP, 'utf8') : '';
+  const built = existsSync(STAMP) && existsSync(path.join(DIST, 'BUILD_ID')) ? readFileSync(STAMP, 'utf8') : '';
   if (built === wanted) return log('Production build is up to date.');
   log('Building the production bundle (next build)…');
   const result = spawnSync('npx', ['next', 'build'], { stdio: 'inherit', env: { ...process.env, NEXT_TELEMETRY_DISABLED: '1' } });
