@@ -1,11 +1,11 @@
-import { spawnSync } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import Database from 'better-sqlite3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { recordAuditEvent } from '@/lib/audit/record-audit-event';
-import { backupDatabase, restoreDatabase } from '@/lib/db/backup-database';
+import { restoreDatabase } from '@/lib/db/backup-database';
 import { database } from '@/lib/db';
 import { useTestDatabase } from './support/test-database';
 import { createTestUser } from './support/user-factory';
@@ -31,8 +31,12 @@ describe('database backup and restore', () => {
     const writes = (async () => {
       for (let i = 0; i < 40; i++) await sequelize.transaction((t) => recordAuditEvent({ actorId: null, action: `during.backup.${i}`, entityType: 'test' }, t));
     })();
-    const { destination } = await backupDatabase({ source: db.file, destination: path.join(folder, 'copy.sqlite') });
+    // The backup runs in its own process, as `npm run db:backup` does beside a running portal.
+    const destination = path.join(folder, 'copy.sqlite');
+    const backup = spawn('npm', ['run', '--silent', 'db:backup', '--', destination], { env: { ...process.env, DATABASE_PATH: db.file } });
+    const exitCode = await new Promise<number | null>((resolve) => backup.on('exit', resolve));
     await writes;
+    expect(exitCode).toBe(0);
     const usersInCopy = count(destination, 'users');
     expect(usersInCopy).toBe(5);
     const eventsInCopy = count(destination, 'audit_events');

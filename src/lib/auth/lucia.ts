@@ -1,10 +1,8 @@
 import 'server-only';
-import Database from 'better-sqlite3';
-import { BetterSqlite3Adapter } from '@lucia-auth/adapter-sqlite';
 import { Lucia, TimeSpan } from 'lucia';
 import { databasePath } from '@/lib/db/database-path';
-import { BUSY_TIMEOUT_MS } from '@/lib/db/sqlite-driver';
 import type { Role } from './roles';
+import { sessionAdapter } from './session-store';
 
 interface UserRow {
   email: string;
@@ -22,12 +20,8 @@ export function cookiesAreSecure(): boolean {
   return process.env.NODE_ENV === 'production';
 }
 
-function createLucia(file: string) {
-  const connection = new Database(file);
-  connection.pragma(`busy_timeout = ${BUSY_TIMEOUT_MS}`);
-  connection.pragma('foreign_keys = ON');
-  const adapter = new BetterSqlite3Adapter(connection, { user: 'users', session: 'sessions' });
-  return new Lucia(adapter, {
+function createLucia() {
+  return new Lucia(sessionAdapter(), {
     sessionExpiresIn: new TimeSpan(12, 'h'),
     sessionCookie: { name: 'sillmark_session', expires: false, attributes: { secure: cookiesAreSecure(), sameSite: 'lax' } },
     getUserAttributes: (row) => ({ email: row.email, name: row.name, role: row.role, status: row.status }),
@@ -36,7 +30,7 @@ function createLucia(file: string) {
 
 export function lucia() {
   const file = databasePath();
-  if (!cache.sillmarkLucia || cache.sillmarkLucia.path !== file) cache.sillmarkLucia = { path: file, lucia: createLucia(file) };
+  if (!cache.sillmarkLucia || cache.sillmarkLucia.path !== file) cache.sillmarkLucia = { path: file, lucia: createLucia() };
   return cache.sillmarkLucia.lucia;
 }
 

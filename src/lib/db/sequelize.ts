@@ -13,6 +13,8 @@ function createSequelize(storage: string): Sequelize {
     // IMMEDIATE takes the write lock at BEGIN, so two writers queue on the busy timeout instead of deadlocking on upgrade.
     transactionType: Transaction.TYPES.IMMEDIATE,
     define: { underscored: true, timestamps: false },
+    // A busy database is retried, not lost: up to 30 tries over about fifteen seconds, with jitter so writers spread out.
+    retry: { max: 30, match: [/SQLITE_BUSY/], backoffBase: 20, backoffExponent: 1.15, backoffJitter: 20 },
   });
 }
 
