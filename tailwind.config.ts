@@ -7,7 +7,7 @@ const config: Config = {
     extend: {
       colors: {
         paper: { DEFAULT: '#faf8f3', edge: '#ece7db', deep: '#f2eee4' },
-        ink: { DEFAULT: '#1f2a2e', soft: '#4a5a60', faint: '#7d8b90' },
+        ink: { DEFAULT: '#1f2a2e', soft: '#4a5a60', faint: '#5d6b70' },
         accent: { DEFAULT: '#17636b', strong: '#0f4b52', wash: '#e3f0ef' },
         verdict: { pass: '#2f6b3a', fail: '#a33a2a', caution: '#8a6212' },
       },

@@ -3,6 +3,7 @@ import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_USERS } from '../../db/seeds/demo-users';
 import { startApp, type RunningApp } from './support/app-server';
+import { seriousAccessibilityViolations } from './support/accessibility';
 import { launchBrowser, signInAs } from './support/browser';
 
 const ROLE_HOME_HEADING: Record<string, string> = {
@@ -36,11 +37,16 @@ describe('each demo role signs in and sees its own home', () => {
       expect(await page.getByRole('heading', { level: 2, name: ROLE_HOME_HEADING[user.role] }).count()).toBe(1);
       expect(await page.getByTestId('current-role').textContent()).toMatch(new RegExp(user.role === 'planning' ? 'Planning officer' : user.role, 'i'));
       await page.screenshot({ path: `tests/.artifacts/home-${user.role}.png`, fullPage: true });
+      expect(await seriousAccessibilityViolations(page)).toEqual([]);
 
       const otherPage = user.role === 'admin' ? '/home' : '/admin/users';
       const response = await page.goto(`${app.baseUrl}${otherPage}`);
       if (user.role === 'admin') {
         expect(response?.status()).toBe(200);
+        for (const adminPage of ['/admin/users', '/admin/audit', '/schemes']) {
+          await page.goto(`${app.baseUrl}${adminPage}`);
+          expect(await seriousAccessibilityViolations(page), adminPage).toEqual([]);
+        }
       } else {
         expect(response?.status()).toBe(403);
         expect(await page.getByRole('heading', { name: 'This page belongs to another role' }).count()).toBe(1);
@@ -53,6 +59,7 @@ describe('each demo role signs in and sees its own home', () => {
     const context = await browser.newContext();
     const page = await context.newPage();
     await page.goto(`${app.baseUrl}/sign-in`);
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
     await page.getByLabel('E-mail address').fill('designer@sillmark.test');
     await page.getByLabel('Password').fill('not-the-password');
     await page.getByRole('button', { name: 'Sign in' }).click();

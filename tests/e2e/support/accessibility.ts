@@ -1,0 +1,23 @@
+import { createRequire } from 'node:module';
+import type { Page } from 'playwright-core';
+
+const require = createRequire(import.meta.url);
+const AXE_SOURCE = require.resolve('axe-core/axe.min.js');
+
+export interface AxeViolation {
+  id: string;
+  impact: string | null;
+  help: string;
+  nodes: { target: string[] }[];
+}
+
+/** Runs axe-core in the page and returns the serious and critical violations (WCAG 2.x A and AA rules). */
+export async function seriousAccessibilityViolations(page: Page): Promise<AxeViolation[]> {
+  await page.addScriptTag({ path: AXE_SOURCE });
+  const violations = await page.evaluate(async () => {
+    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: AxeViolation[] }> } }).axe;
+    const result = await axe.run(document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'] } });
+    return result.violations.map((v) => ({ id: v.id, impact: v.impact, help: v.help, nodes: v.nodes.map((n) => ({ target: n.target })) }));
+  });
+  return violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
+}
