@@ -6,7 +6,7 @@ import { hashPassword } from '@/lib/auth/password';
 import { Revision, Scheme, User, database } from '@/lib/db';
 import { DEMO_USERS } from './demo-users';
 
-const DEMO_CASE = path.resolve('db', 'seeds', 'cases', 'harrowfield-broad-crested.json');
+const DEMO_CASE = path.resolve('db', 'seeds', 'cases', 'wendle-harrowfield-broad-crested.json');
 
 /** The demo: five users, one per role, and the Harrowfield Mill weir scheme with a draft revision. Idempotent. */
 export async function seedDemoScenario() {
