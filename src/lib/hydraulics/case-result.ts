@@ -1,0 +1,114 @@
+// The result of evaluating a case file. Distances are measured upstream from the control section.
+import type { InundationComparison } from './impact/inundation';
+import type { CrestSizingResult } from './design/crest-sizing';
+import type { SensitivityReport } from './design/sensitivity';
+import type { ProfilePoint, ProfileStop, RefinementReport, SelfCheckReport } from './profiles/profile-point';
+import type { ProfileType } from './profiles/profile-type';
+import type { SlopeClass } from './slope-class';
+import type { CubicMetresPerSecond, Metres } from './units';
+import type { SubmergenceState, ValidityCheck, WeirKind } from './weirs';
+
+export type Verdict = 'pass' | 'fail';
+
+export interface WeirDetails {
+  kind: WeirKind;
+  sillHeight: Metres;
+  head: Metres;
+  energyHead: Metres;
+  approachVelocity: number;
+  coefficient: number;
+  coefficientSource: string;
+  coefficientIsDefault: boolean;
+  submergence: SubmergenceState | null;
+  validity: ValidityCheck[];
+  /** Ogee only: the design head the coefficient was read at. */
+  designHead: Metres | null;
+}
+
+export interface ControlResult {
+  type: 'depth' | 'weir';
+  /** Head over the crest; 0 for a depth control, which has no crest. */
+  head: Metres;
+  /** Depth above the channel bed at the control that the with-scheme profile starts from. */
+  depth: Metres;
+  /** Water level at the control (bed level + depth). */
+  level: Metres;
+  /** Depth the structure itself holds (sill + head), before any drowning by the downstream level. */
+  structureDepth: Metres;
+  controls: boolean;
+  causesBackwater: boolean;
+  explanation: string | null;
+  weir: WeirDetails | null;
+}
+
+export interface WithoutSchemeResult {
+  /** How the without-scheme downstream level was set. */
+  controlBy: 'normal-depth' | 'existing-control';
+  controlDepth: Metres;
+  controlLevel: Metres;
+  profileType: ProfileType;
+  profile: ProfilePoint[];
+}
+
+export interface LimitResult {
+  label: string;
+  distanceUpstream: Metres;
+  maxLevel: Metres;
+  freeboard: Metres;
+  waterLevel: Metres;
+  withoutSchemeLevel: Metres;
+  afflux: Metres;
+  margin: Metres;
+  pass: boolean;
+  source: 'profile' | 'beyond-profile';
+}
+
+export interface EventResult {
+  name: string;
+  /** Design discharge: the event's discharge with its climate-change allowance applied. */
+  discharge: CubicMetresPerSecond;
+  baseDischarge: CubicMetresPerSecond;
+  climateChangeAllowance: number | null;
+  annualExceedanceProbability: number | null;
+  returnPeriod: number | null;
+  /**
+   * Normal depth at the control section. A horizontal or adverse bed has none: then `normalDepthExists` is
+   * false, `normalDepth` is 0 and means "none", and the without-scheme level comes from `existingControl`.
+   */
+  normalDepth: Metres;
+  normalDepthExists: boolean;
+  criticalDepth: Metres;
+  /** Bed slope the classification used: the prismatic slope, or the mean slope of a surveyed reach. */
+  bedSlope: number;
+  slopeClass: SlopeClass;
+  profileType: ProfileType;
+  control: ControlResult;
+  profile: ProfilePoint[];
+  stoppedBy: ProfileStop;
+  refinement: RefinementReport;
+  selfCheck: SelfCheckReport | null;
+  withoutScheme: WithoutSchemeResult;
+  afflux: { atControl: Metres; max: Metres };
+  extent: { distanceUpstream: Metres; endsBy: string; warning?: string };
+  jump: { distanceUpstream: Metres; upstreamDepth: Metres; downstreamDepth: Metres } | null;
+  /** Null when the case gives no bank height or bank levels to check against. */
+  inundation: InundationComparison | null;
+  limits: LimitResult[];
+  /** Least limit margin of the event; null without limits. */
+  leastMargin: Metres | null;
+  verdict: Verdict;
+  warnings: string[];
+}
+
+export interface CaseResult {
+  engineVersion: string;
+  title: string;
+  units: 'SI' | 'US';
+  verdict: Verdict;
+  warnings: string[];
+  events: EventResult[];
+  /** The event with the least limit margin; null without limits. */
+  governingEvent: { index: number; name: string; leastMargin: Metres } | null;
+  sizing: (CrestSizingResult & { vary: 'sillHeight' | 'crestLength'; lower: Metres; upper: Metres }) | null;
+  sensitivity: (SensitivityReport & { event: string; percentages: { manningN: number; discharge: number; coefficient: number } }) | null;
+}

@@ -1,0 +1,91 @@
+// Critical depth: the depth at which the Froude number αQ²T/(gA³) equals 1.
+import { DEEPEST_OPEN_DEPTH, downwardBracket, finiteDepthGrid, hasBreakpoints, openDepthBracket } from './depth-brackets';
+import { NoPhysicalSolutionError, requirePositive } from './errors';
+import { specificEnergy } from './flow-properties';
+import { type Bracket, rootInBracket, signChangeBrackets } from './root-scan';
+import type { FlowSection } from './section';
+import type { CubicMetresPerSecond, Metres } from './units';
+import { GRAVITY } from './units';
+
+export interface CriticalDepthOptions {
+  /** Path of the section in errors when critical depth lies above it, default 'reach.section'. */
+  field?: string;
+  /** Path of the discharge in errors, default 'discharge'. */
+  dischargeField?: string;
+}
+
+/** Tolerance on |Fr − 1| that tells a root from a jump in top width (where the residual changes sign without a root). */
+const ROOT_CHECK = 1e-6;
+
+function atBreakpoint(section: FlowSection, y: Metres): boolean {
+  const breakpoints = hasBreakpoints(section) ? section.breakpointDepths : [];
+  return breakpoints.some((d) => Math.abs(d - y) <= 1e-8 * section.maxDepth);
+}
+
+/**
+ * A converged bracket is a root of Fr = 1 unless it sits on a ground breakpoint where the top width jumps
+ * (a flat berm starting to flood) and Fr there is not 1: then the sign change was the jump itself.
+ */
+export function isCriticalRoot(section: FlowSection, y: Metres, discharge: CubicMetresPerSecond, momentumOnly: boolean): boolean {
+  if (!(y > 0)) return false;
+  const state = section.stateAtDepth(y);
+  if (!(state.area > 0)) return false;
+  const alpha = momentumOnly ? 1 : state.energyCoefficient;
+  const froude = (discharge / state.area) * Math.sqrt((alpha * state.topWidth) / (GRAVITY * state.area));
+  return Math.abs(froude - 1) <= ROOT_CHECK || !atBreakpoint(section, y);
+}
+
+/**
+ * √g A^(3/2) − Q √(αT): zero exactly where Fr² = α Q² T/(g A³) = 1 (Chow, Open-Channel Hydraulics, 1959, §4-2,
+ * criterion for critical flow Z = A√(A/T) = Q√(α/g) — from memory). Negative below critical depth, positive above;
+ * square roots rather than cubes keep it clear of overflow, and a brim-full pipe (T = 0) stays finite.
+ */
+export function criticalResidual(section: FlowSection, discharge: CubicMetresPerSecond, momentumOnly = false): (y: Metres) => number {
+  const rootGravity = Math.sqrt(GRAVITY);
+  return (y) => {
+    const state = section.stateAtDepth(y);
+    const alpha = momentumOnly ? 1 : state.energyCoefficient;
+    return rootGravity * state.area ** 1.5 - discharge * Math.sqrt(alpha * state.topWidth);
+  };
+}
+
+function finiteSectionBrackets(section: FlowSection, residual: (y: Metres) => number): Bracket[] {
+  const grid = finiteDepthGrid(section);
+  const shallowest = residual(grid[0]) >= 0 ? downwardBracket(residual, grid[0]) : null;
+  return [...(shallowest ? [shallowest] : []), ...signChangeBrackets(residual, grid)];
+}
+
+/** Every root of the residual in ascending order; compound sections may have several. Shared with the jump solver. */
+export function residualRoots(section: FlowSection, residual: (y: Metres) => number, isRoot: (y: Metres) => boolean, field: string): Metres[] {
+  if (section.maxDepth === Infinity) {
+    const bracket = openDepthBracket(residual, field);
+    if (bracket === null) throw new NoPhysicalSolutionError(field, 'depth-out-of-range', `no critical depth below ${DEEPEST_OPEN_DEPTH} m: check the discharge and its units`);
+    return [rootInBracket(residual, bracket, field)];
+  }
+  const roots = finiteSectionBrackets(section, residual).map((bracket) => rootInBracket(residual, bracket, field));
+  return [...new Set(roots)].filter(isRoot).sort((a, b) => a - b);
+}
+
+/** Every depth where Fr = 1 within the section (Chow 1959 §4-2 criterion — from memory), ascending. */
+export function criticalDepths(section: FlowSection, discharge: CubicMetresPerSecond, opts: CriticalDepthOptions = {}): Metres[] {
+  const field = opts.field ?? 'reach.section';
+  const dischargeField = opts.dischargeField ?? 'discharge';
+  requirePositive(discharge, dischargeField);
+  const isRoot = (y: Metres) => isCriticalRoot(section, y, discharge, false);
+  const roots = residualRoots(section, criticalResidual(section, discharge), isRoot, dischargeField);
+  if (roots.length === 0) {
+    throw new NoPhysicalSolutionError(
+      field,
+      'section-overtopped',
+      `critical depth for ${discharge} m³/s lies above the top of the section (${section.maxDepth.toPrecision(4)} m deep): the flow would overtop it`,
+    );
+  }
+  return roots;
+}
+
+/** The critical depth; where a compound section has several, the one with the least specific energy. */
+export function criticalDepth(section: FlowSection, discharge: CubicMetresPerSecond, opts: CriticalDepthOptions = {}): Metres {
+  const roots = criticalDepths(section, discharge, opts);
+  const energies = roots.map((y) => specificEnergy(section, y, discharge));
+  return roots[energies.indexOf(Math.min(...energies))];
+}

@@ -1,0 +1,56 @@
+// Depth brackets for the engine's equations: a grid over a finite section, and geometric searches on open ones.
+import type { Bracket } from './root-scan';
+import type { FlowSection } from './section';
+import { expandBracketUpward } from './solvers';
+import type { Metres } from './units';
+
+const UNIFORM_STEPS = 400;
+const SHALLOWEST_FRACTION = 1e-9;
+const MAX_HALVINGS = 1100;
+/** No open channel in this engine is deeper than this; an equation without a root below it means absurd inputs. */
+export const DEEPEST_OPEN_DEPTH: Metres = 1e5;
+
+export function hasBreakpoints(section: FlowSection): section is FlowSection & { breakpointDepths: readonly Metres[] } {
+  return 'breakpointDepths' in section && Array.isArray((section as { breakpointDepths?: unknown }).breakpointDepths);
+}
+
+/**
+ * Ascending depths in (from, to] for scanning a finite section: a geometric run near `from` (shallow roots),
+ * a uniform run, and every depth where the ground changes slope (where the top width may jump), with a point just above it.
+ */
+export function finiteDepthGrid(section: FlowSection, from: Metres = 0, to: Metres = section.maxDepth): Metres[] {
+  const span = to - from;
+  const depths: Metres[] = [to];
+  for (let i = 1; i < UNIFORM_STEPS; i++) depths.push(from + (span * i) / UNIFORM_STEPS);
+  for (let fraction = SHALLOWEST_FRACTION; fraction < 1 / UNIFORM_STEPS; fraction *= 2) depths.push(from + span * fraction);
+  if (hasBreakpoints(section)) {
+    // A grid point just above each breakpoint keeps a jump in top width apart from any root just above it.
+    const inside = section.breakpointDepths.filter((d) => d > from && d < to);
+    depths.push(...inside, ...inside.map((d) => Math.min(to, d + span * SHALLOWEST_FRACTION)));
+  }
+  return [...new Set(depths)].sort((a, b) => a - b);
+}
+
+/**
+ * From `start`, halve the depth until f changes sign; returns the last interval [lower, higher], or null.
+ * Used for roots that may lie arbitrarily close to zero depth.
+ */
+export function downwardBracket(f: (y: Metres) => number, start: Metres): Bracket | null {
+  const startValue = f(start);
+  let higher = start;
+  for (let i = 0; i < MAX_HALVINGS; i++) {
+    const lower = higher / 2;
+    if (lower <= 0) return null;
+    const value = f(lower);
+    if (value === 0 || (value < 0) !== (startValue < 0)) return [lower, higher];
+    higher = lower;
+  }
+  return null;
+}
+
+/** The sign change on (0, DEEPEST_OPEN_DEPTH] of an f that is negative when shallow and positive when deep, or null. */
+export function openDepthBracket(f: (y: Metres) => number, field: string): Bracket | null {
+  const startDepth = 1;
+  if (f(startDepth) < 0) return expandBracketUpward(f, startDepth, 2 * startDepth, { maxHi: DEEPEST_OPEN_DEPTH, field });
+  return downwardBracket(f, startDepth);
+}

@@ -1,0 +1,146 @@
+// One flood event through the case: flow regime, control, profiles with and without the scheme, impact, limits.
+import type { CaseInput } from '@/lib/validation/case-schema';
+import type { ControlAdjustments } from './case-control';
+import { structureOutcome } from './case-control';
+import type { ReachModel } from './case-reach';
+import type { ControlResult, EventResult, WithoutSchemeResult } from './case-result';
+import { controlDepth } from './control-depth';
+import { criticalDepth } from './critical-depth';
+import { InvalidInputError, NoPhysicalSolutionError } from './errors';
+import { withSchemeProfile, withoutSchemeLevels } from './event-profiles';
+import { eventImpact } from './event-impact';
+import { normalDepth } from './normal-depth';
+import type { GvfProfile, ProfilePoint } from './profiles/profile-point';
+import type { WithoutScheme } from './profiles/without-scheme';
+import { profileType } from './profiles/profile-type';
+import { classifySlope } from './slope-class';
+import type { Metres } from './units';
+
+export interface EventContext {
+  input: CaseInput;
+  model: ReachModel;
+  adjust: ControlAdjustments;
+  dischargeFactor: number;
+  skipSelfCheck: boolean;
+}
+
+type CaseEvent = CaseInput['events'][number];
+
+const m = (x: Metres) => `${x.toFixed(3)} m`;
+
+/** Normal flow along the reach as a profile: nothing to step, nothing to refine. */
+function uniformFlowProfile(points: ProfilePoint[], type: GvfProfile['profileType']): GvfProfile {
+  return { points, stoppedBy: 'reach-end', profileType: type, jump: null, refinement: { stepsUsed: 0, extentChangeOnHalving: 0, converged: true }, selfCheck: null, warnings: [] };
+}
+
+function withoutSchemeStart(ctx: EventContext, yn: Metres | null, yc: Metres): { depth: Metres; by: WithoutSchemeResult['controlBy'] } {
+  const existing = ctx.input.existingControl?.depth;
+  if (existing !== undefined) {
+    if (existing < yc) {
+      throw new NoPhysicalSolutionError('existingControl.depth', 'control-below-critical', `the existing control depth ${m(existing)} is below the critical depth ${m(yc)}; a downstream control cannot hold the water there`);
+    }
+    return { depth: existing, by: 'existing-control' };
+  }
+  if (yn === null) {
+    throw new InvalidInputError('existingControl', 'is required on a horizontal or adverse reach: without normal depth there is no default level without the scheme; give the existing depth at the control');
+  }
+  return { depth: yn, by: 'normal-depth' };
+}
+
+/**
+ * The stop tolerance that also locates the extent of impact. Stopping within t·yn of normal depth leaves an afflux
+ * of up to t·yn there; when that exceeds the impact threshold the extent would lie beyond the profile, so the march
+ * goes on until the afflux is at most half the threshold.
+ */
+function profileSettingsLocatingImpact(input: CaseInput, yn: Metres | null, warnings: string[]): CaseInput['profile'] {
+  const tolerance = input.profile.normalDepthTolerance;
+  const threshold = input.impactThreshold ?? 0.01;
+  if (yn === null || tolerance * yn <= threshold / 2) return input.profile;
+  const locating = threshold / 2 / yn;
+  warnings.push(`The profile was continued past the ${(tolerance * 100).toFixed(2)} % normal-depth tolerance to ${(locating * 100).toFixed(3)} %, until the afflux is below half the ${(threshold * 1000).toFixed(0)} mm impact threshold, so that the extent of impact is located.`);
+  return { ...input.profile, normalDepthTolerance: locating };
+}
+
+/** Evaluates one event in SI units. */
+export function evaluateEvent(event: CaseEvent, index: number, ctx: EventContext): EventResult {
+  const { model, input } = ctx;
+  const allowance = event.climateChangeAllowance ?? 0;
+  const discharge = event.discharge * (1 + allowance / 100) * ctx.dischargeFactor;
+  const section = model.controlSection;
+  const dischargeField = `events[${index}].discharge`;
+  const yc = criticalDepth(section, discharge, { dischargeField, field: model.kind === 'prismatic' ? 'reach.section' : 'reach.sections[0]' });
+  const yn = model.bedSlope > 0 ? normalDepth(section, discharge, model.bedSlope, { dischargeField, field: 'reach.bedSlope' }) : null;
+  const slopeClass = classifySlope(model.bedSlope, yn, yc);
+  const warnings: string[] = [];
+  if (yn === null) warnings.push(`The bed is ${slopeClass}: uniform flow cannot exist, so normalDepth is reported as 0, meaning none.`);
+
+  const structure = structureOutcome(input.control, section, discharge, ctx.adjust);
+  warnings.push(...structure.warnings);
+  // A depth control holds its depth with no head over a crest: it enters as a sill of that height.
+  const held = controlDepth({ sillHeight: structure.depth - structure.head, head: structure.head, criticalDepth: yc, normalDepth: yn });
+  if (!held.controls) throw new NoPhysicalSolutionError('control', 'control-below-critical', held.explanation ?? 'the structure does not control the flow');
+
+  const without = withoutSchemeStart(ctx, yn, yc);
+  // A structure lower than the level the channel downstream already holds is drowned by it and raises nothing.
+  const drowned = without.depth >= yc && held.depth < without.depth;
+  const startDepth = drowned ? without.depth : held.depth;
+  if (drowned) warnings.push(`The level without the scheme (${m(without.depth)} deep at the control) is above the depth the structure holds (${m(held.depth)}): the structure is drowned and causes no backwater.`);
+  else if (held.explanation) warnings.push(held.explanation);
+
+  let levels: WithoutScheme;
+  let profile: GvfProfile;
+  if (drowned) {
+    // The same control depth as without the scheme: the with-scheme profile is the without-scheme one.
+    levels = withoutSchemeLevels(model, input.profile, discharge, input.existingControl?.depth, [0, model.length]);
+    profile = levels.profile ?? uniformFlowProfile(levels.points, profileType(slopeClass, without.depth, yn, yc));
+  } else {
+    const settings = profileSettingsLocatingImpact(input, yn, warnings);
+    profile = withSchemeProfile(model, settings, discharge, startDepth, ctx.skipSelfCheck);
+    const distances = [...profile.points.map((p) => p.distanceUpstream), model.length];
+    levels = withoutSchemeLevels(model, input.profile, discharge, input.existingControl?.depth, distances);
+  }
+  warnings.push(...profile.warnings);
+  if (levels.profile && levels.profile !== profile) warnings.push(...levels.profile.warnings.map((w) => `Without the scheme: ${w}`));
+  const impact = eventImpact(input, model, profile, levels, warnings);
+
+  const control: ControlResult = {
+    type: input.control.type,
+    head: structure.head,
+    depth: startDepth,
+    level: model.bedLevelAtControl + startDepth,
+    structureDepth: held.depth,
+    controls: held.controls,
+    causesBackwater: held.causesBackwater && !drowned,
+    explanation: drowned ? 'The structure is drowned by the level downstream and causes no backwater.' : held.explanation,
+    weir: structure.weir,
+  };
+  return {
+    name: event.name,
+    discharge,
+    baseDischarge: event.discharge,
+    climateChangeAllowance: event.climateChangeAllowance ?? null,
+    annualExceedanceProbability: event.annualExceedanceProbability ?? null,
+    returnPeriod: event.returnPeriod ?? null,
+    normalDepth: yn ?? 0,
+    normalDepthExists: yn !== null,
+    criticalDepth: yc,
+    bedSlope: model.bedSlope,
+    slopeClass,
+    profileType: profile.profileType,
+    control,
+    profile: profile.points,
+    stoppedBy: profile.stoppedBy,
+    refinement: profile.refinement,
+    selfCheck: profile.selfCheck,
+    withoutScheme: {
+      controlBy: without.by,
+      controlDepth: without.depth,
+      controlLevel: model.bedLevelAtControl + without.depth,
+      profileType: levels.profile?.profileType ?? profileType(slopeClass, without.depth, yn, yc),
+      profile: levels.points,
+    },
+    ...impact,
+    jump: profile.jump,
+    warnings,
+  };
+}

@@ -1,0 +1,46 @@
+// What the scheme does upstream in one event: afflux, extent of impact, inundation, the limits and the verdict.
+import type { CaseInput } from '@/lib/validation/case-schema';
+import type { ReachModel } from './case-reach';
+import type { EventResult } from './case-result';
+import type { AffluxPoint } from './impact/afflux';
+import { extentOfImpact } from './impact/extent-of-impact';
+import { checkLimits } from './impact/flood-limits';
+import { inundationComparison } from './impact/inundation';
+import type { GvfProfile } from './profiles/profile-point';
+import type { WithoutScheme } from './profiles/without-scheme';
+
+/** Afflux threshold for the extent of impact when the case gives none, m (common practice). */
+export const DEFAULT_IMPACT_THRESHOLD = 0.01;
+
+type Impact = Pick<EventResult, 'afflux' | 'extent' | 'inundation' | 'limits' | 'leastMargin' | 'verdict'>;
+
+export function eventImpact(input: CaseInput, model: ReachModel, profile: GvfProfile, levels: WithoutScheme, warnings: string[]): Impact {
+  // The without-scheme level is read at each with-scheme point; it is defined along the whole reach.
+  const afflux: AffluxPoint[] = profile.points.map((p) => ({ distanceUpstream: p.distanceUpstream, afflux: p.waterLevel - levels.levelAt(p.distanceUpstream) }));
+  const extent = extentOfImpact(afflux, input.impactThreshold ?? DEFAULT_IMPACT_THRESHOLD, profile.stoppedBy);
+  if (extent.warning) warnings.push(extent.warning);
+
+  let inundation: EventResult['inundation'] = null;
+  if (model.bankLevelAt) {
+    // Compared over the computed with-scheme profile; beyond it the levels with and without the scheme agree.
+    const withoutAtSamePoints = profile.points.map((p) => {
+      const waterLevel = levels.levelAt(p.distanceUpstream);
+      return { ...p, waterLevel, depth: waterLevel - p.bedLevel };
+    });
+    inundation = inundationComparison(profile.points, withoutAtSamePoints, model.bankLevelAt);
+    if (inundation.addedLength > 0) warnings.push(`The scheme floods ${inundation.addedLength.toFixed(1)} m more of the banks than without it.`);
+  } else {
+    warnings.push('No bank height or bank levels were given, so out-of-bank flooding was not checked.');
+  }
+
+  const limits = checkLimits(profile.points, levels.levelAt, input.limits, 'limits');
+  const leastMargin = limits.length === 0 ? null : Math.min(...limits.map((l) => l.margin));
+  return {
+    afflux: { atControl: afflux[0]?.afflux ?? 0, max: Math.max(0, ...afflux.map((a) => a.afflux)) },
+    extent,
+    inundation,
+    limits,
+    leastMargin,
+    verdict: limits.every((l) => l.pass) ? 'pass' : 'fail',
+  };
+}

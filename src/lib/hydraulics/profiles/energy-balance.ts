@@ -1,0 +1,85 @@
+// One standard step: the water level at the next section upstream from the energy balance between the two.
+import { criticalDepth } from '../critical-depth';
+import { DEEPEST_OPEN_DEPTH } from '../depth-brackets';
+import { EngineError } from '../errors';
+import type { FlowSection, SectionState } from '../section';
+import { brentRoot, expandBracketUpward } from '../solvers';
+import type { CubicMetresPerSecond, Metres } from '../units';
+import { GRAVITY } from '../units';
+import { type FrictionAveraging, meanFrictionSlope } from './friction-averaging';
+import type { ReachStation } from './reach-sections';
+
+export interface BalanceSettings {
+  discharge: CubicMetresPerSecond;
+  frictionAveraging: FrictionAveraging;
+  expansionCoefficient: number;
+  contractionCoefficient: number;
+}
+
+export type BalanceResult =
+  | { kind: 'level'; depth: Metres; criticalDepth: Metres }
+  | { kind: 'critical-depth'; criticalDepth: Metres }
+  | { kind: 'section-overtopped' };
+
+/** αV²/2g with V = Q/A (Chow, Open-Channel Hydraulics, 1959, §2-7 — from memory). */
+function velocityHead(state: SectionState, discharge: CubicMetresPerSecond): Metres {
+  return (state.energyCoefficient * discharge * discharge) / (2 * GRAVITY * state.area * state.area);
+}
+
+/**
+ * Residual of WS₂ + α₂V₂²/2g = WS₁ + α₁V₁²/2g + hf + he as a function of the upstream depth, where 1 is the
+ * known section downstream and 2 the one upstream (Chow, Open-Channel Hydraulics, 1959, §10-4, standard step
+ * method): hf = L·S̄f and he = C·|α₂V₂²/2g − α₁V₁²/2g|. Going downstream from 2 to 1, a falling velocity head
+ * (h_v1 < h_v2) is an expansion, a rising one a contraction (coefficients 0.3 and 0.1 by default for gradual
+ * transitions: common practice). Negative while the upstream level is too low, positive when too high.
+ */
+function balanceResidual(down: ReachStation, downDepth: Metres, up: ReachStation, settings: BalanceSettings): (depth: Metres) => number {
+  const { discharge } = settings;
+  const downState = down.section.stateAtDepth(downDepth);
+  const downHead = velocityHead(downState, discharge);
+  const downEnergy = down.bedLevel + downDepth + downHead;
+  const length = up.distanceUpstream - down.distanceUpstream;
+  return (depth) => {
+    const state = up.section.stateAtDepth(depth);
+    const upHead = velocityHead(state, discharge);
+    const friction = length * meanFrictionSlope(settings.frictionAveraging, discharge, downState.conveyance, state.conveyance);
+    const coefficient = downHead < upHead ? settings.expansionCoefficient : settings.contractionCoefficient;
+    return up.bedLevel + depth + upHead - downEnergy - friction - coefficient * Math.abs(upHead - downHead);
+  };
+}
+
+/** Critical depth per section and discharge, remembered: the stations of a prismatic reach share one section. */
+const criticalDepths = new WeakMap<FlowSection, Map<CubicMetresPerSecond, Metres | null>>();
+
+/** Null when critical depth lies above the top of the section. */
+function criticalDepthOf(section: FlowSection, discharge: CubicMetresPerSecond): Metres | null {
+  let known = criticalDepths.get(section);
+  if (known === undefined) criticalDepths.set(section, (known = new Map()));
+  if (!known.has(discharge)) {
+    try {
+      known.set(discharge, criticalDepth(section, discharge));
+    } catch (error) {
+      if (!(error instanceof EngineError && error.code === 'section-overtopped')) throw error;
+      known.set(discharge, null);
+    }
+  }
+  return known.get(discharge) ?? null;
+}
+
+/**
+ * The subcritical depth at `up` that balances the energy with `down`, searched by Brent's method on a bracket
+ * from critical depth upwards (never a bare fixed-point iteration). If even critical depth at `up` has too
+ * much energy, there is no subcritical level: the profile would have to pass through critical depth.
+ */
+export function upstreamDepth(down: ReachStation, downDepth: Metres, up: ReachStation, settings: BalanceSettings): BalanceResult {
+  const critical = criticalDepthOf(up.section, settings.discharge);
+  if (critical === null) return { kind: 'section-overtopped' };
+  const residual = balanceResidual(down, downDepth, up, settings);
+  if (residual(critical) >= 0) return { kind: 'critical-depth', criticalDepth: critical };
+  const top = Number.isFinite(up.section.maxDepth) ? up.section.maxDepth : DEEPEST_OPEN_DEPTH;
+  const guess = Math.min(Math.max(down.bedLevel + downDepth - up.bedLevel, critical) + Math.max(critical, 0.1), top);
+  const bracket = guess > critical ? expandBracketUpward(residual, critical, guess, { maxHi: top, field: 'profile' }) : null;
+  if (bracket === null) return { kind: 'section-overtopped' };
+  const depth = brentRoot(residual, bracket[0], bracket[1], { tolerance: 1e-11 * bracket[1], field: 'profile' });
+  return { kind: 'level', depth, criticalDepth: critical };
+}

@@ -1,0 +1,90 @@
+// A reach as a list of cross-sections by distance upstream of the control, filled in where too far apart.
+import { InvalidInputError, requireFinite, requirePositive } from '../errors';
+import type { FlowSection } from '../section';
+import { surveyedSection } from '../surveyed-section';
+import type { SurveyedSectionSpec } from '../surveyed-spec';
+import type { Metres, Slope } from '../units';
+import { interpolatedSurvey } from './survey-interpolation';
+
+export interface ReachStation {
+  distanceUpstream: Metres;
+  section: FlowSection;
+  /** Level of the section's lowest point: depth = water level − bedLevel (for a surveyed section, its invert level). */
+  bedLevel: Metres;
+  bankLevel?: Metres;
+  /** The survey the section was built from; lets sections be interpolated between this station and the next. */
+  survey?: SurveyedSectionSpec;
+}
+
+/** Stations at most `spacing` apart over a prismatic reach, all sharing one section; the bed rises upstream at bedSlope. */
+export function prismaticReach(input: {
+  section: FlowSection;
+  bedSlope: Slope;
+  bedLevelAtControl: Metres;
+  reachLength: Metres;
+  spacing: Metres;
+  bankHeight?: Metres;
+}): ReachStation[] {
+  requirePositive(input.reachLength, 'reach.length');
+  requirePositive(input.spacing, 'reach.spacing');
+  requireFinite(input.bedSlope, 'reach.bedSlope');
+  requireFinite(input.bedLevelAtControl, 'reach.bedLevel');
+  const steps = Math.ceil(input.reachLength / input.spacing - 1e-9);
+  const stations: ReachStation[] = [];
+  for (let i = 0; i <= steps; i++) {
+    const distanceUpstream = i === steps ? input.reachLength : (input.reachLength * i) / steps;
+    const bedLevel = input.bedLevelAtControl + input.bedSlope * distanceUpstream;
+    stations.push({ distanceUpstream, section: input.section, bedLevel, bankLevel: input.bankHeight === undefined ? undefined : bedLevel + input.bankHeight });
+  }
+  return stations;
+}
+
+/** Stations from surveys; the first must be the control section, at distance 0. */
+export function surveyedReach(sections: readonly { distanceUpstream: Metres; survey: SurveyedSectionSpec; bankLevel?: Metres }[], field = 'reach.sections'): ReachStation[] {
+  if (sections.length < 2) throw new InvalidInputError(field, 'needs at least two surveyed sections');
+  return sections.map((entry, i) => {
+    const at = `${field}.${i}`;
+    requireFinite(entry.distanceUpstream, `${at}.distanceUpstream`);
+    if (i === 0 && entry.distanceUpstream !== 0) throw new InvalidInputError(`${at}.distanceUpstream`, 'must be 0: the first section is the control section');
+    if (i > 0 && !(entry.distanceUpstream > sections[i - 1].distanceUpstream)) throw new InvalidInputError(`${at}.distanceUpstream`, 'must be greater than the distance of the section before it');
+    const section = surveyedSection(entry.survey, { field: `${at}.survey` });
+    return { distanceUpstream: entry.distanceUpstream, section, bedLevel: section.invertLevel, bankLevel: entry.bankLevel, survey: entry.survey };
+  });
+}
+
+/** Stations between which another can be put: one shared section, or surveys on both. */
+export function canInterpolate(a: ReachStation, b: ReachStation): boolean {
+  return a.section === b.section || (a.survey !== undefined && b.survey !== undefined);
+}
+
+/** The station a fraction `weight` of the way from `a` to `b`. */
+export function stationBetween(a: ReachStation, b: ReachStation, weight: number): ReachStation {
+  const distanceUpstream = a.distanceUpstream + weight * (b.distanceUpstream - a.distanceUpstream);
+  const bankLevel = a.bankLevel !== undefined && b.bankLevel !== undefined ? a.bankLevel + weight * (b.bankLevel - a.bankLevel) : undefined;
+  if (a.section === b.section) return { distanceUpstream, section: a.section, bedLevel: a.bedLevel + weight * (b.bedLevel - a.bedLevel), bankLevel };
+  if (a.survey === undefined || b.survey === undefined) throw new InvalidInputError('reach.sections', 'differing sections need surveys to be interpolated');
+  const survey = interpolatedSurvey(a.survey, b.survey, weight);
+  const section = surveyedSection(survey, { field: 'reach.sections' });
+  return { distanceUpstream, section, bedLevel: section.invertLevel, bankLevel, survey };
+}
+
+/**
+ * The reach with interpolated stations added wherever neighbours lie more than maxSpacing apart: the same
+ * section again between stations that share one, interpolated ground between surveyed ones. Stations that
+ * differ without surveys cannot be interpolated; they are left as they are and a warning says so.
+ */
+export function refinedReach(reach: readonly ReachStation[], maxSpacing: Metres): { stations: ReachStation[]; warnings: string[] } {
+  requirePositive(maxSpacing, 'maxSpacing');
+  const stations: ReachStation[] = [reach[0]];
+  const warnings: string[] = [];
+  for (let i = 1; i < reach.length; i++) {
+    const a = reach[i - 1];
+    const b = reach[i];
+    const pieces = Math.ceil((b.distanceUpstream - a.distanceUpstream) / maxSpacing - 1e-9);
+    const interpolable = canInterpolate(a, b);
+    if (pieces > 1 && !interpolable) warnings.push(`no sections interpolated between ${a.distanceUpstream} m and ${b.distanceUpstream} m: they carry no survey`);
+    if (interpolable) for (let k = 1; k < pieces; k++) stations.push(stationBetween(a, b, k / pieces));
+    stations.push(b);
+  }
+  return { stations, warnings };
+}

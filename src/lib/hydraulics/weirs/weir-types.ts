@@ -1,0 +1,103 @@
+import type { CubicMetresPerSecond, Metres, MetresPerSecond } from '../units';
+
+export type WeirKind = 'sharp-crested' | 'broad-crested' | 'ogee' | 'rating-table';
+
+export interface WeirSpec {
+  kind: WeirKind;
+  /** Crest length across the flow, m (gross length between abutments for an ogee). */
+  crestLength: Metres;
+  /** Height of the crest above the channel bed at the weir, m. */
+  sillHeight: Metres;
+  /** A coefficient given by the user replaces the published one (same form as the kind's own equation). */
+  coefficient?: number;
+  coefficientReason?: string;
+  /** Add the approach-velocity head to the measured head (default true). */
+  approachVelocity?: boolean;
+  /** Broad-crested: breadth of the crest in the flow direction, m. */
+  crestBreadth?: Metres;
+  noseShape?: 'square-edged' | 'round-nosed';
+  /** Sharp-crested: width of the approach channel, m; giving it selects Kindsvater–Carter. */
+  channelWidth?: Metres;
+  /** Ogee: design energy head, m; default the head at the governing discharge. */
+  designHead?: Metres;
+  piers?: { count: number; coefficient?: number };
+  abutmentCoefficient?: number;
+  /** Tailwater depth above the channel bed at the weir, m (same datum as the sill height). */
+  tailwaterLevel?: Metres;
+  /**
+   * Scales the coefficient (and so the discharge at a head) of whichever rating applies; for sensitivity
+   * studies. Default 1.
+   */
+  coefficientMultiplier?: number;
+  /** [head above the crest m, discharge m³/s] pairs, both strictly increasing. */
+  ratingTable?: [level: Metres, discharge: CubicMetresPerSecond][];
+}
+
+export interface ValidityCheck {
+  name: string;
+  value: number;
+  min?: number;
+  max?: number;
+  ok: boolean;
+}
+
+export interface SubmergenceState {
+  /** Tailwater height above the crest, m (0 when the tailwater is below the crest). */
+  tailwaterHead: Metres;
+  /** Tailwater head over upstream head, H₂/H₁. */
+  ratio: number;
+  /** Villemonte reduction factor Qs/Q. */
+  factor: number;
+}
+
+export interface WeirHeadResult {
+  /** Upstream water level above the crest, m. */
+  head: Metres;
+  /** Head plus the approach-velocity head, m. */
+  energyHead: Metres;
+  approachVelocity: MetresPerSecond;
+  coefficient: number;
+  coefficientSource: string;
+  coefficientIsDefault: boolean;
+  iterations: number;
+  submergence: SubmergenceState | null;
+  validity: ValidityCheck[];
+  warnings: string[];
+}
+
+export interface WeirOptions {
+  energyCoefficient?: number;
+  /** Field-path prefix for errors, default 'control'. */
+  field?: string;
+}
+
+/**
+ * One structure's free-flow rating, built once per spec. `discharge` takes the measured head h and
+ * the energy head H; each kind's published equation uses the one its coefficient was fitted to.
+ */
+export interface FreeFlowRating {
+  discharge(head: Metres, energyHead: Metres): CubicMetresPerSecond;
+  coefficient(head: Metres, energyHead: Metres): number;
+  validity(head: Metres, energyHead: Metres): ValidityCheck[];
+  /**
+   * True when the equation is written in the energy head: the solver then passes h + αV₀²/2g (or h when
+   * the case leaves out the approach velocity). False when the coefficient already carries the approach
+   * velocity (Rehbock, Kindsvater–Carter, a measured rating table): the solver passes h for both.
+   */
+  usesEnergyHead: boolean;
+  /** Smallest head the equation applies from (the first level of a rating table), m. */
+  headFloor?: Metres;
+  /** Largest head the equation may be solved up to (where it stops rising or its table ends), m. */
+  headLimit?: Metres;
+  coefficientSource: string;
+  coefficientIsDefault: boolean;
+  /** Notes about assumptions made while building the rating. */
+  notes: string[];
+}
+
+export function check(name: string, value: number, min?: number, max?: number): ValidityCheck {
+  // A ratio over a vanishing sill is unbounded; report the largest finite number rather than Infinity or NaN.
+  const reported = Number.isNaN(value) ? Number.MAX_VALUE : Math.max(-Number.MAX_VALUE, Math.min(Number.MAX_VALUE, value));
+  const ok = Number.isFinite(value) && (min === undefined || value >= min) && (max === undefined || value <= max);
+  return { name, value: reported, ...(min !== undefined ? { min } : {}), ...(max !== undefined ? { max } : {}), ok };
+}

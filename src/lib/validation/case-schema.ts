@@ -1,0 +1,92 @@
+import { z } from 'zod';
+import {
+  type CaseUnits,
+  depthControlSchema,
+  eventSchema,
+  finite,
+  missingOr,
+  nonNegative,
+  positive,
+  prismaticReachSchema,
+  surveyedReachSchema,
+  text,
+  UNIT_LABELS,
+  weirControlSchema,
+} from './case-schema-parts';
+
+// The Sillmark case file, version 1. Shared by the CLI, the API and the web forms, so every message
+// is written for a practitioner and carries its unit. Unknown keys are ignored.
+
+export const CASE_FORMAT = 'sillmark-case';
+export const CASE_VERSION = 1;
+
+export type { CaseUnits } from './case-schema-parts';
+
+function caseObject(units: CaseUnits) {
+  const u = UNIT_LABELS[units];
+  return z.object({
+    format: z.literal(CASE_FORMAT, { error: `must be "${CASE_FORMAT}"` }),
+    version: z.literal(CASE_VERSION, { error: `must be ${CASE_VERSION}` }),
+    title: z.string().max(300, { error: 'must be at most 300 characters' }).optional(),
+    units: z.literal(units),
+    reach: z.discriminatedUnion('kind', [prismaticReachSchema(u), surveyedReachSchema(u)], { error: missingOr('"prismatic" or "surveyed"') }),
+    events: z.array(eventSchema(u), { error: missingOr('a list of flood events') }).min(1, { error: 'must list at least one flood event' }),
+    control: z.discriminatedUnion('type', [depthControlSchema(u), weirControlSchema(u)], { error: missingOr('"depth" or "weir"') }),
+    existingControl: depthControlSchema(u).optional(),
+    profile: z
+      .object({
+        /** Default: direct-step for a prismatic reach, standard-step for a surveyed one. */
+        method: z.enum(['direct-step', 'standard-step'], { error: 'must be direct-step or standard-step' }).optional(),
+        normalDepthTolerance: positive().lt(0.5, { error: 'must be below 0.5 (a fraction of the normal depth)' }).default(0.01),
+        frictionSlopeAveraging: z.enum(['average-conveyance', 'arithmetic', 'geometric', 'harmonic'], { error: 'must be average-conveyance, arithmetic, geometric or harmonic' }).optional(),
+        expansionCoefficient: nonNegative().max(1, { error: 'must be at most 1' }).optional(),
+        contractionCoefficient: nonNegative().max(1, { error: 'must be at most 1' }).optional(),
+      })
+      .default({ normalDepthTolerance: 0.01 }),
+    impactThreshold: positive(u.length).optional(),
+    limits: z
+      .array(
+        z.object({
+          label: text('the place name'),
+          distanceUpstream: nonNegative(u.length),
+          maxLevel: finite(u.length),
+          freeboard: nonNegative(u.length).default(0),
+        }),
+      )
+      .default([]),
+    sizing: z
+      .object({
+        vary: z.enum(['sillHeight', 'crestLength'], { error: 'must be sillHeight or crestLength' }),
+        increment: positive(u.length).default(units === 'US' ? 0.05 : 0.01),
+        min: positive(u.length).optional(),
+        max: positive(u.length).optional(),
+      })
+      .superRefine((v, ctx) => {
+        if (v.min !== undefined && v.max !== undefined && v.max <= v.min) ctx.addIssue({ code: 'custom', path: ['max'], message: 'must be greater than sizing.min' });
+      })
+      .optional(),
+    sensitivity: z
+      .object({
+        manningN: nonNegative('%').lt(100, { error: 'must be below 100 %' }).default(20),
+        discharge: nonNegative('%').max(200, { error: 'must be at most 200 %' }).default(20),
+        coefficient: nonNegative('%').lt(100, { error: 'must be below 100 %' }).default(10),
+      })
+      .optional(),
+  });
+}
+
+function withDefaultUnits(raw: unknown): unknown {
+  if (raw !== null && typeof raw === 'object' && !Array.isArray(raw) && (raw as { units?: unknown }).units === undefined) return { ...raw, units: 'SI' };
+  return raw;
+}
+
+/** The whole case file; `units` defaults to SI. Use `parseCase` for issues with dotted field paths. */
+export const caseSchema = z.preprocess(
+  withDefaultUnits,
+  z.discriminatedUnion('units', [caseObject('SI'), caseObject('US')], { error: 'must be "SI" or "US"' }),
+);
+
+export type CaseInput = z.infer<typeof caseSchema>;
+export type CaseReach = CaseInput['reach'];
+export type CaseControl = CaseInput['control'];
+export type CaseEvent = CaseInput['events'][number];
