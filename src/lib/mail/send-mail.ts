@@ -1,37 +1,48 @@
 import 'server-only';
-import { randomUUID } from 'node:crypto';
-import { mkdir, writeFile } from 'node:fs/promises';
-import path from 'node:path';
-import nodemailer from 'nodemailer';
-import { OutboxMessage, database } from '@/lib/db';
-import { dataDirectory } from '@/lib/db/database-path';
+import nodemailer, { type Transporter } from 'nodemailer';
+import { LOCAL_SMTP_HOST, ensureLocalSmtpServer } from './local-smtp-server';
 
 export interface MailMessage {
   to: string;
   subject: string;
   text: string;
   attachments?: { filename: string; content: Buffer; contentType: string }[];
+  /** A Message-ID of our own (`<…@…>`), so a message can be found again in the outbox or at the provider. */
+  messageId?: string;
+  replyTo?: string;
 }
 
 export const MAIL_FROM = process.env.MAIL_FROM ?? 'Sillmark <no-reply@sillmark.invalid>';
 
+const cache = globalThis as unknown as { sillmarkMailTransport?: { key: string; transport: Transporter } };
+
+async function localPort(): Promise<number> {
+  try {
+    return (await ensureLocalSmtpServer()).port;
+  } catch (error) {
+    // SMTP_PORT is taken by another process: that is the app's own local server (e.g. a CLI run beside `npm start`).
+    if ((error as NodeJS.ErrnoException).code === 'EADDRINUSE' && process.env.SMTP_PORT) return Number(process.env.SMTP_PORT);
+    throw error;
+  }
+}
+
+async function transport(): Promise<Transporter> {
+  const url = process.env.SMTP_URL;
+  const key = url ?? `local:${await localPort()}`;
+  if (cache.sillmarkMailTransport?.key !== key) {
+    const created = url ? nodemailer.createTransport(url) : nodemailer.createTransport({ host: LOCAL_SMTP_HOST, port: Number(key.slice(6)), secure: false, ignoreTLS: true });
+    cache.sillmarkMailTransport?.transport.close();
+    cache.sillmarkMailTransport = { key, transport: created };
+  }
+  return cache.sillmarkMailTransport.transport;
+}
+
 /**
- * Sends through SMTP_URL when it is set; otherwise the message is written to the local outbox
- * (data directory + a row an admin can read), so nothing leaves the machine in development and demos.
+ * Sends over SMTP with nodemailer: to SMTP_URL when it is set, otherwise to the local fake SMTP server on loopback,
+ * which keeps every message in the outbox (admin → Mail outbox), so nothing leaves the machine in development and demos.
+ * Rejects when the server refuses the message; the error's message gives the server's reason.
  */
 export async function sendMail(message: MailMessage): Promise<{ messageId: string }> {
-  if (process.env.SMTP_URL) {
-    const info = await nodemailer.createTransport(process.env.SMTP_URL).sendMail({ from: MAIL_FROM, ...message });
-    return { messageId: info.messageId };
-  }
-  const info = await nodemailer.createTransport({ streamTransport: true, buffer: true, newline: 'unix' }).sendMail({ from: MAIL_FROM, ...message });
-  const raw = info.message as Buffer;
-  const id = randomUUID();
-  const folder = dataDirectory('outbox');
-  await mkdir(folder, { recursive: true });
-  const rawPath = path.join(folder, `${id}.eml`);
-  await writeFile(rawPath, raw);
-  database();
-  await OutboxMessage.create({ id, messageId: info.messageId, envelopeFrom: MAIL_FROM, envelopeTo: message.to, subject: message.subject, rawPath, sizeBytes: raw.length, receivedAt: new Date().toISOString() });
+  const info = await (await transport()).sendMail({ from: MAIL_FROM, ...message });
   return { messageId: info.messageId };
 }

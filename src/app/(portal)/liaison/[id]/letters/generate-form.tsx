@@ -1,0 +1,45 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { type GenerateLettersInput, generateLettersSchema } from '@/lib/validation/letter-schemas';
+import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
+import { generateLettersAction } from './actions';
+
+type RevisionOption = { id: string; number: number; status: string };
+
+/** Makes one letter per affected parcel from the chosen revision; a revision not countersigned gives PRELIMINARY letters. */
+export function GenerateForm({ schemeId, revisions }: { schemeId: string; revisions: RevisionOption[] }) {
+  const router = useRouter();
+  const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
+  const preferred = revisions.find((r) => r.status === 'countersigned') ?? revisions[0];
+  const { register, handleSubmit, watch, setError, formState } = useForm<GenerateLettersInput>({ resolver: zodResolver(generateLettersSchema), defaultValues: { schemeId, revisionId: preferred?.id ?? '' } });
+  const chosen = revisions.find((r) => r.id === watch('revisionId'));
+
+  const onSubmit = handleSubmit(async (values) => {
+    const result = await generateLettersAction(values);
+    if (result.ok) {
+      setMessage({ ok: true, text: `${result.data.letters} letter${result.data.letters === 1 ? '' : 's'} made${result.data.preliminary ? ' (PRELIMINARY)' : ''}, queued for sending below.` });
+      return router.refresh();
+    }
+    for (const issue of result.issues) setError(issue.path as keyof GenerateLettersInput, { message: issue.message });
+    setMessage({ ok: false, text: result.error });
+  });
+
+  if (revisions.length === 0) return <p className="text-sm text-ink-soft">The scheme has no revision yet, so there is nothing to write about.</p>;
+  return (
+    <form onSubmit={onSubmit} noValidate className="max-w-xl">
+      <h2 className="mb-3 text-lg font-semibold">Make letters</h2>
+      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-3 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}>{message.ok ? '✔ ' : '✖ '}{message.text}</p> : null}
+      <FormField id="letters-revision" label="From revision" hint="One letter for each parcel the impact table shows as affected, from the current parcels register and letter template." error={formState.errors.revisionId?.message}>
+        <select id="letters-revision" className={inputClassName} aria-describedby="letters-revision-hint" {...register('revisionId')}>
+          {revisions.map((r) => <option key={r.id} value={r.id}>Revision {r.number} ({r.status})</option>)}
+        </select>
+      </FormField>
+      {chosen && chosen.status !== 'countersigned' ? <p role="note" className="mb-4 border-l-4 border-verdict-caution bg-paper-deep px-3 py-2 text-sm"><span aria-hidden="true">⚠ </span>Revision {chosen.number} is not countersigned: its letters will be watermarked PRELIMINARY.</p> : null}
+      <button type="submit" className={buttonClassName} disabled={formState.isSubmitting}>{formState.isSubmitting ? 'Making letters…' : 'Make letters'}</button>
+    </form>
+  );
+}

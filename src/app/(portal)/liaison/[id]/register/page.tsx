@@ -1,0 +1,35 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { loadParcelRegister } from '@/lib/parcels/load-parcel-register';
+import { parcelInputOf } from '@/lib/parcels/parcel-record';
+import { EmptyState } from '@/components/ui/empty-state';
+import { orNotFound, requireLiaisonPage } from '../../_components/scheme-page-access';
+import { ParcelTable } from './parcel-table';
+import { RegisterForm } from './register-form';
+
+export const metadata: Metadata = { title: 'Parcels register' };
+
+export default async function RegisterPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ version?: string }> }) {
+  const { id } = await params;
+  const { version } = await searchParams;
+  const { user, access } = await requireLiaisonPage(id, `/liaison/${id}/register`);
+  const asked = version && /^\d{1,6}$/.test(version) ? Number(version) : undefined;
+  const loaded = await orNotFound(() => loadParcelRegister({ user, schemeId: id, version: asked }));
+  if (!loaded.register) {
+    return <EmptyState title="This scheme has no parcels register yet.">{access === 'manage' ? <Link className="text-accent underline" href={`/liaison/${id}/upload`}>Upload the parcels CSV</Link> : 'A landowner liaison officer uploads it.'}</EmptyState>;
+  }
+  const editable = access === 'manage' && loaded.register.isLatest;
+  return (
+    <>
+      <div className="mb-4 flex flex-wrap items-baseline justify-between gap-3">
+        <h2 className="text-lg font-semibold">
+          Version <span className="num">{loaded.register.version}</span>{loaded.register.isLatest ? ' (current)' : ' (earlier version, read only)'}
+          <span className="ml-2 text-sm font-normal text-ink-soft">{loaded.register.note} · <span className="num">{loaded.register.createdAt.replace('T', ' ').slice(0, 16)}</span> UTC</span>
+        </h2>
+        <Link className="text-sm text-accent underline" href={`/liaison/${id}/register/history`}>History of the register</Link>
+      </div>
+      <p className="mb-4 text-sm text-ink-soft">Distances are measured upstream from the structure along the river, in metres; ground levels in metres above the survey datum. Leave the ground level empty to judge flooding by the top of the bank.</p>
+      {editable ? <RegisterForm schemeId={id} baseRegisterId={loaded.register.id} parcels={loaded.parcels.map(parcelInputOf)} /> : <ParcelTable parcels={loaded.parcels} />}
+    </>
+  );
+}

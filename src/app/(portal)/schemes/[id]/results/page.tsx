@@ -1,0 +1,54 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { ANY_ROLE } from '@/lib/auth/authorize';
+import { requirePageRole } from '@/lib/auth/page-guard';
+import { NotFoundError } from '@/lib/http/app-errors';
+import { completedSteps, unitWords } from '@/lib/revisions/draft-inputs';
+import { evaluateDraft } from '@/lib/revisions/evaluate-draft';
+import { featuredEventIndex } from '@/lib/revisions/results-sheet';
+import { findSchemeRevision } from '@/lib/schemes/find-scheme-revision';
+import { isEditable } from '@/lib/schemes/scheme-access';
+import { WizardProgress } from '@/components/forms/wizard/wizard-progress';
+import { CautionNote } from '@/components/ui/caution-note';
+import { PageHeader } from '@/components/ui/page-header';
+import { StatusLabel } from '@/components/ui/status-label';
+import { IncompleteNotice } from './incomplete-notice';
+import { ResultsSheet } from './results-sheet';
+
+export const metadata: Metadata = { title: 'Results sheet' };
+
+export default async function ResultsPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ revision?: string; event?: string }> }) {
+  const { id } = await params;
+  const query = await searchParams;
+  const user = await requirePageRole(ANY_ROLE, `/schemes/${id}/results`);
+  const number = query.revision && /^\d+$/.test(query.revision) ? Number(query.revision) : null;
+  const { scheme, revision } = await findSchemeRevision({ schemeId: id, number, user }).catch((error: unknown) => (error instanceof NotFoundError ? notFound() : Promise.reject(error)));
+  const evaluation = await evaluateDraft({ revisionId: revision.id, user });
+  const editable = user.role === 'designer' && scheme.designerId === user.id && isEditable(revision);
+  const draft = evaluation.draft;
+  return (
+    <>
+      <PageHeader eyebrow={`Results sheet · ${scheme.reference} · revision ${revision.number}`} title={scheme.name}>
+        <span className="flex flex-wrap items-center gap-2"><StatusLabel status={revision.status} /> {scheme.watercourse} at {scheme.site} · <Link className="text-accent underline" href={`/schemes/${scheme.id}`}>scheme page and history</Link></span>
+      </PageHeader>
+      {editable ? <WizardProgress schemeId={scheme.id} current="results" completed={completedSteps(draft)} /> : null}
+      <CautionNote className="mb-8" />
+      {evaluation.status === 'incomplete' ? <IncompleteNotice schemeId={scheme.id} title="The draft is not complete yet, so there are no results." issues={evaluation.issues} editable={editable} /> : null}
+      {evaluation.status === 'unsolvable' ? <IncompleteNotice schemeId={scheme.id} title="The engine found no physical answer for these inputs." issues={evaluation.issues} editable={editable} /> : null}
+      {evaluation.status === 'evaluated' ? (
+        <ResultsSheet
+          scheme={{ id: scheme.id, reference: scheme.reference }}
+          revision={{ id: revision.id, number: revision.number }}
+          input={evaluation.input}
+          result={evaluation.result}
+          eventIndex={query.event && /^\d+$/.test(query.event) && Number(query.event) < evaluation.result.events.length ? Number(query.event) : featuredEventIndex(evaluation.result, draft.wizard?.governing)}
+          governing={draft.wizard?.governing ?? 'all'}
+          datum={draft.wizard?.datum ?? null}
+          units={unitWords(evaluation.input.units)}
+          editable={editable}
+        />
+      ) : null}
+    </>
+  );
+}

@@ -1,0 +1,42 @@
+'use client';
+
+import { useState } from 'react';
+import type { ProfilePoint } from '@/lib/hydraulics/profiles/profile-point';
+
+const PAGE = 20;
+
+type Column = { key: keyof ProfilePoint; label: string; digits: number };
+
+/** The with-scheme profile point by point, a page at a time, with the whole table as CSV. */
+export function StepTable({ rows, columns, csvHref, eventName }: { rows: ProfilePoint[]; columns: readonly Column[]; csvHref: string; eventName: string }) {
+  const [page, setPage] = useState(0);
+  const pages = Math.max(1, Math.ceil(rows.length / PAGE));
+  const shown = rows.slice(page * PAGE, page * PAGE + PAGE);
+  return (
+    <div>
+      <div className="overflow-x-auto">
+        <table className="w-full border-collapse text-sm">
+          <caption className="mb-2 text-left text-sm text-ink-soft">Step table of {eventName} with the scheme: rows {page * PAGE + 1}–{page * PAGE + shown.length} of {rows.length}.</caption>
+          <thead>
+            <tr className="border-b border-paper-edge text-ink-soft">
+              {columns.map((c) => <th key={c.key} scope="col" className="px-2 py-1 text-right font-semibold">{c.label}</th>)}
+            </tr>
+          </thead>
+          <tbody>
+            {shown.map((r, i) => (
+              <tr key={page * PAGE + i} className="border-b border-paper-edge">
+                {columns.map((c) => <td key={c.key} className="num px-2 py-1 text-right">{r[c.key].toFixed(c.digits)}</td>)}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <div className="mt-3 flex flex-wrap items-center gap-4 text-sm">
+        <button type="button" className="rounded border border-paper-edge px-3 py-1 disabled:opacity-50" disabled={page === 0} onClick={() => setPage(page - 1)}>← Previous rows</button>
+        <span className="num" aria-live="polite">Page {page + 1} of {pages}</span>
+        <button type="button" className="rounded border border-paper-edge px-3 py-1 disabled:opacity-50" disabled={page >= pages - 1} onClick={() => setPage(page + 1)}>Next rows →</button>
+        <a className="text-accent underline" href={csvHref} download>Download the whole step table (CSV)</a>
+      </div>
+    </div>
+  );
+}

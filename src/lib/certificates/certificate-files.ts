@@ -1,0 +1,27 @@
+import 'server-only';
+import { mkdir, readFile, rm, writeFile } from 'node:fs/promises';
+import path from 'node:path';
+import { dataDirectory } from '@/lib/db/database-path';
+
+// Certificates are stored by their id under the data directory, never under public/ and never by a user-given name.
+// The database keeps the path relative to the data directory, so a moved or restored data folder still works.
+
+export function certificateRelativePath(certificateId: string): string {
+  if (!/^[0-9a-f-]{36}$/.test(certificateId)) throw new Error('A certificate id is a UUID.');
+  return path.join('certificates', `${certificateId}.pdf`);
+}
+
+export async function writeCertificateFile(certificateId: string, pdf: Buffer): Promise<string> {
+  const relative = certificateRelativePath(certificateId);
+  await mkdir(dataDirectory('certificates'), { recursive: true });
+  await writeFile(dataDirectory(relative), pdf, { flag: 'wx' });
+  return relative;
+}
+
+export function readCertificateFile(relative: string): Promise<Buffer> {
+  return readFile(dataDirectory(relative));
+}
+
+export async function removeCertificateFile(relative: string): Promise<void> {
+  await rm(dataDirectory(relative), { force: true });
+}

@@ -1,0 +1,94 @@
+import 'server-only';
+import { createHash, randomUUID } from 'node:crypto';
+import type { Transaction } from 'sequelize';
+import type { SessionUser } from '@/lib/auth/current-session';
+import { Letter, Parcel, type Revision, type Scheme, User } from '@/lib/db';
+import { UnprocessableError } from '@/lib/http/app-errors';
+import { type ParcelImpactRow, impactForRevision } from '@/lib/parcels/compute-parcel-impact';
+import { isPreliminary } from '@/lib/parcels/select-revision';
+import { writeLetterPdf } from './letter-files';
+import type { LetterImpact } from './letter-impact';
+import { namedMethods } from './letter-methods';
+import { fillPlaceholders, loadLetterTemplate } from './letter-template';
+import { renderLetterPdf } from './render-letter-pdf';
+
+export interface PreparedLetter {
+  id: string;
+  parcelId: string;
+  reference: string;
+  version: number;
+  category: string;
+  impactJson: string;
+  pdfPath: string;
+  pdfSha256: string;
+  recipientEmail: string | null;
+  createdAt: string;
+}
+
+/** The latest letter version per parcel reference for a revision (a parcel keeps its reference across register versions; its row id changes). */
+export async function latestVersions(revisionId: string, transaction?: Transaction): Promise<Map<string, number>> {
+  const earlier = await Letter.findAll({ where: { revisionId }, attributes: ['parcelId', 'version'], transaction });
+  const parcels = new Map((await Parcel.findAll({ where: { id: earlier.map((l) => l.parcelId) }, attributes: ['id', 'reference'], transaction })).map((p) => [p.id, p.reference.toLowerCase()]));
+  const latest = new Map<string, number>();
+  for (const l of earlier) {
+    const ref = parcels.get(l.parcelId) ?? '';
+    latest.set(ref, Math.max(latest.get(ref) ?? 0, l.version));
+  }
+  return latest;
+}
+
+function letterImpact(row: ParcelImpactRow, revision: Revision, shared: Omit<LetterImpact, 'parcel' | 'category' | 'revision' | 'events' | 'governingEvent' | 'strip'>, discharges: Map<string, number>): LetterImpact {
+  const { parcel } = row;
+  return {
+    ...shared,
+    parcel: { reference: parcel.reference, distanceFromM: parcel.distanceFromM, distanceToM: parcel.distanceToM, bankSide: parcel.bankSide, groundLevelM: parcel.groundLevelM, landUse: parcel.landUse },
+    category: row.category,
+    revision: { id: revision.id, number: revision.number, status: revision.status },
+    events: row.events.map((e) => ({ ...e, dischargeM3s: discharges.get(e.event) ?? 0 })),
+    governingEvent: row.governingEvent,
+    strip: row.strip,
+  };
+}
+
+/**
+ * Everything a batch needs before it is recorded: the affected parcels' impact, and each letter's PDF rendered and
+ * written under the data directory. Outside any transaction, so rendering many letters never holds the write lock.
+ * `written` collects the files, for the caller to remove if recording fails.
+ */
+export async function prepareLetters({ user, scheme, revision, written }: { user: SessionUser; scheme: Scheme; revision: Revision; written: string[] }) {
+  const { register, results, rows } = await impactForRevision({ schemeId: scheme.id, revision });
+  if (!register) throw new UnprocessableError('This scheme has no parcels register yet; upload the parcels CSV first.');
+  const affected = rows.filter((r) => r.category === 'affected');
+  if (affected.length === 0) throw new UnprocessableError('No parcel is affected by this revision, so there are no letters to make.');
+  const template = await loadLetterTemplate(scheme.id);
+  const organisation = (await User.findByPk(user.id))?.organisation ?? 'Sillmark';
+  const shared = { impactThresholdM: results.impactThreshold, methods: namedMethods(results.caseInput), engineVersion: results.engineVersion };
+  const discharges = new Map(results.events.map((e) => [e.name, e.discharge]));
+  const versions = await latestVersions(revision.id);
+  const preliminary = isPreliminary(revision);
+  const letters: PreparedLetter[] = [];
+  for (const row of affected) {
+    const { parcel } = row;
+    const id = randomUUID();
+    const createdAt = new Date().toISOString();
+    const version = (versions.get(parcel.reference.toLowerCase()) ?? 0) + 1;
+    const impact = letterImpact(row, revision, shared, discharges);
+    const fill = (t: string) => fillPlaceholders(t, { owner_name: parcel.ownerName, parcel_reference: parcel.reference, scheme_name: scheme.name, watercourse: scheme.watercourse, site: scheme.site });
+    const p = template.paragraphs;
+    const pdf = await renderLetterPdf({
+      reference: `${scheme.reference}/${parcel.reference}/R${revision.number}-L${version}`,
+      version,
+      date: createdAt,
+      preliminary,
+      organisation,
+      recipient: { name: parcel.ownerName, address: parcel.postalAddress },
+      scheme: { name: scheme.name, reference: scheme.reference },
+      paragraphs: { introduction: fill(p.introduction), scheme: fill(p.scheme), response: fill(p.response), contact: fill(p.contact), signOff: fill(p.signOff) },
+      impact,
+    });
+    const pdfPath = await writeLetterPdf(id, pdf);
+    written.push(pdfPath);
+    letters.push({ id, parcelId: parcel.id, reference: parcel.reference, version, category: row.category, impactJson: JSON.stringify(impact), pdfPath, pdfSha256: createHash('sha256').update(pdf).digest('hex'), recipientEmail: parcel.email, createdAt });
+  }
+  return { register, template, preliminary, letters, versions };
+}

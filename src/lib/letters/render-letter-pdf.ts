@@ -1,0 +1,156 @@
+import 'server-only';
+import PDFDocument from 'pdfkit';
+import { discharge, distance, metres } from '@/lib/parcels/format-quantity';
+import { registerPdfFonts } from '@/lib/pdf/fonts';
+import type { LetterParagraphs } from '@/lib/validation/letter-schemas';
+import { drawLetterDiagram } from './draw-letter-diagram';
+import { cautionText, eventParagraph } from './letter-content';
+import type { LetterImpact } from './letter-impact';
+import { letterText } from './pdf-text';
+
+type Doc = InstanceType<typeof PDFDocument>;
+
+export interface LetterDocument {
+  reference: string;
+  version: number;
+  /** ISO timestamp the letter was made; also the PDF's creation date, so the same letter renders to the same bytes. */
+  date: string;
+  preliminary: boolean;
+  organisation: string;
+  recipient: { name: string; address: string };
+  scheme: { name: string; reference: string };
+  /** The template's paragraphs with the placeholders already filled in. */
+  paragraphs: LetterParagraphs;
+  impact: LetterImpact;
+}
+
+const INK = '#1f2a2e';
+const SOFT = '#4a5a60';
+const CAUTION = '#8a6212';
+const MARGIN = 56;
+const BANK_WORDS: Record<string, string> = { left: 'left bank', right: 'right bank', both: 'both banks' };
+
+function watermark(doc: Doc): void {
+  const { x, y } = doc;
+  doc.save().rotate(-40, { origin: [297, 421] }).font('sansSemiBold').fontSize(88).fillColor('#a33a2a').fillOpacity(0.12);
+  doc.text('PRELIMINARY', 0, 380, { width: 595, align: 'center', lineBreak: false });
+  doc.restore().fillOpacity(1);
+  doc.x = x;
+  doc.y = y;
+}
+
+function heading(doc: Doc, text: string): void {
+  doc.moveDown(0.8).font('sansSemiBold').fontSize(11.5).fillColor(INK).text(letterText(text));
+  doc.moveDown(0.2).font('sans').fontSize(10);
+}
+
+function paragraph(doc: Doc, text: string): void {
+  doc.font('sans').fontSize(10).fillColor(INK).text(letterText(text), { align: 'left', lineGap: 1.5 }).moveDown(0.5);
+}
+
+function eventTable(doc: Doc, impact: LetterImpact): void {
+  const widths = [118, 70, 95, 100, 100];
+  // Plex Sans figures are tabular already; the Plex Mono files fail in pdfkit's font engine on the space glyph.
+  const row = (cells: string[], font: 'sans' | 'sansSemiBold') => {
+    const y = doc.y;
+    let x = MARGIN;
+    cells.forEach((cell, i) => {
+      doc.font(font).fontSize(8.5).fillColor(INK).text(letterText(cell), x, y, { width: widths[i] - 6 });
+      x += widths[i];
+    });
+    doc.x = MARGIN;
+    doc.y = Math.max(doc.y, y + 12) + 2;
+  };
+  row(['Flood', 'River flow', 'Greatest rise', 'Under water without', 'Under water with'], 'sansSemiBold');
+  doc.save().lineWidth(0.5).strokeColor(SOFT).moveTo(MARGIN, doc.y - 1).lineTo(MARGIN + 483, doc.y - 1).stroke().restore();
+  for (const e of impact.events) {
+    const wet = (f: typeof e.withScheme) => (f ? (f.inundatedLength === 0 ? 'none' : `${distance(f.inundatedLength)}, ${metres(f.maxDepth)} deep`) : 'not known');
+    row([e.event, discharge(e.dischargeM3s), metres(e.maxAfflux), wet(e.withoutScheme), wet(e.withScheme)], 'sans');
+  }
+}
+
+function letterhead(doc: Doc, letter: LetterDocument): void {
+  doc.font('sansSemiBold').fontSize(14).fillColor(INK).text(letterText(letter.organisation), MARGIN, MARGIN, { width: 300 });
+  doc.font('sans').fontSize(9).fillColor(SOFT).text('Landowner liaison', { width: 300 });
+  const right = { width: 200, align: 'right' as const };
+  doc.font('sans').fontSize(9).fillColor(INK).text(`Our reference: ${letterText(letter.reference)}`, 339, MARGIN, right);
+  doc.text(`Date: ${new Date(letter.date).toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' })}`, right);
+  doc.text(`Scheme ${letterText(letter.scheme.reference)}, revision ${letter.impact.revision.number} (${letter.impact.revision.status})`, right);
+  doc.x = MARGIN;
+  doc.y = MARGIN + 70;
+  doc.font('sans').fontSize(10).text(letterText(letter.recipient.name));
+  for (const line of letter.recipient.address.split(/\n|;\s*/)) doc.text(letterText(line.trim()));
+}
+
+function cautionBox(doc: Doc, impact: LetterImpact): void {
+  doc.moveDown(0.6);
+  const text = `Caution. ${cautionText(impact)}`;
+  doc.font('sans').fontSize(9);
+  const height = doc.heightOfString(letterText(text), { width: 463 }) + 14;
+  if (doc.y + height > 842 - MARGIN - 20) doc.addPage();
+  const top = doc.y;
+  doc.save().rect(MARGIN, top, 483, height).fill('#f2eee4').restore();
+  doc.save().rect(MARGIN, top, 3, height).fill(CAUTION).restore();
+  doc.fillColor(INK).text(letterText(text), MARGIN + 12, top + 7, { width: 463 });
+  doc.x = MARGIN;
+  doc.y = top + height + 4;
+}
+
+function footers(doc: Doc, letter: LetterDocument): void {
+  const range = doc.bufferedPageRange();
+  for (let i = 0; i < range.count; i++) {
+    doc.switchToPage(range.start + i);
+    // The footer sits in the bottom margin; without this pdfkit would start a new page for it.
+    doc.page.margins.bottom = 0;
+    if (letter.preliminary) watermark(doc);
+    const footer = `Letter ${letter.reference}, version ${letter.version}${letter.preliminary ? ', PRELIMINARY' : ''}. Made by Sillmark from scheme revision ${letter.impact.revision.number}. Page ${i + 1} of ${range.count}.`;
+    doc.font('sans').fontSize(7.5).fillColor(SOFT).text(letterText(footer), MARGIN, 842 - MARGIN + 20, { width: 483, align: 'center', lineBreak: false });
+  }
+}
+
+function body(doc: Doc, letter: LetterDocument): void {
+  const { impact, paragraphs } = letter;
+  doc.moveDown(1.2).font('sansSemiBold').fontSize(13).fillColor(INK).text(letterText(`${letter.scheme.name}: what it would mean for your land`));
+  if (letter.preliminary) {
+    doc.font('sansSemiBold').fontSize(9.5).fillColor('#a33a2a').text('PRELIMINARY: these figures come from a design that has not yet been independently checked and countersigned. They may change.');
+  }
+  doc.moveDown(0.6);
+  paragraph(doc, `Dear ${letter.recipient.name},`);
+  paragraph(doc, paragraphs.introduction);
+  paragraph(doc, paragraphs.scheme);
+  heading(doc, 'What would change on your land');
+  const p = impact.parcel;
+  paragraph(doc, `Your land (${p.reference}${p.landUse ? `, ${p.landUse}` : ''}) lies along the ${BANK_WORDS[p.bankSide] ?? p.bankSide} of the river from ${distance(p.distanceFromM)} to ${distance(p.distanceToM)} upstream of the structure.`);
+  for (const e of impact.events) paragraph(doc, eventParagraph(e, impact));
+  eventTable(doc, impact);
+  if (impact.strip) {
+    if (doc.y + 215 > 842 - MARGIN) doc.addPage();
+    doc.moveDown(0.8).font('sansSemiBold').fontSize(9).fillColor(INK).text(letterText(`Diagram: river levels beside your land in the flood "${impact.strip.event}"`));
+    drawLetterDiagram(doc, impact.strip, { x: MARGIN, y: doc.y + 4, width: 483, height: 160 });
+    doc.x = MARGIN;
+    doc.y += 168;
+    doc.font('sansItalic').fontSize(8).fillColor(SOFT).text(letterText(`Distance upstream of the structure across, level above datum up. Your land is the shaded band from ${distance(impact.strip.from)} to ${distance(impact.strip.to)}.`));
+  }
+  cautionBox(doc, impact);
+  heading(doc, 'How to respond');
+  paragraph(doc, paragraphs.response);
+  paragraph(doc, paragraphs.contact);
+  paragraph(doc, 'Yours sincerely,');
+  paragraph(doc, paragraphs.signOff);
+}
+
+/** The letter as a PDF (A4, our fonts embedded), watermarked PRELIMINARY on every page when it comes from an unchecked revision. */
+export function renderLetterPdf(letter: LetterDocument): Promise<Buffer> {
+  const doc = new PDFDocument({ size: 'A4', margins: { top: MARGIN, bottom: MARGIN, left: MARGIN, right: MARGIN }, bufferPages: true, info: { Title: letterText(`${letter.scheme.name}: letter ${letter.reference}`), Author: letterText(letter.organisation), Subject: 'Extent-of-impact letter', Creator: 'Sillmark', CreationDate: new Date(letter.date) } });
+  registerPdfFonts(doc);
+  const chunks: Buffer[] = [];
+  doc.on('data', (chunk: Buffer) => chunks.push(chunk));
+  letterhead(doc, letter);
+  body(doc, letter);
+  footers(doc, letter);
+  return new Promise((resolve, reject) => {
+    doc.on('end', () => resolve(Buffer.concat(chunks)));
+    doc.on('error', reject);
+    doc.end();
+  });
+}

@@ -1,0 +1,31 @@
+import 'server-only';
+import { Op, type Transaction } from 'sequelize';
+import { Revision, database } from '@/lib/db';
+import { NotFoundError } from '@/lib/http/app-errors';
+
+/**
+ * The revision the liaison work reads: the one asked for (it must belong to the scheme), else the latest countersigned,
+ * else the latest draft-like one. Null when the scheme has no revision at all.
+ */
+export async function selectRevision({ schemeId, revisionId, transaction }: { schemeId: string; revisionId?: string | null; transaction?: Transaction }): Promise<Revision | null> {
+  database();
+  if (revisionId) {
+    const revision = await Revision.findOne({ where: { id: revisionId, schemeId }, transaction });
+    if (!revision) throw new NotFoundError('No such revision of this scheme.');
+    return revision;
+  }
+  const certified = await Revision.findOne({ where: { schemeId, status: 'countersigned' }, order: [['number', 'DESC']], transaction });
+  if (certified) return certified;
+  return Revision.findOne({ where: { schemeId, status: { [Op.ne]: 'withdrawn' } }, order: [['number', 'DESC']], transaction });
+}
+
+export async function listSchemeRevisions(schemeId: string) {
+  database();
+  const revisions = await Revision.findAll({ where: { schemeId }, order: [['number', 'DESC']], attributes: ['id', 'number', 'status'] });
+  return revisions.map((r) => ({ id: r.id, number: r.number, status: r.status }));
+}
+
+/** Letters from a revision that is not countersigned are watermarked PRELIMINARY. */
+export function isPreliminary(revision: Pick<Revision, 'status'>): boolean {
+  return revision.status !== 'countersigned';
+}

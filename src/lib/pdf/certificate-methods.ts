@@ -1,0 +1,51 @@
+import type { CaseResult } from '@/lib/hydraulics/case-result';
+import type { CaseInput } from '@/lib/validation/case-schema';
+import { fixed, lengthUnit } from './certificate-text';
+
+const CHOW = 'Chow, V. T. (1959) Open-Channel Hydraulics. McGraw-Hill, New York';
+
+/** The published methods the engine applied to this case, each with its source as the engine cites it. */
+export function certificateMethods(inputs: CaseInput, results: CaseResult): string[] {
+  const method = inputs.profile.method ?? (inputs.reach.kind === 'prismatic' ? 'direct-step' : 'standard-step');
+  const lines = [
+    'Uniform flow and friction slope: Manning\'s equation (Manning, R. (1891) On the flow of water in open channels and pipes. Transactions of the Institution of Civil Engineers of Ireland, 20).',
+    `Critical depth: minimum specific energy, Froude number 1 (${CHOW}, ch. 3).`,
+    `Classification of the water-surface profile by bed slope and depth (${CHOW}, ch. 9).`,
+    method === 'direct-step'
+      ? `Backwater profile: direct step method for a prismatic channel (${CHOW}, section 10-3).`
+      : `Backwater profile: standard step method between surveyed cross-sections (${CHOW}, section 10-4).`,
+  ];
+  const sources = new Set<string>();
+  for (const event of results.events) if (event.control.weir) sources.add(event.control.weir.coefficientSource);
+  for (const source of sources) lines.push(`Weir discharge coefficient: ${source}.`);
+  if (results.events.some((e) => e.control.weir?.submergence)) lines.push('Drowned (submerged) weir flow: Villemonte, J. R. (1947) Submerged-weir discharge studies. Engineering News-Record, 139.');
+  if (results.events.some((e) => e.jump)) lines.push(`Hydraulic jump: the sequent-depth (Belanger) equation (${CHOW}, ch. 15).`);
+  const selfCheck = results.events.find((e) => e.selfCheck)?.selfCheck;
+  if (selfCheck) lines.push(`Independent self-check of each profile: ${selfCheck.method}.`);
+  return lines;
+}
+
+/** What the result rests on, in words, from the frozen inputs. */
+export function certificateAssumptions(inputs: CaseInput, results: CaseResult): string[] {
+  const L = lengthUnit(results.units);
+  const reach = inputs.reach;
+  const lines = ['Steady, one-dimensional, gradually varied flow in a fixed-bed channel; each design flood is taken at its peak discharge.'];
+  if (reach.kind === 'prismatic') {
+    lines.push(`Prismatic ${reach.section.shape} channel, Manning's n ${reach.manningN}, bed slope ${reach.bedSlope} m/m, reach length ${reach.length} ${L}, bed level at the control ${reach.bedLevelAtControl} ${L}.`);
+    if (reach.bankHeight !== undefined) lines.push(`Bank level taken as ${reach.bankHeight} ${L} above the bed along the reach.`);
+  } else {
+    lines.push(`Surveyed reach of ${reach.sections.length} cross-sections up to ${reach.sections[reach.sections.length - 1].distanceUpstream} ${L} upstream of the control.`);
+  }
+  const without = results.events[0]?.withoutScheme.controlBy;
+  lines.push(without === 'existing-control' ? 'Without the scheme, the level at the control is the existing control depth given in the case.' : 'Without the scheme, the flow at the control is at normal depth.');
+  if (inputs.control.type === 'weir') {
+    const reason = inputs.control.coefficientReason ? ` (${inputs.control.coefficientReason})` : '';
+    lines.push(inputs.control.coefficient !== undefined ? `Weir coefficient ${inputs.control.coefficient} given by the designer${reason}.` : 'Weir coefficient from the published relation named under Methods.');
+  } else {
+    lines.push(`Control depth of ${inputs.control.depth} ${L} given by the designer.`);
+  }
+  lines.push(`A profile ends where the depth is within ${fixed(inputs.profile.normalDepthTolerance * 100, 1)} % of normal depth${inputs.impactThreshold !== undefined ? `; the impact ends where the afflux falls below ${inputs.impactThreshold} ${L}` : ''}.`);
+  const allowances = inputs.events.filter((e) => e.climateChangeAllowance).map((e) => `${e.name} +${e.climateChangeAllowance} %`);
+  if (allowances.length) lines.push(`Climate-change allowances on the design discharge: ${allowances.join(', ')}.`);
+  return lines;
+}

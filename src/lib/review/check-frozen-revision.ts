@@ -1,0 +1,58 @@
+import 'server-only';
+import type { CaseResult } from '@/lib/hydraulics/case-result';
+import { evaluateCase } from '@/lib/hydraulics/evaluate-case';
+import { ENGINE_VERSION } from '@/lib/hydraulics/version';
+import type { Revision } from '@/lib/db';
+import { frozenCaseFile, inputsSha256, resultsSha256, revisionSha256 } from '@/lib/revisions/revision-hashes';
+import { parseCase } from '@/lib/validation/parse-case';
+import { type FieldChange, resultChanges } from './revision-changes';
+
+export interface FrozenRevisionCheck {
+  inputsIntact: boolean;
+  resultsIntact: boolean;
+  revisionIntact: boolean;
+  rerun: { engineVersion: string; resultsSha256: string | null; matches: boolean; error: string | null; results: CaseResult | null };
+  /** Key results that differ between the stored results and the re-run, field by field. */
+  differences: FieldChange[];
+  /** Why countersigning is blocked, in words; empty when it may go ahead. */
+  blockers: string[];
+}
+
+function rerun(inputs: unknown): FrozenRevisionCheck['rerun'] {
+  const parsed = parseCase(inputs);
+  if (!parsed.ok) return { engineVersion: ENGINE_VERSION, resultsSha256: null, matches: false, error: `The frozen inputs no longer read as a case file: ${parsed.issues.map((i) => `${i.path} ${i.message}`).join('; ')}`, results: null };
+  try {
+    const results = evaluateCase(parsed.value);
+    return { engineVersion: ENGINE_VERSION, resultsSha256: resultsSha256(results), matches: false, error: null, results };
+  } catch (error) {
+    return { engineVersion: ENGINE_VERSION, resultsSha256: null, matches: false, error: `The engine could not evaluate the frozen inputs: ${error instanceof Error ? error.message : String(error)}`, results: null };
+  }
+}
+
+/**
+ * The checker's independent re-run: the frozen inputs evaluated again on the server by the engine, and the hashes of
+ * the stored inputs, results and revision recomputed. Any difference blocks countersigning and is explained.
+ */
+export function checkFrozenRevision(revision: Revision): FrozenRevisionCheck {
+  const inputs = frozenCaseFile(revision.inputsJson);
+  const stored = revision.resultsJson ? (JSON.parse(revision.resultsJson) as CaseResult) : null;
+  const inputsIntact = revision.inputsSha256 !== null && inputsSha256(inputs) === revision.inputsSha256;
+  const resultsIntact = stored !== null && revision.resultsSha256 !== null && resultsSha256(stored) === revision.resultsSha256;
+  const revisionIntact =
+    revision.revisionSha256 !== null &&
+    revision.revisionSha256 ===
+      revisionSha256({ schemeId: revision.schemeId, number: revision.number, authorId: revision.authorId, engineVersion: revision.engineVersion ?? '', inputsSha256: revision.inputsSha256 ?? '', resultsSha256: revision.resultsSha256 ?? '', submittedAt: revision.submittedAt ?? '' });
+  const again = rerun(inputs);
+  again.matches = again.resultsSha256 !== null && again.resultsSha256 === revision.resultsSha256;
+  const differences = stored && again.results ? resultChanges(stored, again.results) : [];
+  const blockers: string[] = [];
+  if (!inputsIntact) blockers.push('The inputs changed after submission: their SHA-256 no longer matches the one recorded when the revision was frozen.');
+  if (!resultsIntact) blockers.push('The stored results changed after submission: their SHA-256 no longer matches the one recorded when the revision was frozen.');
+  if (!revisionIntact) blockers.push('The frozen revision’s own SHA-256 does not match its recorded fields.');
+  if (again.error) blockers.push(again.error);
+  else if (!again.matches) {
+    const engine = revision.engineVersion !== ENGINE_VERSION ? ` The revision was computed by engine ${revision.engineVersion}; the server now runs ${ENGINE_VERSION}.` : '';
+    blockers.push(`The independent re-run does not reproduce the stored results (${differences.length} key result(s) differ).${engine}`);
+  }
+  return { inputsIntact, resultsIntact, revisionIntact, rerun: again, differences, blockers };
+}

@@ -1,0 +1,79 @@
+import 'server-only';
+import { Op } from 'sequelize';
+import { recordAuditEvent } from '@/lib/audit/record-audit-event';
+import type { SessionUser } from '@/lib/auth/current-session';
+import { verifyPassword } from '@/lib/auth/password';
+import { clearFailures, lockedForMs, recordFailure } from '@/lib/auth/sign-in-throttle';
+import { issueCertificate } from '@/lib/certificates/issue-certificate';
+import { removeCertificateFile } from '@/lib/certificates/certificate-files';
+import { Revision, User, database } from '@/lib/db';
+import { ConflictError, InvalidRequestError, NotFoundError, ThrottledError } from '@/lib/http/app-errors';
+import { signingIdentity } from '@/lib/signing/signing-identity';
+import type { CountersignInput } from '@/lib/validation/check-schemas';
+import { checkFrozenRevision } from './check-frozen-revision';
+import { notifyAfterCommit } from './notify';
+import { openReview, revisionForCheck } from './revision-for-check';
+
+// Wrong passwords here count with the sign-in failures of the same address, so the form cannot be used to guess one.
+async function confirmPassword(checker: SessionUser, password: string): Promise<User> {
+  const address = checker.email.toLowerCase();
+  const waitMs = lockedForMs(address);
+  if (waitMs > 0) throw new ThrottledError(`Too many wrong passwords. Try again in ${Math.ceil(waitMs / 60000)} minute(s).`);
+  const account = await User.findByPk(checker.id);
+  if (!account || !account.passwordHash || !(await verifyPassword(account.passwordHash, password))) {
+    recordFailure(address);
+    throw new InvalidRequestError([{ path: 'password', message: 'That is not your password. Countersigning needs the password you sign in with.' }], 'The password did not match.');
+  }
+  clearFailures(address);
+  return account;
+}
+
+/**
+ * The checker countersigns: password re-entered, four-eyes rule, frozen hashes intact, and an independent re-run of
+ * the frozen inputs that reproduces the stored results. Then, in one transaction: the review's decision, the
+ * revision's status, the signed certificate, the supersession of the scheme's earlier certificate and the audit events.
+ */
+export async function countersignRevision({ input, checker, baseUrl }: { input: CountersignInput; checker: SessionUser; baseUrl: string }) {
+  const sequelize = database();
+  const checkerAccount = await confirmPassword(checker, input.password);
+  const preview = await sequelize.transaction((transaction) => revisionForCheck(input.revisionId, checker, transaction));
+  const check = checkFrozenRevision(preview.revision);
+  if (check.blockers.length) throw new ConflictError(`Countersigning is blocked. ${check.blockers.join(' ')}`);
+  await signingIdentity();
+
+  let writtenFile: string | null = null;
+  try {
+    const issued = await sequelize.transaction(async (transaction) => {
+      const { revision, scheme } = await revisionForCheck(input.revisionId, checker, transaction);
+      // The re-run above read this revision; the same hashes must still be there when the decision is recorded.
+      if (revision.inputsSha256 !== preview.revision.inputsSha256 || revision.resultsSha256 !== preview.revision.resultsSha256) throw new ConflictError('The revision changed while it was being checked; open it again.');
+      const later = await Revision.count({ where: { schemeId: scheme.id, status: 'countersigned', number: { [Op.gt]: revision.number } }, transaction });
+      if (later > 0) throw new ConflictError(`A later revision of ${scheme.reference} is already certified; this one can no longer be.`);
+      const designer = await User.findByPk(revision.authorId, { transaction });
+      if (!designer) throw new NotFoundError('The designer of this revision no longer exists.');
+      const review = await openReview(revision, checker, transaction);
+      const issuedAt = new Date().toISOString();
+      await review.update({ decision: 'countersigned', decidedAt: issuedAt, rerunMatches: true, rerunResultsSha256: check.rerun.resultsSha256 }, { transaction });
+      await revision.update({ status: 'countersigned', countersignedAt: issuedAt, checkerId: checker.id, updatedAt: issuedAt }, { transaction });
+      await recordAuditEvent(
+        { actorId: checker.id, action: 'revision.countersigned', entityType: 'revision', entityId: revision.id, schemeId: scheme.id, details: { number: revision.number, reviewId: review.id, revisionSha256: revision.revisionSha256, rerunResultsSha256: check.rerun.resultsSha256, rerunEngineVersion: check.rerun.engineVersion } },
+        transaction,
+      );
+      const { certificate, superseded } = await issueCertificate({ revision, scheme, designer, checker: checkerAccount, issuedAt, baseUrl, transaction, onFileWritten: (file) => (writtenFile = file) });
+      return { revision, scheme, designer, certificate, superseded };
+    });
+    const { revision, scheme, designer, certificate } = issued;
+    const notified = await notifyAfterCommit([
+      {
+        to: designer.email,
+        subject: `Sillmark: certificate ${certificate.number} issued for ${scheme.reference} revision ${revision.number}`,
+        text: `Hello ${designer.name},\n\n${checker.name} has countersigned revision ${revision.number} of ${scheme.reference} ${scheme.name}. Certificate ${certificate.number} is issued${issued.superseded.length ? ` and supersedes ${issued.superseded.map((c) => c.number).join(', ')}` : ''}.\n\nThe revision and its certificate:\n${baseUrl}/revisions/${revision.id}\n`,
+      },
+    ]);
+    return { revisionId: revision.id, status: 'countersigned' as const, certificateId: certificate.id, certificateNumber: certificate.number, superseded: issued.superseded.map((c) => c.number), notified: notified.sent };
+  } catch (error) {
+    if (writtenFile) await removeCertificateFile(writtenFile);
+    throw error;
+  }
+}
+

@@ -1,0 +1,76 @@
+import type { ChannelStepValues, EditableStep, FlowsStepValues, LimitsStepValues, SchemeStepValues, StructureStepValues } from '@/lib/validation/scheme-schemas';
+import type { SurveySection } from '@/lib/validation/survey-csv';
+import type { DraftInputs, DraftReach, WizardNotes } from './draft-inputs';
+
+// How each wizard step's checked values land in the draft case file. Pure: the use cases store the result.
+
+export type StepValues =
+  | { step: 'scheme'; values: SchemeStepValues }
+  | { step: 'channel'; values: ChannelStepValues }
+  | { step: 'flows'; values: FlowsStepValues }
+  | { step: 'structure'; values: StructureStepValues }
+  | { step: 'limits'; values: LimitsStepValues };
+
+function withCompleted(wizard: WizardNotes | undefined, step: EditableStep): WizardNotes {
+  const completed = wizard?.completed ?? [];
+  return { ...wizard, completed: completed.includes(step) ? completed : [...completed, step] };
+}
+
+function defined<T extends object>(value: T): Partial<T> {
+  return Object.fromEntries(Object.entries(value).filter(([, v]) => v !== undefined)) as Partial<T>;
+}
+
+function siteIntoReach(reach: DraftReach | undefined, site: WizardNotes['site']): DraftReach | undefined {
+  if (reach?.kind === 'surveyed') return reach;
+  if (!reach && site?.bedLevelAtControl === undefined && site?.reachLength === undefined) return reach;
+  const { bedLevelAtControl: _b, length: _l, ...rest } = reach ?? { kind: 'prismatic' as const };
+  return { ...rest, kind: 'prismatic', ...defined({ bedLevelAtControl: site?.bedLevelAtControl, length: site?.reachLength }) };
+}
+
+function limitsIntoReach(reach: DraftReach | undefined, values: LimitsStepValues): DraftReach | undefined {
+  if (reach?.kind === 'surveyed') {
+    const levels = values.sectionBankLevels ?? [];
+    return { ...reach, sections: reach.sections.map(({ bankLevel: _old, ...s }, i) => ({ ...s, ...(levels[i] !== undefined && levels[i] !== null ? { bankLevel: levels[i] } : {}) })) };
+  }
+  const { bankHeight: _old, ...rest } = reach ?? { kind: 'prismatic' as const };
+  return { ...rest, kind: 'prismatic', ...(values.bankHeight !== undefined ? { bankHeight: values.bankHeight } : {}) };
+}
+
+export function applyWizardStep(draft: DraftInputs, input: StepValues): DraftInputs {
+  const wizard = withCompleted(draft.wizard, input.step);
+  switch (input.step) {
+    case 'scheme': {
+      const v = input.values;
+      const site = defined({ bedLevelAtControl: v.bedLevelAtControl, reachLength: v.reachLength });
+      return { ...draft, units: v.units, title: v.name, reach: siteIntoReach(draft.reach, site), wizard: { ...wizard, datum: v.datum, site } };
+    }
+    case 'channel': {
+      const previous = draft.reach?.kind === 'prismatic' ? draft.reach : undefined;
+      const { survey: _survey, ...notes } = wizard;
+      const reach: DraftReach = { kind: 'prismatic', ...defined(input.values), ...(previous?.bankHeight !== undefined ? { bankHeight: previous.bankHeight } : {}) };
+      return { ...draft, reach: siteIntoReach(reach, wizard.site), wizard: notes };
+    }
+    case 'flows':
+      return { ...draft, events: input.values.events, wizard: { ...wizard, governing: input.values.governing } };
+    case 'structure': {
+      const { existingControl: _old, ...rest } = draft;
+      return { ...rest, control: input.values.control, ...(input.values.existingControl ? { existingControl: input.values.existingControl } : {}), wizard };
+    }
+    case 'limits': {
+      const { sizing: _s, sensitivity: _t, impactThreshold: _i, ...rest } = draft;
+      const v = input.values;
+      return { ...rest, reach: limitsIntoReach(draft.reach, v), limits: v.limits, ...defined({ impactThreshold: v.impactThreshold, sizing: v.sizing, sensitivity: v.sensitivity }), wizard };
+    }
+  }
+}
+
+/** A checked survey replaces the reach; bank levels and the step's completion start again from the new sections. */
+export function applySurvey(draft: DraftInputs, sections: SurveySection[], survey: NonNullable<WizardNotes['survey']>): DraftInputs {
+  const energyCoefficient = draft.reach?.energyCoefficient;
+  const reach: DraftReach = {
+    kind: 'surveyed',
+    sections: sections.map(({ lines: _lines, ...s }) => s),
+    ...(energyCoefficient !== undefined ? { energyCoefficient } : {}),
+  };
+  return { ...draft, reach, wizard: { ...withCompleted(draft.wizard, 'channel'), survey } };
+}

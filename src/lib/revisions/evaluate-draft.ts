@@ -1,0 +1,49 @@
+import 'server-only';
+import { recordAuditEvent } from '@/lib/audit/record-audit-event';
+import type { SessionUser } from '@/lib/auth/current-session';
+import { Revision, database } from '@/lib/db';
+import type { CaseResult } from '@/lib/hydraulics/case-result';
+import { EngineError } from '@/lib/hydraulics/errors';
+import { evaluateCase } from '@/lib/hydraulics/evaluate-case';
+import { ENGINE_VERSION } from '@/lib/hydraulics/version';
+import { findReadableRevision, isEditable } from '@/lib/schemes/scheme-access';
+import type { CaseInput } from '@/lib/validation/case-schema';
+import { parseCase } from '@/lib/validation/parse-case';
+import { type DraftInputs, caseFileOf, decodeDraft } from './draft-inputs';
+import { type StepIssue, withSteps } from './step-of-field';
+
+export type DraftEvaluation =
+  | { status: 'incomplete'; draft: DraftInputs; issues: StepIssue[] }
+  | { status: 'unsolvable'; draft: DraftInputs; error: string; issues: StepIssue[] }
+  | { status: 'evaluated'; draft: DraftInputs; input: CaseInput; result: CaseResult };
+
+/** Checks the draft as a whole case and runs the engine, or reads the stored result when the inputs have not changed. */
+export async function evaluateDraft({ revisionId, user }: { revisionId: string; user: SessionUser }): Promise<DraftEvaluation & { revisionNumber: number; schemeId: string }> {
+  const sequelize = database();
+  const { scheme, revision } = await findReadableRevision(user, revisionId);
+  const where = { revisionNumber: revision.number, schemeId: scheme.id };
+  const draft = decodeDraft(revision.inputsJson);
+  const parsed = parseCase(caseFileOf(draft));
+  if (!parsed.ok) return { ...where, status: 'incomplete', draft, issues: withSteps(parsed.issues) };
+  if (revision.resultsJson && revision.engineVersion === ENGINE_VERSION) {
+    return { ...where, status: 'evaluated', draft, input: parsed.value, result: JSON.parse(revision.resultsJson) as CaseResult };
+  }
+  let result: CaseResult;
+  try {
+    result = evaluateCase(parsed.value);
+  } catch (error) {
+    if (!(error instanceof EngineError)) throw error;
+    return { ...where, status: 'unsolvable', draft, error: error.message, issues: withSteps([{ path: error.field, message: error.message }]) };
+  }
+  // Only the designer's open draft keeps its result; anyone else sees a fresh run of the same inputs.
+  if (user.role === 'designer' && scheme.designerId === user.id && isEditable(revision)) {
+    await sequelize.transaction(async (transaction) => {
+      // Two renders of the same page may evaluate at once; the first to commit keeps its result, the other stores nothing.
+      const current = await Revision.findByPk(revision.id, { transaction });
+      if (!current || current.resultsJson !== null || current.inputsJson !== revision.inputsJson) return;
+      await current.update({ resultsJson: JSON.stringify(result), engineVersion: result.engineVersion, updatedAt: new Date().toISOString() }, { transaction });
+      await recordAuditEvent({ actorId: user.id, action: 'revision.evaluated', entityType: 'revision', entityId: revision.id, schemeId: scheme.id, details: { number: revision.number, verdict: result.verdict, engineVersion: result.engineVersion } }, transaction);
+    });
+  }
+  return { ...where, status: 'evaluated', draft, input: parsed.value, result };
+}

@@ -1,0 +1,62 @@
+import 'server-only';
+import { AuditEvent, Revision, User, database } from '@/lib/db';
+
+export interface HistoryEntry {
+  at: string;
+  actor: string;
+  action: string;
+  /** Plain words for what happened, with the fields that changed. */
+  summary: string;
+}
+
+export interface RevisionHistory {
+  id: string;
+  number: number;
+  status: Revision['status'];
+  wizardStep: string | null;
+  author: string;
+  basedOnNumber: number | null;
+  createdAt: string;
+  updatedAt: string;
+  entries: HistoryEntry[];
+}
+
+const STEP_WORDS: Record<string, string> = { scheme: 'the scheme', channel: 'the channel', flows: 'the design flows', structure: 'the structure', limits: 'the thresholds and limits' };
+
+function summary(event: AuditEvent): string {
+  const d = JSON.parse(event.detailsJson) as { step?: string; changed?: string[]; origin?: string; verdict?: string; file?: string; field?: string; from?: number; to?: number; rowCount?: number };
+  switch (event.action) {
+    case 'revision.draft-created':
+      return `Draft started (${d.origin ?? 'new'})`;
+    case 'revision.step-saved':
+      return `Saved ${STEP_WORDS[d.step ?? ''] ?? d.step}: ${(d.changed ?? []).join(', ') || 'no change'}`;
+    case 'revision.survey-attached':
+      return `Surveyed cross-sections uploaded from ${d.file ?? 'a CSV file'} (${d.rowCount ?? '?'} points)`;
+    case 'revision.evaluated':
+      return `Evaluated: ${d.verdict ?? ''}`;
+    case 'revision.crest-adopted':
+      return `Adopted the sized crest: ${d.field} ${d.from} → ${d.to}`;
+    default:
+      return event.action;
+  }
+}
+
+/** Every revision of a scheme, newest first, each with who did what and when. */
+export async function listRevisionHistory(schemeId: string): Promise<RevisionHistory[]> {
+  database();
+  const revisions = await Revision.findAll({ where: { schemeId }, order: [['number', 'DESC']] });
+  const events = await AuditEvent.findAll({ where: { schemeId, entityType: 'revision' }, order: [['id', 'ASC']] });
+  const people = new Map((await User.findAll({ where: { id: [...new Set([...revisions.map((r) => r.authorId), ...events.map((e) => e.actorId ?? '')])] }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
+  const numbers = new Map(revisions.map((r) => [r.id, r.number]));
+  return revisions.map((r) => ({
+    id: r.id,
+    number: r.number,
+    status: r.status,
+    wizardStep: r.wizardStep,
+    author: people.get(r.authorId) ?? 'unknown',
+    basedOnNumber: r.basedOnRevisionId ? (numbers.get(r.basedOnRevisionId) ?? null) : null,
+    createdAt: r.createdAt,
+    updatedAt: r.updatedAt,
+    entries: events.filter((e) => e.entityId === r.id).map((e) => ({ at: e.at, actor: e.actorId ? (people.get(e.actorId) ?? 'unknown') : 'Sillmark', action: e.action, summary: summary(e) })),
+  }));
+}

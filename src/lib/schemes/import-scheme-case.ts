@@ -1,0 +1,61 @@
+import 'server-only';
+import { randomUUID } from 'node:crypto';
+import { z } from 'zod';
+import { recordAuditEvent } from '@/lib/audit/record-audit-event';
+import type { SessionUser } from '@/lib/auth/current-session';
+import { Scheme } from '@/lib/db';
+import { ForbiddenError, InvalidRequestError } from '@/lib/http/app-errors';
+import { createDraft } from '@/lib/revisions/create-draft';
+import type { DraftInputs } from '@/lib/revisions/draft-inputs';
+import { withStoredUpload } from '@/lib/uploads/store-upload';
+import { textOfUpload } from '@/lib/uploads/sniff-upload';
+import { parseCaseText } from '@/lib/validation/parse-case';
+import { EDITABLE_STEPS, governingSchema } from '@/lib/validation/scheme-schemas';
+import { nextSchemeReference } from './create-scheme';
+
+// The scheme block Sillmark writes beside the case when it exports one; optional, and ignored by the engine.
+const schemeBlockSchema = z
+  .object({
+    name: z.string().trim().min(1).max(200).optional(),
+    watercourse: z.string().trim().min(1).max(200).optional(),
+    site: z.string().trim().min(1).max(200).optional(),
+    description: z.string().trim().max(2000).optional(),
+    datum: z.string().trim().max(120).optional(),
+    governing: governingSchema.optional(),
+  })
+  .catch({});
+
+
+/** Starts a scheme from an uploaded case file: checked whole first, so a bad file stores nothing. */
+export async function importSchemeCase({ bytes, originalName, designer }: { bytes: Buffer; originalName: string; designer: SessionUser }) {
+  if (designer.role !== 'designer') throw new ForbiddenError('Only designers create schemes.');
+  const text = textOfUpload(bytes, 'a Sillmark case file (JSON)');
+  const parsed = parseCaseText(text);
+  if (!parsed.ok) throw new InvalidRequestError(parsed.issues, 'The case file has problems; nothing was stored.');
+  const raw = JSON.parse(text) as { scheme?: unknown };
+  const block = schemeBlockSchema.parse(raw.scheme ?? {});
+  const value = parsed.value;
+  const name = block.name ?? value.title?.slice(0, 200) ?? originalName.replace(/\.json$/i, '');
+  const reach = value.reach;
+  const inputs: DraftInputs = {
+    ...value,
+    title: name,
+    wizard: {
+      datum: block.datum,
+      site: reach.kind === 'prismatic' ? { bedLevelAtControl: reach.bedLevelAtControl, reachLength: reach.length } : {},
+      governing: block.governing !== undefined && (block.governing === 'all' || block.governing < value.events.length) ? block.governing : 'all',
+      completed: [...EDITABLE_STEPS],
+    },
+  };
+  const schemeId = randomUUID();
+  return withStoredUpload(bytes, { kind: 'case-json', originalName, mediaType: 'application/json', schemeId, uploadedBy: designer.id }, async (transaction, record) => {
+    const scheme = await Scheme.create(
+      { id: schemeId, reference: await nextSchemeReference(transaction), name, watercourse: block.watercourse ?? '(watercourse not given)', site: block.site ?? '(site not given)', description: block.description || null, designerId: designer.id },
+      { transaction },
+    );
+    const upload = await record();
+    await recordAuditEvent({ actorId: designer.id, action: 'scheme.imported', entityType: 'scheme', entityId: scheme.id, schemeId, details: { reference: scheme.reference, uploadId: upload.id, file: originalName, sha256: upload.sha256 } }, transaction);
+    const revision = await createDraft({ schemeId, authorId: designer.id, inputs, wizardStep: 'results', basedOn: null, origin: `imported case file ${originalName}`, transaction });
+    return { schemeId, reference: scheme.reference, revisionId: revision.id, revisionNumber: revision.number };
+  });
+}

@@ -1,0 +1,15 @@
+import type { UploadKind } from '@/lib/db/models/upload';
+
+// Largest file accepted for each kind. A surveyed reach of a few hundred sections is well under 1 MB of CSV.
+export const UPLOAD_LIMIT_BYTES: Record<UploadKind, number> = {
+  'survey-csv': 2 * 1024 * 1024,
+  'parcels-csv': 2 * 1024 * 1024,
+  'case-json': 1024 * 1024,
+  'certificate-pdf': 10 * 1024 * 1024,
+};
+
+export function describeBytes(bytes: number): string {
+  if (bytes >= 1024 * 1024) return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+  if (bytes >= 1024) return `${Math.ceil(bytes / 1024)} KB`;
+  return `${bytes} bytes`;
+}
