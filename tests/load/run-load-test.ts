@@ -9,7 +9,8 @@ import { startApp } from '../e2e/support/app-server';
 
 const CONNECTIONS = 50;
 const DURATION_S = Number(process.env.LOAD_DURATION_S ?? 20);
-const MAX_REQUESTS = 500_000;
+// autocannon ignores `duration` when `amount` is set, so the count is capped per connection instead.
+const MAX_REQUESTS_PER_CONNECTION = 20_000;
 
 async function designerCookie(databasePath: string): Promise<string> {
   process.env.DATABASE_PATH = databasePath;
@@ -20,14 +21,16 @@ async function designerCookie(databasePath: string): Promise<string> {
 }
 
 function run(name: string, options: autocannon.Options) {
+  console.log(`▶ ${name}: ${CONNECTIONS} connections for ${DURATION_S} s`);
   return new Promise<{ name: string; result: autocannon.Result }>((resolve, reject) => {
-    autocannon({ ...options, connections: CONNECTIONS, duration: DURATION_S, amount: MAX_REQUESTS }, (error, result) => (error ? reject(error) : resolve({ name, result })));
+    autocannon({ ...options, connections: CONNECTIONS, duration: DURATION_S, maxConnectionRequests: MAX_REQUESTS_PER_CONNECTION }, (error, result) => (error ? reject(error) : resolve({ name, result })));
   });
 }
 
 const app = await startApp();
 try {
   const cookie = await designerCookie(app.databasePath);
+  console.log(`Serving ${app.baseUrl}; signed in as the demo designer.`);
   const demoCase = readFileSync('db/seeds/cases/wendle-harrowfield-broad-crested.json', 'utf8');
   const runs = [
     await run('GET /api/schemes', { url: `${app.baseUrl}/api/schemes`, headers: { cookie } }),

@@ -11,9 +11,10 @@ import { findReadableScheme } from './scheme-access';
  */
 export async function exportCaseFile({ schemeId, revisionNumber, user }: { schemeId: string; revisionNumber: number | null; user: SessionUser }) {
   const scheme = await findReadableScheme(user, schemeId);
+  const certifiedOnly = user.role === 'planning' ? { status: 'countersigned' as const } : {};
   const revision = revisionNumber === null
-    ? await Revision.findOne({ where: { schemeId }, order: [['number', 'DESC']] })
-    : await Revision.findOne({ where: { schemeId, number: revisionNumber } });
+    ? await Revision.findOne({ where: { schemeId, ...certifiedOnly }, order: [['number', 'DESC']] })
+    : await Revision.findOne({ where: { schemeId, number: revisionNumber, ...certifiedOnly } });
   if (!revision) throw new NotFoundError(`Scheme ${scheme.reference} has no revision ${revisionNumber ?? ''}.`.replace(' .', '.'));
   const draft = decodeDraft(revision.inputsJson);
   const caseFile = {

@@ -25,7 +25,8 @@ export async function findReadableScheme(user: SessionUser, schemeId: string, tr
 export async function findReadableRevision(user: SessionUser, revisionId: string, transaction?: Transaction): Promise<{ scheme: Scheme; revision: Revision }> {
   database();
   const revision = await Revision.findByPk(revisionId, { transaction });
-  if (!revision) throw new NotFoundError('There is no such revision, or it is not yours to see.');
+  // A planning officer reads certified work only: a later draft of a certified scheme stays hidden, as on the pages.
+  if (!revision || (user.role === 'planning' && revision.status !== 'countersigned')) throw new NotFoundError('There is no such revision, or it is not yours to see.');
   const scheme = await findReadableScheme(user, revision.schemeId, transaction).catch((error: unknown) => {
     throw error instanceof NotFoundError ? new NotFoundError('There is no such revision, or it is not yours to see.') : error;
   });

@@ -23,14 +23,21 @@ function isRecord(raw: unknown): raw is Record<string, unknown> {
   return raw !== null && typeof raw === 'object' && !Array.isArray(raw);
 }
 
+/** What a header field holds, briefly: a nested or huge value is not echoed back (nor JSON.stringify'd to a stack overflow). */
+function found(value: unknown): string {
+  if (value === null || typeof value === 'number' || typeof value === 'boolean') return String(value);
+  if (typeof value === 'string') return JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value);
+  return Array.isArray(value) ? 'a list' : 'an object';
+}
+
 /** A different file or a different version is told apart first, so its owner gets one clear message, not a list. */
 function headerIssues(raw: unknown): CaseIssue[] {
   if (!isRecord(raw)) return [{ path: 'case', message: 'must be a JSON object: a Sillmark case starts with { "format": "sillmark-case", "version": 1, … }' }];
   if (raw.format === undefined) return [{ path: 'format', message: `is required: a Sillmark case file says "format": "${CASE_FORMAT}"` }];
-  if (raw.format !== CASE_FORMAT) return [{ path: 'format', message: `must be "${CASE_FORMAT}" (found ${JSON.stringify(raw.format)}): this is not a Sillmark case file` }];
+  if (raw.format !== CASE_FORMAT) return [{ path: 'format', message: `must be "${CASE_FORMAT}" (found ${found(raw.format)}): this is not a Sillmark case file` }];
   if (raw.version === undefined) return [{ path: 'version', message: `is required (this Sillmark reads version ${CASE_VERSION})` }];
   if (raw.version !== CASE_VERSION) {
-    return [{ path: 'version', message: `${JSON.stringify(raw.version)} is not supported: this Sillmark reads version ${CASE_VERSION} case files` }];
+    return [{ path: 'version', message: `${found(raw.version)} is not supported: this Sillmark reads version ${CASE_VERSION} case files` }];
   }
   return [];
 }

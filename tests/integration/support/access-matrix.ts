@@ -49,3 +49,61 @@ export const ACTION_ACCESS: Record<string, Record<string, Access>> = {
   '(portal)/liaison/[id]/letters': { generateLettersAction: ['liaison'] },
   '(portal)/liaison/[id]/letters/[letterId]': { logLetterResponseAction: ['liaison'] },
 };
+
+/**
+ * Whose record a route or action acts on, so that the ownership test can call it as someone of an allowed role
+ * who does not own it. Every entry of ROUTE_ACCESS and ACTION_ACCESS needs one (access-ownership.test.ts):
+ * - 'none': acts on no one record (sign-in, lists filtered by the caller, creating, public files);
+ * - 'shared': the role's common work with no single owner (any admin, any liaison officer);
+ * - 'scheme-reader': one scheme or revision: a designer of other schemes, or a planning officer before it is certified, gets 404;
+ * - 'scheme-designer': the scheme's own designer edits it: any other designer gets 404;
+ * - 'parcels-reader': a scheme's owner details: designers and checkers not on that scheme get 404;
+ * - 'certificate-reader': a certificate: a designer of other schemes gets 404;
+ * - 'assigned-checker': a submitted revision: a checker other than the one assigned gets 403.
+ */
+export type Ownership = 'none' | 'shared' | 'scheme-reader' | 'scheme-designer' | 'parcels-reader' | 'certificate-reader' | 'assigned-checker';
+
+export const ROUTE_OWNERSHIP: Record<string, Partial<Record<'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE', Ownership>>> = {
+  'api/health': { GET: 'none' },
+  'api/session': { GET: 'none' },
+  'api/schemes': { GET: 'none', POST: 'none' },
+  'api/schemes/import': { POST: 'none' },
+  'api/schemes/[id]': { GET: 'scheme-reader' },
+  'api/schemes/[id]/case-file': { GET: 'scheme-reader' },
+  'api/schemes/[id]/step-table': { GET: 'scheme-reader' },
+  'api/schemes/[id]/calculation-sheet': { GET: 'scheme-reader' },
+  'api/revisions/[id]': { GET: 'scheme-reader', PUT: 'scheme-designer' },
+  'api/evaluate': { POST: 'scheme-reader' },
+  'api/head-preview': { POST: 'scheme-designer' },
+  'api/uploads/survey': { POST: 'scheme-designer' },
+  'api/uploads/survey-preview': { POST: 'scheme-designer' },
+  'api/admin/users': { GET: 'shared', POST: 'shared' },
+  'api/admin/users/[id]': { PATCH: 'shared' },
+  'api/certificates': { GET: 'none' },
+  'api/certificates/[id]/pdf': { GET: 'certificate-reader' },
+  'api/certificates/verification': { POST: 'none' },
+  'api/signing-certificate': { GET: 'none' },
+  'api/parcels/[id]': { GET: 'parcels-reader' },
+  'api/parcels/[id]/csv': { POST: 'shared' },
+  'api/parcels/[id]/csv-preview': { POST: 'shared' },
+  'api/parcels/[id]/impact': { GET: 'parcels-reader' },
+  'api/letters/[id]': { GET: 'parcels-reader' },
+  'api/letters/batches/[id]': { GET: 'parcels-reader' },
+  'api/letters/batches/[id]/send': { POST: 'shared' },
+};
+
+export const ACTION_OWNERSHIP: Record<string, Record<string, Ownership>> = {
+  '(auth)/sign-in': { signInAction: 'none' },
+  '(auth)/invitation/[token]': { acceptInvitationAction: 'none' },
+  '(portal)': { signOutAction: 'none' },
+  '(portal)/admin/users': { inviteUserAction: 'shared', changeRoleAction: 'shared' },
+  '(portal)/revisions/[id]': { submitForCheckAction: 'scheme-designer' },
+  '(portal)/checks/[id]': { addReviewCommentAction: 'assigned-checker', returnRevisionAction: 'assigned-checker', countersignRevisionAction: 'assigned-checker' },
+  '(portal)/admin/certificates': { revokeCertificateAction: 'shared' },
+  '(portal)/schemes/new': { createSchemeAction: 'none' },
+  '(portal)/schemes/[id]': { startDraftAction: 'scheme-designer', adoptSizedCrestAction: 'scheme-designer' },
+  '(portal)/liaison/[id]/register': { saveParcelEditsAction: 'shared' },
+  '(portal)/liaison/[id]/template': { saveLetterTemplateAction: 'shared' },
+  '(portal)/liaison/[id]/letters': { generateLettersAction: 'shared' },
+  '(portal)/liaison/[id]/letters/[letterId]': { logLetterResponseAction: 'shared' },
+};
