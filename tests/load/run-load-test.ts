@@ -31,7 +31,9 @@ const app = await startApp();
 try {
   const cookie = await designerCookie(app.databasePath);
   console.log(`Serving ${app.baseUrl}; signed in as the demo designer.`);
-  const demoCase = readFileSync('db/seeds/cases/wendle-harrowfield-broad-crested.json', 'utf8');
+  // The Harrowfield demo case (two events, with and without the scheme), without crest sizing: one design check.
+  const { sizing: _sizing, ...oneCheck } = JSON.parse(readFileSync('db/seeds/cases/wendle-harrowfield-broad-crested.json', 'utf8'));
+  const demoCase = JSON.stringify(oneCheck);
   const runs = [
     await run('GET /api/schemes', { url: `${app.baseUrl}/api/schemes`, headers: { cookie } }),
     await run('POST /api/evaluate', { url: `${app.baseUrl}/api/evaluate`, method: 'POST', headers: { cookie, 'content-type': 'application/json', origin: app.baseUrl }, body: demoCase }),

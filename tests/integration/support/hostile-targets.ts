@@ -26,7 +26,7 @@ const saveStep = (step: string, values: unknown): JsonBodyTarget => ({ role: 'de
 
 /** Route handlers whose body is JSON, keyed "METHOD route". One key may have several targets (each wizard step). */
 export const JSON_BODY_TARGETS: Record<string, JsonBodyTarget[]> = {
-  'POST api/evaluate': [{ role: 'designer', valid: (w) => json({ revisionId: w.draft.revisionId }) }],
+  'POST api/evaluate': [{ role: 'designer', valid: (w) => json({ revisionId: w.draft.revisionId }) }, { role: 'planning', valid: () => json(demoCase('wendle-harrowfield-depth-control.json')) }],
   'POST api/head-preview': [{ role: 'designer', valid: (w) => json({ revisionId: w.draft.revisionId, control: STRUCTURE_STEP.control }) }],
   'POST api/schemes': [{ role: 'designer', valid: () => json(SCHEME_STEP) }],
   'PUT api/revisions/[id]': [saveStep('scheme', SCHEME_STEP), saveStep('channel', CHANNEL_STEP), saveStep('flows', FLOWS_STEP), saveStep('structure', STRUCTURE_STEP), saveStep('limits', LIMITS_STEP)],

@@ -1,12 +1,30 @@
+import { z } from 'zod';
 import { ANY_ROLE } from '@/lib/auth/authorize';
+import { evaluateCase } from '@/lib/hydraulics/evaluate-case';
+import { InvalidRequestError } from '@/lib/http/app-errors';
 import { authorizedRoute } from '@/lib/http/authorized-route';
 import { readJsonBody } from '@/lib/http/read-json-body';
+import { fieldIssuesFromZod } from '@/lib/http/zod-issues';
 import { evaluateDraft } from '@/lib/revisions/evaluate-draft';
+import { parseCase } from '@/lib/validation/parse-case';
 import { evaluateRequestSchema } from '@/lib/validation/scheme-schemas';
 
-/** POST { revisionId }: the engine's result for the revision, or the steps still to complete (422) with field paths. */
+const objectBody = z.record(z.string(), z.unknown(), { error: 'The request body must be a JSON object: a case file, or { "revisionId": … }.' });
+
+/**
+ * POST a case file (`"format": "sillmark-case"`): the engine's result, as `npm run evaluate` prints it.
+ * POST { revisionId }: the result for a stored draft, or the steps still to complete (422) with field paths.
+ */
 export const POST = authorizedRoute(ANY_ROLE, async (request, user) => {
-  const { revisionId } = await readJsonBody(request, evaluateRequestSchema);
+  const body = await readJsonBody(request, objectBody);
+  if ('format' in body) {
+    const parsed = parseCase(body);
+    if (!parsed.ok) throw new InvalidRequestError(parsed.issues);
+    return Response.json({ status: 'evaluated', result: evaluateCase(parsed.value) });
+  }
+  const draftRequest = evaluateRequestSchema.safeParse(body);
+  if (!draftRequest.success) throw new InvalidRequestError(fieldIssuesFromZod(draftRequest.error));
+  const { revisionId } = draftRequest.data;
   const evaluation = await evaluateDraft({ revisionId, user });
   if (evaluation.status === 'evaluated') return Response.json({ status: 'evaluated', input: evaluation.input, result: evaluation.result });
   const error = evaluation.status === 'incomplete' ? 'The draft is not complete yet.' : evaluation.error;
