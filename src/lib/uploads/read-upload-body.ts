@@ -1,5 +1,6 @@
 import 'server-only';
 import { AppError } from '@/lib/http/app-errors';
+import { readBoundedBody } from '@/lib/http/read-bounded-body';
 import { describeBytes } from './upload-limits';
 
 function tooLarge(what: string, size: number | null, limit: number): AppError {
@@ -7,28 +8,9 @@ function tooLarge(what: string, size: number | null, limit: number): AppError {
   return new AppError(`The file is ${found}; ${what} may be at most ${describeBytes(limit)}. Nothing was stored.`, 413);
 }
 
-/**
- * The raw request body, refused with 413 as soon as it passes the limit: a declared Content-Length over the
- * limit is refused before reading, and a body without one is counted while it streams, never buffered whole.
- */
-export async function readUploadBody(request: Request, limit: number, what: string): Promise<Buffer> {
-  const declared = Number(request.headers.get('content-length') ?? 'NaN');
-  if (Number.isFinite(declared) && declared > limit) throw tooLarge(what, declared, limit);
-  if (!request.body) return Buffer.alloc(0);
-  const reader = request.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let total = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    total += value.byteLength;
-    if (total > limit) {
-      await reader.cancel().catch(() => undefined);
-      throw tooLarge(what, null, limit);
-    }
-    chunks.push(value);
-  }
-  return Buffer.concat(chunks);
+/** The raw upload, refused with 413 (naming the limit) as soon as it passes it; see readBoundedBody. */
+export function readUploadBody(request: Request, limit: number, what: string): Promise<Buffer> {
+  return readBoundedBody(request, limit, (declared) => tooLarge(what, declared, limit));
 }
 
 /** The file's own name, from the X-File-Name header (URI-encoded); kept as a label only, never used as a path. */
