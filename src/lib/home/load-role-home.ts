@@ -8,18 +8,20 @@ export interface HomeItem {
   title: string;
   detail: string;
   status: string;
+  /** Where the item's work is done, if it has a page of its own. */
+  href?: string;
 }
 
 export interface RoleHome {
   sections: { heading: string; empty: string; items: HomeItem[] }[];
 }
 
-async function revisionItems(where: WhereOptions<Revision>, excludeAuthor?: string): Promise<HomeItem[]> {
+async function revisionItems(where: WhereOptions<Revision>, excludeAuthor?: string, hrefOf: (revisionId: string, schemeId: string) => string = (id) => `/revisions/${id}`): Promise<HomeItem[]> {
   const revisions = await Revision.findAll({ where: excludeAuthor ? { [Op.and]: [where, { authorId: { [Op.ne]: excludeAuthor } }] } : where, order: [['updatedAt', 'DESC']], limit: 20 });
   const schemes = new Map((await Scheme.findAll({ where: { id: revisions.map((r) => r.schemeId) } })).map((s) => [s.id, s]));
   return revisions.map((r) => {
     const scheme = schemes.get(r.schemeId);
-    return { id: r.id, title: `${scheme?.reference ?? ''} ${scheme?.name ?? 'Scheme'} — revision ${r.number}`, detail: `${scheme?.watercourse ?? ''} at ${scheme?.site ?? ''}`, status: r.status };
+    return { id: r.id, title: `${scheme?.reference ?? ''} ${scheme?.name ?? 'Scheme'} — revision ${r.number}`, detail: `${scheme?.watercourse ?? ''} at ${scheme?.site ?? ''}`, status: r.status, href: hrefOf(r.id, r.schemeId) };
   });
 }
 
@@ -31,25 +33,25 @@ export async function loadRoleHome(user: SessionUser): Promise<RoleHome> {
       const mine = (await Scheme.findAll({ where: { designerId: user.id }, attributes: ['id'] })).map((s) => s.id);
       return {
         sections: [
-          { heading: 'Drafts and returned revisions', empty: 'No drafts. Start a scheme from the Schemes page.', items: await revisionItems({ schemeId: mine, status: ['draft', 'returned'] }) },
+          { heading: 'Drafts and returned revisions', empty: 'No drafts. Start a scheme from the Schemes page.', items: await revisionItems({ schemeId: mine, status: ['draft', 'returned'] }, undefined, (_id, schemeId) => `/schemes/${schemeId}`) },
           { heading: 'Waiting for check', empty: 'Nothing is with a checker.', items: await revisionItems({ schemeId: mine, status: 'submitted' }) },
         ],
       };
     }
     case 'checker':
-      return { sections: [{ heading: 'Checks to do', empty: 'No revision is waiting for your check.', items: await revisionItems({ status: 'submitted', [Op.or]: [{ checkerId: user.id }, { checkerId: null }] }, user.id) }] };
+      return { sections: [{ heading: 'Checks to do', empty: 'No revision is waiting for your check.', items: await revisionItems({ status: 'submitted', [Op.or]: [{ checkerId: user.id }, { checkerId: null }] }, user.id, (id) => `/checks/${id}`) }] };
     case 'liaison': {
       const queued = await Letter.count({ where: { status: ['queued', 'failed'] } });
       return {
         sections: [
-          { heading: 'Certified revisions with landowners to inform', empty: 'No certified revision yet.', items: await revisionItems({ status: 'countersigned' }) },
+          { heading: 'Certified revisions with landowners to inform', empty: 'No certified revision yet.', items: await revisionItems({ status: 'countersigned' }, undefined, (_id, schemeId) => `/liaison/${schemeId}`) },
           { heading: 'Letters to send', empty: 'No letter is waiting to be sent.', items: queued ? [{ id: 'queued', title: `${queued} letter(s) queued or failed`, detail: 'Open the scheme’s letters to send them.', status: 'queued' }] : [] },
         ],
       };
     }
     case 'planning': {
       const certificates = await Certificate.findAll({ order: [['issuedAt', 'DESC']], limit: 20 });
-      return { sections: [{ heading: 'Certificates to download', empty: 'No certificate has been issued yet.', items: certificates.map((c) => ({ id: c.id, title: c.number, detail: `Issued ${c.issuedAt.slice(0, 10)}`, status: c.status })) }] };
+      return { sections: [{ heading: 'Certificates to download', empty: 'No certificate has been issued yet.', items: certificates.map((c) => ({ id: c.id, title: c.number, detail: `Issued ${c.issuedAt.slice(0, 10)}`, status: c.status, href: `/api/certificates/${c.id}/pdf` })) }] };
     }
     case 'admin': {
       const invitations = await Invitation.findAll({ where: { acceptedAt: null }, order: [['createdAt', 'DESC']], limit: 20 });

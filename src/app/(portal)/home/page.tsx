@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import Link from 'next/link';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusLabel } from '@/components/ui/status-label';
@@ -28,7 +29,7 @@ export default async function HomePage() {
                 {section.items.map((item) => (
                   <li key={item.id} className="flex items-start justify-between gap-3 px-4 py-3">
                     <div>
-                      <p className="font-semibold">{item.title}</p>
+                      <p className="font-semibold">{item.href ? <Link className="text-accent underline hover:text-accent-strong" href={item.href}>{item.title}</Link> : item.title}</p>
                       <p className="text-sm text-ink-soft">{item.detail}</p>
                     </div>
                     <StatusLabel status={item.status} />
