@@ -1,5 +1,5 @@
 import 'server-only';
-import { mkdir, readFile, rm, writeFile } from 'node:fs/promises';
+import { mkdir, readFile, readdir, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { dataDirectory } from '@/lib/db/database-path';
 
@@ -24,4 +24,10 @@ export function readCertificateFile(relative: string): Promise<Buffer> {
 
 export async function removeCertificateFile(relative: string): Promise<void> {
   await rm(dataDirectory(relative), { force: true });
+}
+
+/** The stored certificate files, as paths relative to the data directory. */
+export async function listCertificateFiles(): Promise<string[]> {
+  const names = await readdir(dataDirectory('certificates')).catch(() => [] as string[]);
+  return names.filter((name) => name.endsWith('.pdf')).map((name) => path.join('certificates', name));
 }

@@ -12,7 +12,7 @@ import { utcDateTime } from '@/lib/pdf/certificate-text';
 import { frozenCaseFile, sha256Hex } from '@/lib/revisions/revision-hashes';
 import { signPdf } from '@/lib/signing/sign-pdf';
 import { parseCase } from '@/lib/validation/parse-case';
-import { writeCertificateFile } from './certificate-files';
+import { listCertificateFiles, removeCertificateFile, writeCertificateFile } from './certificate-files';
 import { nextCertificateNumber } from './certificate-number';
 import { certificateVerificationUrl, signingCertificateUrl } from './certificate-urls';
 
@@ -47,12 +47,25 @@ function content(o: IssueCertificateOptions, number: string): CertificateContent
 }
 
 /**
+ * Removes signed PDFs that no certificate row records: a server killed between writing the file and committing leaves
+ * one behind, bearing the number the next certificate will reuse. Run under the write lock of the issuing transaction,
+ * where no other issue can be half-done, so every unrecorded file is such a leftover.
+ */
+async function removeUnrecordedFiles(transaction: Transaction): Promise<void> {
+  const files = await listCertificateFiles();
+  if (files.length === 0) return;
+  const recorded = new Set((await Certificate.findAll({ where: { pdfPath: files }, attributes: ['pdfPath'], transaction })).map((c) => c.pdfPath));
+  await Promise.all(files.filter((f) => !recorded.has(f)).map(removeCertificateFile));
+}
+
+/**
  * Makes, signs and stores the certificate of a countersigned revision, inside the countersigning transaction, and
  * supersedes the scheme's certificate issued before it. Only called for a frozen, countersigned revision.
  */
 export async function issueCertificate(o: IssueCertificateOptions): Promise<{ certificate: Certificate; superseded: Certificate[] }> {
   const { revision, scheme, transaction } = o;
   const id = randomUUID();
+  await removeUnrecordedFiles(transaction);
   const number = await nextCertificateNumber(o.issuedAt, transaction);
   const pdf = await renderCertificatePdf(content(o, number));
   const { signed, signerFingerprint } = await signPdf({ pdf, reason: `Sillmark certificate ${number}: independent check of ${scheme.reference} revision ${revision.number}`, location: `${scheme.watercourse} at ${scheme.site}`, contactInfo: certificateVerificationUrl(o.baseUrl, number) });

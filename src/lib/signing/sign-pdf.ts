@@ -1,7 +1,7 @@
 import 'server-only';
 import { plainAddPlaceholder } from '@signpdf/placeholder-plain';
 import { P12Signer } from '@signpdf/signer-p12';
-import signpdf from '@signpdf/signpdf';
+import { SignPdf } from '@signpdf/signpdf';
 import { signingIdentity } from './signing-identity';
 
 export interface SignPdfOptions {
@@ -19,6 +19,7 @@ const SIGNATURE_LENGTH = 8192;
 export async function signPdf({ pdf, reason, location, contactInfo }: SignPdfOptions): Promise<{ signed: Buffer; signerFingerprint: string }> {
   const identity = await signingIdentity();
   const prepared = plainAddPlaceholder({ pdfBuffer: pdf, reason, location, contactInfo, name: identity.subjectName, signatureLength: SIGNATURE_LENGTH, appName: 'Sillmark' });
-  const signed = await signpdf.sign(prepared, new P12Signer(identity.p12, { passphrase: identity.passphrase }));
+  // The named class, not the default instance: under plain Node ESM (tsx, the CLI) the default import is the whole CommonJS exports object.
+  const signed = await new SignPdf().sign(prepared, new P12Signer(identity.p12, { passphrase: identity.passphrase }));
   return { signed, signerFingerprint: identity.fingerprint };
 }
