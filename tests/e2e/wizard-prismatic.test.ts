@@ -4,7 +4,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_USERS } from '../../db/seeds/demo-users';
 import { startApp, type RunningApp } from './support/app-server';
 import { launchBrowser, signInAs } from './support/browser';
-import { axeViolations, canvasInk, fillByLabel, previewNumbers } from './support/wizard-helpers';
+import { accessibilityViolations } from './support/accessibility';
+import { canvasInk, fillByLabel, previewNumbers } from './support/wizard-helpers';
 
 const designer = DEMO_USERS.find((u) => u.role === 'designer')!;
 const SCHEME = 'Wendle Meadows footbridge weir';
@@ -109,7 +110,7 @@ describe('a designer creates a prismatic scheme with the wizard, leaves, comes b
     const second = await previewNumbers(page);
     expect(parseFloat(second.depth)).toBeGreaterThan(parseFloat(first.depth));
     await page.screenshot({ path: 'tests/.artifacts/wizard-prismatic-structure.png', fullPage: true });
-    expect(await axeViolations(page)).toEqual([]);
+    expect(await accessibilityViolations(page)).toEqual([]);
     await save(page);
     await page.waitForURL(/\/wizard\/limits$/);
 
@@ -135,7 +136,7 @@ describe('a designer creates a prismatic scheme with the wizard, leaves, comes b
     expect(chart.inked / chart.total).toBeGreaterThan(0.02);
     expect(chart.colours).toBeGreaterThan(4);
     await page.screenshot({ path: 'tests/.artifacts/wizard-prismatic-results.png', fullPage: true });
-    expect(await axeViolations(page)).toEqual([]);
+    expect(await accessibilityViolations(page)).toEqual([]);
 
     const adopt = page.getByRole('button', { name: /^Adopt .* as the sill height$/ });
     const sized = (await adopt.textContent())!.match(/Adopt ([\d.]+) m/)![1];

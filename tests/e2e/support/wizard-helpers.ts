@@ -30,12 +30,3 @@ export async function previewNumbers(page: Page): Promise<{ head: string; depth:
   return { head: (await head.textContent()) ?? '', depth: (await page.getByTestId('preview-control-depth').first().textContent()) ?? '' };
 }
 
-/** axe-core's violations on the page as it stands ("impact rule: how many nodes"). */
-export async function axeViolations(page: Page): Promise<string[]> {
-  const { readFileSync } = await import('node:fs');
-  await page.addScriptTag({ content: readFileSync('node_modules/axe-core/axe.min.js', 'utf8') });
-  return page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: () => Promise<{ violations: { id: string; impact: string; nodes: unknown[] }[] }> } }).axe;
-    return (await axe.run()).violations.map((v) => `${v.impact} ${v.id}: ${v.nodes.length}`);
-  });
-}
