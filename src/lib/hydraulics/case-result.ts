@@ -1,4 +1,5 @@
 // The result of evaluating a case file. Distances are measured upstream from the control section.
+import type { LimitCheck } from './impact/flood-limits';
 import type { InundationComparison } from './impact/inundation';
 import type { CrestSizingResult } from './design/crest-sizing';
 import type { SensitivityReport } from './design/sensitivity';
@@ -50,18 +51,8 @@ export interface WithoutSchemeResult {
   profile: ProfilePoint[];
 }
 
-export interface LimitResult {
-  label: string;
-  distanceUpstream: Metres;
-  maxLevel: Metres;
-  freeboard: Metres;
-  waterLevel: Metres;
-  withoutSchemeLevel: Metres;
-  afflux: Metres;
-  margin: Metres;
-  pass: boolean;
-  source: 'profile' | 'beyond-profile';
-}
+/** One flood-level limit as the case result reports it (see impact/flood-limits.ts). */
+export type LimitResult = LimitCheck;
 
 export interface EventResult {
   name: string;

@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import type { FlowSection, SectionState } from '@/lib/hydraulics/section';
+import type { FlowSection } from '@/lib/hydraulics/section';
 import { directStepProfile } from '@/lib/hydraulics/profiles/direct-step';
 import { prismaticReach } from '@/lib/hydraulics/profiles/reach-sections';
 import { standardStepProfile } from '@/lib/hydraulics/profiles/standard-step';
+import { wideIdealChannel } from './profile-reference-solutions';
 
 const G = 9.80665;
 
@@ -12,26 +13,7 @@ const G = 9.80665;
  * This is the channel for which Bresse (1860) integrated the GVF equation in closed form.
  */
 function wideChezyChannel(width: number, chezyC: number): FlowSection {
-  return {
-    shape: 'rectangular',
-    invertLevel: 0,
-    maxDepth: Infinity,
-    stateAtDepth(depth: number): SectionState {
-      const area = width * depth;
-      return {
-        depth,
-        area,
-        wettedPerimeter: width,
-        topWidth: width,
-        hydraulicRadius: depth,
-        hydraulicDepth: depth,
-        firstMoment: (width * depth * depth) / 2,
-        conveyance: chezyC * area * Math.sqrt(depth),
-        energyCoefficient: 1,
-        overtopped: false,
-      };
-    },
-  };
+  return wideIdealChannel(width, (area, depth) => chezyC * area * Math.sqrt(depth));
 }
 
 /**

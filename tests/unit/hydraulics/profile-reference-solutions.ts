@@ -1,5 +1,6 @@
 // Reference solutions for the profile tests, written independently of the engine: closed-form trapezoid
 // geometry, Manning friction, an adaptive Simpson quadrature and the odex ODE integrator from npm.
+import type { FlowSection, SectionState } from '@/lib/hydraulics/section';
 import { Solver } from '@/lib/hydraulics/profiles/odex-solver';
 
 const G = 9.80665;
@@ -105,4 +106,17 @@ export function odexAlongDistance(c: TrapezoidCase, controlDepth: number, distan
     previousDepth = y[0];
   });
   return { depths, distanceToTarget };
+}
+
+/** Test double of FlowSection: a wide rectangular channel idealised with R = y, its resistance law given as K(A, y). */
+export function wideIdealChannel(width: number, conveyanceOf: (area: number, depth: number) => number): FlowSection {
+  return {
+    shape: 'rectangular',
+    invertLevel: 0,
+    maxDepth: Infinity,
+    stateAtDepth(depth: number): SectionState {
+      const area = width * depth;
+      return { depth, area, wettedPerimeter: width, topWidth: width, hydraulicRadius: depth, hydraulicDepth: depth, firstMoment: (width * depth * depth) / 2, conveyance: conveyanceOf(area, depth), energyCoefficient: 1, overtopped: false };
+    },
+  };
 }

@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import type { FlowSection, SectionState } from '@/lib/hydraulics/section';
+import type { FlowSection } from '@/lib/hydraulics/section';
 import { directStepProfile } from '@/lib/hydraulics/profiles/direct-step';
 import { prismaticReach } from '@/lib/hydraulics/profiles/reach-sections';
 import { standardStepProfile } from '@/lib/hydraulics/profiles/standard-step';
-import { adaptiveSimpson } from './profile-reference-solutions';
+import { adaptiveSimpson, wideIdealChannel } from './profile-reference-solutions';
 
 const G = 9.80665;
 
@@ -13,26 +13,7 @@ const G = 9.80665;
  * (hydraulic exponents as defined in Chow, Open-Channel Hydraulics, 1959, chs. 4 and 6 — from memory).
  */
 function wideManningChannel(width: number, manningN: number): FlowSection {
-  return {
-    shape: 'rectangular',
-    invertLevel: 0,
-    maxDepth: Infinity,
-    stateAtDepth(depth: number): SectionState {
-      const area = width * depth;
-      return {
-        depth,
-        area,
-        wettedPerimeter: width,
-        topWidth: width,
-        hydraulicRadius: depth,
-        hydraulicDepth: depth,
-        firstMoment: (width * depth * depth) / 2,
-        conveyance: (area * Math.pow(depth, 2 / 3)) / manningN,
-        energyCoefficient: 1,
-        overtopped: false,
-      };
-    },
-  };
+  return wideIdealChannel(width, (area, depth) => (area * Math.pow(depth, 2 / 3)) / manningN);
 }
 
 /** Difference of the varied-flow function F(u, N) = ∫₀ᵘ du/(1 − uᴺ) between two points on one side of u = 1, by quadrature. */
