@@ -4,6 +4,6 @@ import { runStep } from './run-step.mjs';
 
 ensureSystemPackages();
 runStep('Typecheck (tsc)', 'npx', ['tsc', '--noEmit', '-p', 'tsconfig.json']);
-runStep('Unit and integration tests (vitest)', 'npx', ['vitest', 'run', '--project', 'unit', '--project', 'integration']);
-runStep('End-to-end tests in Chromium (vitest + playwright-core)', 'npx', ['vitest', 'run', '--project', 'e2e']);
+runStep('Unit and integration tests (vitest)', 'npx', ['vitest', 'run', '--config', 'tests/vitest.config.ts', '--project', 'unit', '--project', 'integration']);
+runStep('End-to-end tests in Chromium (vitest + playwright-core)', 'npx', ['vitest', 'run', '--config', 'tests/vitest.config.ts', '--project', 'e2e']);
 console.log('\n✔ All test stages passed.');

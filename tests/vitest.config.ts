@@ -1,21 +1,26 @@
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 
+// This file lives in tests/; the project root (one folder up) is vitest's root, so every path below is from there.
+const root = fileURLToPath(new URL('..', import.meta.url));
 const alias = {
-  '@': fileURLToPath(new URL('./src', import.meta.url)),
-  'server-only': fileURLToPath(new URL('./tests/support/server-only-stub.ts', import.meta.url)),
+  '@': fileURLToPath(new URL('../src', import.meta.url)),
+  'server-only': fileURLToPath(new URL('./support/server-only-stub.ts', import.meta.url)),
 };
 
 export default defineConfig({
+  root,
   resolve: { alias },
   test: {
     projects: [
-      { resolve: { alias }, test: { name: 'unit', include: ['tests/unit/**/*.test.ts', 'tests/unit/**/*.test.tsx'], environment: 'node' } },
+      { root, resolve: { alias }, test: { name: 'unit', include: ['tests/unit/**/*.test.ts', 'tests/unit/**/*.test.tsx'], environment: 'node' } },
       {
+        root,
         resolve: { alias },
         test: { name: 'integration', include: ['tests/integration/**/*.test.ts'], setupFiles: ['tests/integration/support/session-double.ts'], environment: 'node', pool: 'forks', testTimeout: 60_000, hookTimeout: 120_000 },
       },
       {
+        root,
         resolve: { alias },
         test: { name: 'e2e', include: ['tests/e2e/**/*.test.ts'], environment: 'node', fileParallelism: false, testTimeout: 120_000, hookTimeout: 300_000 },
       },
