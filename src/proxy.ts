@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from 'next/server';
 
 const SESSION_COOKIE = 'sillmark_session';
-const PUBLIC_PAGES = ['/sign-in', '/invitation', '/verify'];
+const PUBLIC_PAGES = ['/sign-in', '/invitation', '/verify', '/robots.txt'];
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 
 /**
