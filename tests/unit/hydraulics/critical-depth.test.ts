@@ -1,20 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { criticalDepth, criticalDepths } from '@/lib/hydraulics/critical-depth';
-import { EngineError, InvalidInputError } from '@/lib/hydraulics/errors';
+import { InvalidInputError } from '@/lib/hydraulics/errors';
 import { froudeNumber, specificEnergy } from '@/lib/hydraulics/flow-properties';
 import { prismaticSection } from '@/lib/hydraulics/prismatic-sections';
 import { surveyedSection } from '@/lib/hydraulics/surveyed-section';
 import { CUBIC_METRES_PER_CUBIC_FOOT, GRAVITY, METRES_PER_FOOT } from '@/lib/hydraulics/units';
+import { caught } from './test-helpers';
 
-function caught(action: () => unknown): EngineError {
-  try {
-    action();
-  } catch (error) {
-    if (error instanceof EngineError) return error;
-    throw error;
-  }
-  throw new Error('expected an EngineError');
-}
 
 describe('critical depth, prismatic channels', () => {
   it('Chow 1959, channel of Example 10-1 (b = 20 ft, z = 2, Q = 400 ft³/s, α = 1): yc ≈ 2.15 ft (from memory)', () => {

@@ -5,20 +5,9 @@ import { extentOfImpact } from '@/lib/hydraulics/impact/extent-of-impact';
 import { normalDepth } from '@/lib/hydraulics/normal-depth';
 import { prismaticSection } from '@/lib/hydraulics/prismatic-sections';
 import { directStepProfile } from '@/lib/hydraulics/profiles/direct-step';
-import type { ProfilePoint } from '@/lib/hydraulics/profiles/profile-point';
 import { withoutSchemePrismatic } from '@/lib/hydraulics/profiles/without-scheme';
+import { at } from './test-helpers';
 
-/** A bare profile point for hand-made profiles (only distance and level matter here). */
-const at = (distanceUpstream: number, waterLevel: number): ProfilePoint => ({
-  distanceUpstream,
-  depth: 1,
-  waterLevel,
-  bedLevel: waterLevel - 1,
-  velocity: 1,
-  froude: 0.3,
-  frictionSlope: 0.001,
-  energyLevel: waterLevel + 0.05,
-});
 
 describe('affluxAlong (invented hand-made profiles)', () => {
   it('interpolates the without-scheme level linearly at the with-scheme distances', () => {

@@ -1,17 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { inundation, inundationComparison } from '@/lib/hydraulics/impact/inundation';
-import type { ProfilePoint } from '@/lib/hydraulics/profiles/profile-point';
+import { at } from './test-helpers';
 
-const at = (distanceUpstream: number, waterLevel: number): ProfilePoint => ({
-  distanceUpstream,
-  depth: 1,
-  waterLevel,
-  bedLevel: waterLevel - 1,
-  velocity: 1,
-  froude: 0.3,
-  frictionSlope: 0.001,
-  energyLevel: waterLevel + 0.05,
-});
 
 // Invented: banks at a constant 10.0 m; water levels chosen so the crossings fall at hand-computable places.
 const flatBank = () => 10;

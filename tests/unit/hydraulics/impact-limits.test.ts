@@ -1,18 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { InvalidInputError } from '@/lib/hydraulics/errors';
 import { checkLimits } from '@/lib/hydraulics/impact/flood-limits';
-import type { ProfilePoint } from '@/lib/hydraulics/profiles/profile-point';
+import { at } from './test-helpers';
 
-const at = (distanceUpstream: number, waterLevel: number): ProfilePoint => ({
-  distanceUpstream,
-  depth: 1,
-  waterLevel,
-  bedLevel: waterLevel - 1,
-  velocity: 1,
-  froude: 0.3,
-  frictionSlope: 0.001,
-  energyLevel: waterLevel + 0.05,
-});
 
 // Invented scenario: a with-scheme profile from 21.0 m at the weir to 20.2 m at 400 m; without-scheme level 20.0 + 0.0005·x.
 const withProfile = [at(0, 21), at(200, 20.5), at(400, 20.2)];

@@ -1,25 +1,17 @@
 import { describe, expect, it } from 'vitest';
-import { EngineError, InvalidInputError, NoPhysicalSolutionError } from '@/lib/hydraulics/errors';
+import { InvalidInputError, NoPhysicalSolutionError } from '@/lib/hydraulics/errors';
 import { normalDepth } from '@/lib/hydraulics/normal-depth';
 import { CIRCLE_PEAK_CONVEYANCE_DEPTH_RATIO } from '@/lib/hydraulics/prismatic/circle-geometry';
 import { prismaticSection } from '@/lib/hydraulics/prismatic-sections';
 import type { FlowSection } from '@/lib/hydraulics/section';
 import { surveyedSection } from '@/lib/hydraulics/surveyed-section';
 import { CUBIC_METRES_PER_CUBIC_FOOT, METRES_PER_FOOT } from '@/lib/hydraulics/units';
+import { caught } from './test-helpers';
 
 function uniformFlow(section: FlowSection, depth: number, slope: number): number {
   return section.stateAtDepth(depth).conveyance * Math.sqrt(slope);
 }
 
-function caught(action: () => unknown): EngineError {
-  try {
-    action();
-  } catch (error) {
-    if (error instanceof EngineError) return error;
-    throw error;
-  }
-  throw new Error('expected an EngineError');
-}
 
 describe('normal depth, prismatic channels', () => {
   it('Chow 1959, Example 10-1: b = 20 ft, z = 2, S₀ = 0.0016, n = 0.025, Q = 400 ft³/s gives yn ≈ 3.36 ft (from memory)', () => {

@@ -1,26 +1,18 @@
 import { describe, expect, it } from 'vitest';
 import { criticalDepth } from '@/lib/hydraulics/critical-depth';
-import { EngineError, InvalidInputError } from '@/lib/hydraulics/errors';
+import { InvalidInputError } from '@/lib/hydraulics/errors';
 import { froudeNumber, specificForce } from '@/lib/hydraulics/flow-properties';
 import { prismaticSection } from '@/lib/hydraulics/prismatic-sections';
 import { sequentDepth } from '@/lib/hydraulics/sequent-depth';
 import { surveyedSection } from '@/lib/hydraulics/surveyed-section';
 import { GRAVITY } from '@/lib/hydraulics/units';
+import { caught } from './test-helpers';
 
 function belangerRatio(froude: number): number {
   // y₂/y₁ = ½(√(1 + 8Fr₁²) − 1) (Bélanger 1828; Chow 1959 eq. 3-20, from memory)
   return 0.5 * (Math.sqrt(1 + 8 * froude * froude) - 1);
 }
 
-function caught(action: () => unknown): EngineError {
-  try {
-    action();
-  } catch (error) {
-    if (error instanceof EngineError) return error;
-    throw error;
-  }
-  throw new Error('expected an EngineError');
-}
 
 describe('sequent depth, rectangle (Bélanger)', () => {
   const width = 3;
