@@ -7,6 +7,7 @@ import type { Role } from '@/lib/auth/roles';
 import { EngineError } from '@/lib/hydraulics/errors';
 import { AppError, InvalidRequestError, UnprocessableError } from '@/lib/http/app-errors';
 import { fieldIssuesFromZod } from '@/lib/http/zod-issues';
+import { safeParseUntrusted } from '@/lib/validation/safe-parse-untrusted';
 import type { ActionResult } from './action-result';
 
 interface ActionOptions<S extends z.ZodType> {
@@ -39,7 +40,7 @@ export function publicAction<S extends z.ZodType, T>(schema: S, run: (input: z.i
 }
 
 function parseInput<S extends z.ZodType>(schema: S, raw: unknown): z.infer<S> {
-  const parsed = schema.safeParse(raw);
+  const parsed = safeParseUntrusted(schema, raw);
   if (!parsed.success) throw new InvalidRequestError(fieldIssuesFromZod(parsed.error));
   return parsed.data;
 }

@@ -2,6 +2,7 @@ import 'server-only';
 import type { z } from 'zod';
 import { AppError, InvalidRequestError } from './app-errors';
 import { readBoundedBody } from './read-bounded-body';
+import { safeParseUntrusted } from '@/lib/validation/safe-parse-untrusted';
 import { fieldIssuesFromZod } from './zod-issues';
 
 export const MAX_JSON_BYTES = 1024 * 1024;
@@ -18,7 +19,7 @@ export async function readJsonBody<S extends z.ZodType>(request: Request, schema
   } catch {
     throw new InvalidRequestError([{ path: '', message: 'The request body is not valid JSON.' }], 'The request body is not valid JSON.');
   }
-  const parsed = schema.safeParse(json);
+  const parsed = safeParseUntrusted(schema, json);
   if (!parsed.success) throw new InvalidRequestError(fieldIssuesFromZod(parsed.error));
   return parsed.data;
 }

@@ -1,5 +1,6 @@
 import type { z } from 'zod';
 import { CASE_FORMAT, CASE_VERSION, type CaseInput, caseSchema } from './case-schema';
+import { safeParseUntrusted } from './safe-parse-untrusted';
 
 /** One problem with a case file: the dotted path of the field (e.g. `events[0].discharge`) and what is wrong. */
 export interface CaseIssue {
@@ -58,7 +59,7 @@ function issuesOf(error: z.ZodError): CaseIssue[] {
 export function parseCase(raw: unknown): ParsedCase {
   const header = headerIssues(raw);
   if (header.length > 0) return { ok: false, issues: header };
-  const result = caseSchema.safeParse(raw);
+  const result = safeParseUntrusted(caseSchema, raw);
   return result.success ? { ok: true, value: result.data } : { ok: false, issues: issuesOf(result.error) };
 }
 
