@@ -55,5 +55,6 @@ export function safeParseUntrusted<S extends z.ZodType>(schema: S, input: unknow
   const odd = findNonPlainValue(input);
   if (!odd) return schema.safeParse(input);
   const message = `Expected plain data (text, numbers, true or false, lists or fields) but got ${odd.kind}.`;
-  return { success: false, error: new z.ZodError<z.output<S>>([{ code: 'custom', path: odd.path, message, input: undefined }]) };
+  const error = new z.ZodError([{ code: 'custom', path: odd.path, message, input: undefined }]) as z.ZodError<z.output<S>>;
+  return { success: false, error };
 }
