@@ -1,4 +1,4 @@
-import type { Browser, Page } from 'playwright-core';
+import type { Browser, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_USERS } from '../../db/seeds/demo-users';
 import { startApp, type RunningApp } from './support/app-server';
@@ -17,25 +17,34 @@ afterAll(async () => {
   await app?.stop();
 });
 
-/** Presses Tab until the control labelled `label` has the focus; fails if the keyboard cannot reach it. */
-async function tabTo(page: Page, label: string): Promise<void> {
-  const target = page.getByLabel(label, { exact: true });
-  for (let presses = 0; presses < 60; presses++) {
+/** Presses Tab until `target` has the focus; fails if the keyboard cannot reach it. */
+async function tabToControl(page: Page, target: Locator, what: string): Promise<void> {
+  for (let presses = 0; presses < 150; presses++) {
     if (await target.evaluate((el) => el === document.activeElement).catch(() => false)) return;
     await page.keyboard.press('Tab');
   }
-  throw new Error(`the keyboard never reached "${label}"`);
+  throw new Error(`the keyboard never reached ${what}`);
 }
 
-async function typeInto(page: Page, label: string, text: string): Promise<void> {
-  await tabTo(page, label);
+const tabTo = (page: Page, label: string, within: Page | Locator = page) => tabToControl(page, within.getByLabel(label, { exact: true }), `"${label}"`);
+const tabToButton = (page: Page, name: string | RegExp) => tabToControl(page, page.getByRole('button', { name }), `the button ${String(name)}`);
+
+async function typeInto(page: Page, label: string, text: string, within: Page | Locator = page): Promise<void> {
+  await tabTo(page, label, within);
   await page.keyboard.press('Control+A');
   await page.keyboard.type(text);
 }
 
-describe('the wizard by keyboard alone', () => {
+/** The focused control draws a visible outline (Tailwind's focus-visible ring or the browser's own). */
+const focusOutline = (page: Page) => page.evaluate(() => getComputedStyle(document.activeElement as Element).outlineStyle);
+
+describe('the wizard by keyboard alone, from signing in to adopting the sized crest', () => {
+  let page: Page;
+  beforeAll(async () => {
+    page = await (await browser.newContext({ viewport: { width: 1280, height: 900 } })).newPage();
+  });
+
   it('signs in, creates a scheme and enters its channel without a pointer', async () => {
-    const page = await (await browser.newContext()).newPage();
     await page.goto(`${app.baseUrl}/sign-in`);
     await typeInto(page, 'E-mail address', designer.email);
     await typeInto(page, 'Password', designer.password);
@@ -61,9 +70,84 @@ describe('the wizard by keyboard alone', () => {
     await typeInto(page, 'Bed slope (m/m)', '0.0006');
     await page.keyboard.press('Enter');
     await page.waitForURL(/\/wizard\/flows$/);
-    // Focus is visible where the keyboard is: the focused control has an outline (Tailwind's focus-visible ring).
     await page.keyboard.press('Tab');
-    const outline = await page.evaluate(() => getComputedStyle(document.activeElement as Element).outlineStyle);
-    expect(outline).not.toBe('none');
+    expect(await focusOutline(page)).not.toBe('none');
+  });
+
+  it('enters two design flows, adding the second and choosing the governing one by keyboard', async () => {
+    await typeInto(page, 'Name', '50% AEP');
+    await typeInto(page, 'Discharge (m³/s)', '14');
+    await typeInto(page, 'Annual exceedance probability (fraction)', '0.5');
+    await tabToButton(page, '+ Add another event');
+    await page.keyboard.press('Enter');
+    const second = page.getByRole('group', { name: 'Event 2' });
+    await second.waitFor();
+    await typeInto(page, 'Name', '1% AEP', second);
+    await typeInto(page, 'Discharge (m³/s)', '38', second);
+    await typeInto(page, 'Annual exceedance probability (fraction)', '0.01', second);
+    await typeInto(page, 'Climate-change allowance (%)', '20', second);
+    await tabTo(page, 'This is the governing event', second);
+    await page.keyboard.press('Space');
+    expect(await second.getByLabel('This is the governing event').isChecked()).toBe(true);
+    await tabToButton(page, 'Save and continue');
+    expect(await focusOutline(page)).not.toBe('none');
+    await page.keyboard.press('Enter');
+    await page.waitForURL(/\/wizard\/structure$/);
+  });
+
+  it('describes the structure, choosing from lists by typing, and sees the live head', async () => {
+    await tabTo(page, 'Type of structure');
+    await page.keyboard.type('broad');
+    expect(await page.getByLabel('Type of structure', { exact: true }).inputValue()).toBe('broad-crested');
+    await typeInto(page, 'Crest length (m)', '10');
+    await typeInto(page, 'Sill height (m)', '1.6');
+    await typeInto(page, 'Crest breadth (m)', '4');
+    await tabTo(page, 'Upstream edge of the crest');
+    await page.keyboard.type('round');
+    expect(await page.getByLabel('Upstream edge of the crest', { exact: true }).inputValue()).toBe('round-nosed');
+    await page.getByTestId('preview-head').first().waitFor();
+    expect(await page.getByTestId('preview-head').first().textContent()).toMatch(/^\d+\.\d{3} m$/);
+    await tabToButton(page, 'Save and continue');
+    await page.keyboard.press('Enter');
+    await page.waitForURL(/\/wizard\/limits$/);
+  });
+
+  it('adds a flood-level limit, asks for crest sizing and reaches the results', async () => {
+    await typeInto(page, 'Bank-top height above the bed (m)', '3.2');
+    await tabToButton(page, '+ Add a limit');
+    await page.keyboard.press('Enter');
+    const limit = page.getByRole('group').filter({ has: page.getByLabel('Place', { exact: true }) }).last();
+    await limit.waitFor();
+    await typeInto(page, 'Place', 'Harrowfield Mill cottages', limit);
+    await typeInto(page, 'Distance upstream (m)', '300', limit);
+    await typeInto(page, 'Maximum level (m)', '35.6', limit);
+    await typeInto(page, 'Freeboard (m)', '0.3', limit);
+    await tabTo(page, 'Size the crest so that every limit passes in every event');
+    await page.keyboard.press('Space');
+    await typeInto(page, 'Step (m)', '0.05');
+    await tabToButton(page, 'Save and see the results');
+    await page.keyboard.press('Enter');
+    await page.waitForURL(/\/results$/);
+    expect(await page.getByTestId('verdict').textContent()).toMatch(/Pass|Fail/);
+  });
+
+  it('pages the step table, picks a cross-section and adopts the sized crest by keyboard', async () => {
+    const caption = page.locator('caption').filter({ hasText: /^Step table of/ }).first();
+    const firstRows = await caption.textContent();
+    await tabToButton(page, 'Next rows →');
+    await page.keyboard.press('Enter');
+    await page.waitForFunction((before) => [...document.querySelectorAll('caption')].some((c) => c.textContent?.startsWith('Step table of') && c.textContent !== before), firstRows);
+    expect(await caption.textContent()).toMatch(/rows 21–/);
+
+    const pointPicker = page.getByLabel('Cross-section at', { exact: true });
+    const before = await pointPicker.inputValue();
+    await tabTo(page, 'Cross-section at');
+    await page.keyboard.press('ArrowDown');
+    expect(await pointPicker.inputValue()).not.toBe(before);
+
+    await tabToButton(page, /^Adopt .* as the sill height$/);
+    expect(await focusOutline(page)).not.toBe('none');
+    await page.keyboard.press('Enter');
+    await page.getByText('The draft already uses this sill height.').waitFor();
   });
 });
