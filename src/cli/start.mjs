@@ -5,6 +5,7 @@ import { TSX, runStep } from './run-step.mjs';
 
 runStep('Migrating the database', 'npx', [...TSX, 'db/migrate.ts']);
 runStep('Seeding the demo scenario if the database is empty', 'npx', [...TSX, 'db/seed.ts']);
+runStep('Removing stored files that no record refers to', 'npx', [...TSX, 'db/sweep-files.ts']);
 buildIfNeeded();
 const port = process.env.PORT ?? '3000';
 console.log(`\n▶ Serving Sillmark on http://localhost:${port}`);

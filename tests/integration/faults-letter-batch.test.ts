@@ -1,6 +1,8 @@
+import { existsSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent, Letter, LetterBatch, OutboxMessage, database } from '@/lib/db';
 import { importParcelRegister } from '@/lib/parcels/import-parcel-register';
+import { sweepUnreferencedFiles } from '@/lib/storage/sweep-unreferenced-files';
 import { auditChainBreaks, messagesPerLetter, orphanLetterFiles } from './support/consistency-checks';
 import type { FaultJob } from './support/fault-job';
 import { runInChildProcess } from './support/fault-runner';
@@ -79,6 +81,12 @@ describe('the server killed while making a batch of letters', () => {
     expect(letters.every((l) => !leftovers.includes(l.pdfPath ?? ''))).toBe(true);
     expect(await AuditEvent.count({ where: { action: 'letters.generated', entityId: batches[0].id } })).toBe(1);
     expect(await auditChainBreaks()).toEqual([]);
+
+    // At the next start the killed run's PDFs (landowners' names and addresses) are removed; the recorded ones stay.
+    const swept = await sweepUnreferencedFiles({ graceMs: 0 });
+    expect(swept.letters.sort()).toEqual(leftovers.map((f) => f.split('/').pop()).sort());
+    expect(await orphanLetterFiles()).toEqual([]);
+    expect(letters.every((l) => existsSync(l.pdfPath ?? ''))).toBe(true);
   });
 });
 

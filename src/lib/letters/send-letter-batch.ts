@@ -3,7 +3,7 @@ import { Op } from 'sequelize';
 import { recordAuditEvent } from '@/lib/audit/record-audit-event';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Letter, LetterBatch, Parcel, Scheme, database } from '@/lib/db';
-import { type MailMessage, sendMail } from '@/lib/mail/send-mail';
+import { type MailMessage, openMailRun } from '@/lib/mail/send-mail';
 import { requireSchemeLiaisonAccess } from '@/lib/parcels/scheme-liaison-access';
 import type { SendBatchInput } from '@/lib/validation/letter-schemas';
 import { batchProgress, loadBatch } from './batch-progress';
@@ -88,7 +88,7 @@ async function sendOne(letter: Letter, run: Run, deliver: Deliver): Promise<void
  * again to go on: it resumes where any earlier run stopped and never sends a letter twice (each letter is claimed
  * queued → sending in a transaction, and an interrupted claim is settled against the outbox before anything else).
  */
-export async function sendLetterBatch({ user, batchId, input, deliver = sendMail }: { user: SessionUser; batchId: string; input: SendBatchInput; deliver?: Deliver }) {
+export async function sendLetterBatch({ user, batchId, input, deliver }: { user: SessionUser; batchId: string; input: SendBatchInput; deliver?: Deliver }) {
   const batch = await loadBatch(batchId);
   await requireSchemeLiaisonAccess({ user, schemeId: batch.schemeId, manage: true });
   const run: Run = { user, schemeId: batch.schemeId };
@@ -97,7 +97,12 @@ export async function sendLetterBatch({ user, batchId, input, deliver = sendMail
     if (input.retryFailed) await requeueFailed(batchId, run);
     const queued = await Letter.findAll({ where: { batchId, status: 'queued' }, order: [['createdAt', 'ASC'], ['id', 'ASC']], limit: input.max });
     if (queued.length) await LetterBatch.update({ status: 'sending' }, { where: { id: batchId } });
-    for (const letter of queued) await sendOne(letter, run, deliver);
+    const mail = deliver ? null : await openMailRun();
+    try {
+      for (const letter of queued) await sendOne(letter, run, deliver ?? mail!.send);
+    } finally {
+      mail?.close();
+    }
     const pending = await Letter.count({ where: { batchId, status: ['queued', 'sending'] } });
     if (pending === 0) await LetterBatch.update({ status: 'complete' }, { where: { id: batchId } });
   });

@@ -44,6 +44,8 @@ function createServer(): SMTPServer {
     disabledCommands: ['STARTTLS', 'AUTH'],
     size: MAX_MESSAGE_BYTES,
     logger: false,
+    // Every client is on loopback: asking DNS for 127.0.0.1's name only risks a resolver timeout.
+    disableReverseLookup: true,
     // Addresses under the reserved .invalid top-level domain (RFC 2606) cannot exist, so they are refused as a real server would.
     onRcptTo(address, _session, callback) {
       if (/\.invalid$/i.test(address.address)) return callback(rejection(`Mailbox ${address.address} does not exist (the .invalid domain is reserved).`, 550));

@@ -1,5 +1,7 @@
 import 'server-only';
 import nodemailer, { type Transporter } from 'nodemailer';
+import type SMTPPool from 'nodemailer/lib/smtp-pool';
+import type SMTPTransport from 'nodemailer/lib/smtp-transport';
 import { LOCAL_SMTP_HOST, ensureLocalSmtpServer } from './local-smtp-server';
 
 export interface MailMessage {
@@ -26,16 +28,36 @@ async function localPort(): Promise<number> {
   }
 }
 
-async function transport(): Promise<Transporter> {
+/**
+ * nodemailer's options for SMTP_URL or for the local server. `pooled` keeps one connection open for many messages:
+ * a batch then pays for the connection once (the local server alone waits 100 ms before its greeting, to catch
+ * clients that talk too early).
+ */
+async function transportOptions(pooled: boolean): Promise<{ key: string; options: string | SMTPPool.Options | SMTPTransport.Options }> {
   const url = process.env.SMTP_URL;
-  const key = url ?? `local:${await localPort()}`;
+  if (url) {
+    if (!pooled) return { key: url, options: url };
+    const withPool = new URL(url);
+    withPool.searchParams.set('pool', 'true');
+    withPool.searchParams.set('maxConnections', '1');
+    return { key: withPool.toString(), options: withPool.toString() };
+  }
+  const port = await localPort();
+  const local = { host: LOCAL_SMTP_HOST, port, secure: false, ignoreTLS: true };
+  return { key: `local:${port}`, options: pooled ? { ...local, pool: true, maxConnections: 1 } : local };
+}
+
+async function transport(): Promise<Transporter> {
+  const { key, options } = await transportOptions(false);
   if (cache.sillmarkMailTransport?.key !== key) {
-    const created = url ? nodemailer.createTransport(url) : nodemailer.createTransport({ host: LOCAL_SMTP_HOST, port: Number(key.slice(6)), secure: false, ignoreTLS: true });
+    const created = nodemailer.createTransport(options);
     cache.sillmarkMailTransport?.transport.close();
     cache.sillmarkMailTransport = { key, transport: created };
   }
   return cache.sillmarkMailTransport.transport;
 }
+
+const sendWith = async (via: Transporter, message: MailMessage) => ({ messageId: (await via.sendMail({ from: MAIL_FROM, ...message })).messageId as string });
 
 /**
  * Sends over SMTP with nodemailer: to SMTP_URL when it is set, otherwise to the local fake SMTP server on loopback,
@@ -43,6 +65,11 @@ async function transport(): Promise<Transporter> {
  * Rejects when the server refuses the message; the error's message gives the server's reason.
  */
 export async function sendMail(message: MailMessage): Promise<{ messageId: string }> {
-  const info = await (await transport()).sendMail({ from: MAIL_FROM, ...message });
-  return { messageId: info.messageId };
+  return sendWith(await transport(), message);
+}
+
+/** For a batch: messages go one after another over one kept-open connection, closed by `close()` when the batch is done. */
+export async function openMailRun(): Promise<{ send: (message: MailMessage) => Promise<{ messageId: string }>; close: () => void }> {
+  const pooled = nodemailer.createTransport((await transportOptions(true)).options);
+  return { send: (message) => sendWith(pooled, message), close: () => pooled.close() };
 }
