@@ -19,11 +19,13 @@ afterAll(async () => {
 
 /** Presses Tab until `target` has the focus; fails if the keyboard cannot reach it. */
 async function tabToControl(page: Page, target: Locator, what: string): Promise<void> {
+  const visited: string[] = [];
   for (let presses = 0; presses < 150; presses++) {
     if (await target.evaluate((el) => el === document.activeElement).catch(() => false)) return;
     await page.keyboard.press('Tab');
+    visited.push(await page.evaluate(() => { const el = document.activeElement; return el ? `${el.tagName.toLowerCase()}${el.id ? `#${el.id}` : ''}${el.getAttribute('type') ? `[${el.getAttribute('type')}]` : ''}` : 'none'; }));
   }
-  throw new Error(`the keyboard never reached ${what}`);
+  throw new Error(`the keyboard never reached ${what}; it went through ${[...new Set(visited)].join(' → ')}`);
 }
 
 const tabTo = (page: Page, label: string, within: Page | Locator = page) => tabToControl(page, within.getByLabel(label, { exact: true }), `"${label}"`);
@@ -86,8 +88,10 @@ describe('the wizard by keyboard alone, from signing in to adopting the sized cr
     await typeInto(page, 'Discharge (m³/s)', '38', second);
     await typeInto(page, 'Annual exceedance probability (fraction)', '0.01', second);
     await typeInto(page, 'Climate-change allowance (%)', '20', second);
-    await tabTo(page, 'This is the governing event', second);
-    await page.keyboard.press('Space');
+    // The governing choice is one radio group across the events: Tab stops once, at the chosen radio (at first "no
+    // single governing event"), and the arrow keys choose another.
+    await tabTo(page, 'No single governing event: check every event alike');
+    await page.keyboard.press('ArrowUp');
     expect(await second.getByLabel('This is the governing event').isChecked()).toBe(true);
     await tabToButton(page, 'Save and continue');
     expect(await focusOutline(page)).not.toBe('none');
