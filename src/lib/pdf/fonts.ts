@@ -1,6 +1,7 @@
 import 'server-only';
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
+import * as fontkit from 'fontkit';
 import type PDFDocument from 'pdfkit';
 
 // The same IBM Plex files the web pages use (fonts/, SIL Open Font License), embedded so every PDF reads alike.
@@ -22,7 +23,7 @@ export function pdfFontPath(font: PdfFont): string {
 
 const loaded = new Map<PdfFont, Buffer>();
 
-/** The font's bytes as pdfkit embeds them (read once per process). */
+/** The font's bytes (read once per process). */
 export function pdfFontBytes(font: PdfFont): Buffer {
   let bytes = loaded.get(font);
   if (!bytes) {
@@ -32,9 +33,23 @@ export function pdfFontBytes(font: PdfFont): Buffer {
   return bytes;
 }
 
+// pdfkit parses a font given as bytes again for every document, which was most of the time a letter took to make;
+// given fontkit's parsed font, each document only subsets it. The parsed font holds no per-document state.
+const parsed = new Map<PdfFont, fontkit.Font>();
+
+function parsedFont(font: PdfFont): fontkit.Font {
+  let face = parsed.get(font);
+  if (!face) {
+    face = fontkit.create(pdfFontBytes(font));
+    parsed.set(font, face);
+  }
+  return face;
+}
+
 /** Registers every font under its short name (doc.font('mono')) and makes the sans face current. */
 export function registerPdfFonts(doc: InstanceType<typeof PDFDocument>): void {
-  for (const font of Object.keys(FILES) as PdfFont[]) doc.registerFont(font, pdfFontBytes(font));
+  // pdfkit's typings know only paths and bytes, but it takes a fontkit font as well (PDFFontFactory.open).
+  for (const font of Object.keys(FILES) as PdfFont[]) doc.registerFont(font, parsedFont(font) as unknown as Buffer);
   doc.font('sans');
 }
 
