@@ -1,28 +1,22 @@
-import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Revision, closeSequelize } from '@/lib/db';
 import { createTestScheme } from '../integration/support/scheme-factory';
 import { createTestUser } from '../integration/support/user-factory';
-import { startApp, type RunningApp } from './support/app-server';
-import { launchBrowser } from './support/browser';
+import { ARTIFACTS, useServedPortal } from './support/served-portal';
 
 type Person = Awaited<ReturnType<typeof createTestUser>>;
-const ARTIFACTS = 'tests/.artifacts';
 
-let app: RunningApp;
-let browser: Browser;
+const portal = useServedPortal();
 let people: { designer: Person; checker: Person; planning: Person; admin: Person };
 let scheme: Awaited<ReturnType<typeof createTestScheme>>['scheme'];
 let firstRevisionId: string;
 
 beforeAll(async () => {
-  app = await startApp();
-  browser = await launchBrowser();
-  mkdirSync(ARTIFACTS, { recursive: true });
   // This test's own people and scheme, written straight into the served database (WAL lets both processes use it).
-  process.env.DATABASE_PATH = app.databasePath;
+  process.env.DATABASE_PATH = portal.app.databasePath;
   people = { designer: await createTestUser('designer'), checker: await createTestUser('checker'), planning: await createTestUser('planning'), admin: await createTestUser('admin') };
   const created = await createTestScheme(people.designer.user.id);
   scheme = created.scheme;
@@ -31,18 +25,16 @@ beforeAll(async () => {
 
 afterAll(async () => {
   await closeSequelize();
-  await browser?.close();
-  await app?.stop();
 });
 
 async function signedInPage(person: Person): Promise<Page> {
-  const context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1280, height: 900 } });
+  const context = await portal.browser.newContext({ acceptDownloads: true, viewport: { width: 1280, height: 900 } });
   const page = await context.newPage();
-  await page.goto(`${app.baseUrl}/sign-in`);
+  await page.goto(`${portal.app.baseUrl}/sign-in`);
   await page.getByLabel('E-mail address').fill(person.user.email);
   await page.getByLabel('Password').fill(person.password);
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${app.baseUrl}/home`);
+  await page.waitForURL(`${portal.app.baseUrl}/home`);
   return page;
 }
 
@@ -51,7 +43,7 @@ async function shot(page: Page, name: string): Promise<void> {
 }
 
 async function openCheck(page: Page, revisionNumber: number): Promise<void> {
-  await page.goto(`${app.baseUrl}/checks`);
+  await page.goto(`${portal.app.baseUrl}/checks`);
   await page.getByRole('link', { name: `${scheme.reference} ${scheme.name} — revision ${revisionNumber}` }).click();
   await page.getByRole('heading', { name: 'Independent re-run' }).waitFor();
 }
@@ -60,7 +52,7 @@ describe('designer → checker → designer → checker → planning officer', (
   it('submits, returns with a comment, revises, resubmits, countersigns, and the planning officer downloads and verifies the certificate', async () => {
     // The designer submits revision 1 to the chosen checker.
     const designer = await signedInPage(people.designer);
-    await designer.goto(`${app.baseUrl}/revisions/${firstRevisionId}`);
+    await designer.goto(`${portal.app.baseUrl}/revisions/${firstRevisionId}`);
     await designer.getByLabel('Checker').selectOption(people.checker.user.id);
     await shot(designer, '1-submit');
     await designer.getByRole('button', { name: 'Submit for check' }).click();
@@ -78,21 +70,21 @@ describe('designer → checker → designer → checker → planning officer', (
     await shot(checker, '2-review');
     await checker.getByLabel('What should change').fill('Lengthen the crest to 12 m and resubmit.');
     await checker.getByRole('button', { name: /Return with comments/ }).click();
-    await checker.waitForURL(`${app.baseUrl}/checks`);
+    await checker.waitForURL(`${portal.app.baseUrl}/checks`);
 
     // The designer reads the comment, starts a new draft from revision 1 and lengthens the crest in the wizard.
-    await designer.goto(`${app.baseUrl}/revisions/${firstRevisionId}`);
+    await designer.goto(`${portal.app.baseUrl}/revisions/${firstRevisionId}`);
     await designer.getByText('The 10 m crest gives little margin').waitFor();
     await shot(designer, '3-returned');
     await designer.getByRole('button', { name: 'Start a new draft from revision 1' }).click();
-    await designer.waitForURL(`${app.baseUrl}/schemes/${scheme.id}/wizard/scheme`);
-    await designer.goto(`${app.baseUrl}/schemes/${scheme.id}/wizard/structure`);
+    await designer.waitForURL(`${portal.app.baseUrl}/schemes/${scheme.id}/wizard/scheme`);
+    await designer.goto(`${portal.app.baseUrl}/schemes/${scheme.id}/wizard/structure`);
     await designer.getByLabel('Crest length (m)').fill('12');
     await designer.getByRole('button', { name: 'Save and continue' }).click();
     await designer.waitForURL((url) => !url.pathname.endsWith('/wizard/structure'));
     const second = await Revision.findOne({ where: { schemeId: scheme.id, number: 2 } });
     expect(second?.status).toBe('draft');
-    await designer.goto(`${app.baseUrl}/revisions/${second!.id}`);
+    await designer.goto(`${portal.app.baseUrl}/revisions/${second!.id}`);
     await designer.getByRole('button', { name: 'Submit for check' }).click();
     await designer.locator('dd', { hasText: /^[0-9a-f]{64}$/ }).first().waitFor();
 
@@ -107,14 +99,14 @@ describe('designer → checker → designer → checker → planning officer', (
     await checker.getByLabel('Your password').fill(people.checker.password);
     await shot(checker, '4-countersign');
     await checker.getByRole('button', { name: 'Countersign' }).click();
-    await checker.waitForURL(`${app.baseUrl}/revisions/${second!.id}`);
+    await checker.waitForURL(`${portal.app.baseUrl}/revisions/${second!.id}`);
     const number = (await checker.locator('p', { hasText: 'Download the signed PDF' }).locator('.num').first().textContent())!.trim();
     expect(number).toMatch(/^SMC-\d{4}-\d{4}$/);
     await shot(checker, '5-certified');
 
     // The planning officer finds the certificate in the register, downloads it and verifies it.
     const planning = await signedInPage(people.planning);
-    await planning.goto(`${app.baseUrl}/certificates`);
+    await planning.goto(`${portal.app.baseUrl}/certificates`);
     await planning.getByLabel('Scheme, site or number').fill(scheme.reference);
     await planning.getByRole('button', { name: 'Search' }).click();
     await planning.getByRole('link', { name: number, exact: true }).waitFor();
@@ -124,7 +116,7 @@ describe('designer → checker → designer → checker → planning officer', (
     await download.saveAs(saved);
     expect(readFileSync(saved).subarray(0, 5).toString()).toBe('%PDF-');
 
-    await planning.goto(`${app.baseUrl}/verify`);
+    await planning.goto(`${portal.app.baseUrl}/verify`);
     await planning.getByLabel('Certificate PDF').setInputFiles(saved);
     await planning.getByRole('button', { name: 'Check the PDF' }).click();
     await planning.getByText('Authentic and current').waitFor();
@@ -140,14 +132,14 @@ describe('designer → checker → designer → checker → planning officer', (
     await shot(planning, '8-tampered');
 
     // Verification by number needs no account.
-    const anonymous = await (await browser.newContext()).newPage();
-    await anonymous.goto(`${app.baseUrl}/verify?number=${number}`);
+    const anonymous = await (await portal.browser.newContext()).newPage();
+    await anonymous.goto(`${portal.app.baseUrl}/verify?number=${number}`);
     await anonymous.getByText('This certificate is current').waitFor();
     await shot(anonymous, '9-public-lookup');
 
     // An administrator revokes it with a reason; the public lookup says so from then on.
     const admin = await signedInPage(people.admin);
-    await admin.goto(`${app.baseUrl}/admin/certificates`);
+    await admin.goto(`${portal.app.baseUrl}/admin/certificates`);
     await admin.getByLabel(`Reason for revoking ${number}`).fill('Revoked in the end-to-end test: the bridge soffit level was re-surveyed.');
     await shot(admin, '10-revoke');
     await admin.getByRole('button', { name: `Revoke ${number}` }).click();

@@ -1,10 +1,8 @@
-import { mkdirSync } from 'node:fs';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { DEMO_USERS } from '../../db/seeds/demo-users';
-import { startApp, type RunningApp } from './support/app-server';
 import { seriousAccessibilityViolations } from './support/accessibility';
-import { launchBrowser, signInAs } from './support/browser';
+import { signInAs } from './support/browser';
+import { useServedPortal } from './support/served-portal';
 
 const ROLE_HOME_HEADING: Record<string, string> = {
   designer: 'Drafts and returned revisions',
@@ -14,37 +12,27 @@ const ROLE_HOME_HEADING: Record<string, string> = {
   admin: 'Invitations not yet accepted',
 };
 
-let app: RunningApp;
-let browser: Browser;
+const portal = useServedPortal();
 
-beforeAll(async () => {
-  app = await startApp();
-  browser = await launchBrowser();
-  mkdirSync('tests/.artifacts', { recursive: true });
-});
 
-afterAll(async () => {
-  await browser?.close();
-  await app?.stop();
-});
 
 describe('each demo role signs in and sees its own home', () => {
   for (const user of DEMO_USERS) {
     it(`${user.role} sees the ${user.role} home and is refused another role's page`, async () => {
-      const context = await browser.newContext();
+      const context = await portal.browser.newContext();
       const page = await context.newPage();
-      await signInAs(page, app.baseUrl, user.email, user.password);
+      await signInAs(page, portal.app.baseUrl, user.email, user.password);
       expect(await page.getByRole('heading', { level: 2, name: ROLE_HOME_HEADING[user.role] }).count()).toBe(1);
       expect(await page.getByTestId('current-role').textContent()).toMatch(new RegExp(user.role === 'planning' ? 'Planning officer' : user.role, 'i'));
       await page.screenshot({ path: `tests/.artifacts/home-${user.role}.png`, fullPage: true });
       expect(await seriousAccessibilityViolations(page)).toEqual([]);
 
       const otherPage = user.role === 'admin' ? '/home' : '/admin/users';
-      const response = await page.goto(`${app.baseUrl}${otherPage}`);
+      const response = await page.goto(`${portal.app.baseUrl}${otherPage}`);
       if (user.role === 'admin') {
         expect(response?.status()).toBe(200);
         for (const adminPage of ['/admin/users', '/admin/audit', '/schemes']) {
-          await page.goto(`${app.baseUrl}${adminPage}`);
+          await page.goto(`${portal.app.baseUrl}${adminPage}`);
           expect(await seriousAccessibilityViolations(page), adminPage).toEqual([]);
         }
       } else {
@@ -56,9 +44,9 @@ describe('each demo role signs in and sees its own home', () => {
   }
 
   it('shows a clear message for a wrong password and stays on the sign-in page', async () => {
-    const context = await browser.newContext();
+    const context = await portal.browser.newContext();
     const page = await context.newPage();
-    await page.goto(`${app.baseUrl}/sign-in`);
+    await page.goto(`${portal.app.baseUrl}/sign-in`);
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
     await page.getByLabel('E-mail address').fill('designer@sillmark.test');
     await page.getByLabel('Password').fill('not-the-password');
@@ -71,9 +59,9 @@ describe('each demo role signs in and sees its own home', () => {
   });
 
   it('sends an anonymous visitor of a portal page to sign in', async () => {
-    const context = await browser.newContext();
+    const context = await portal.browser.newContext();
     const page = await context.newPage();
-    await page.goto(`${app.baseUrl}/schemes`);
+    await page.goto(`${portal.app.baseUrl}/schemes`);
     expect(new URL(page.url()).pathname).toBe('/sign-in');
     await context.close();
   });

@@ -1,21 +1,11 @@
-import type { Browser, Locator, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Locator, Page } from 'playwright-core';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_USERS } from '../../db/seeds/demo-users';
-import { startApp, type RunningApp } from './support/app-server';
-import { launchBrowser } from './support/browser';
+import { useServedPortal } from './support/served-portal';
 
 const designer = DEMO_USERS.find((u) => u.role === 'designer')!;
-let app: RunningApp;
-let browser: Browser;
+const portal = useServedPortal();
 
-beforeAll(async () => {
-  app = await startApp();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.stop();
-});
 
 /** Presses Tab until `target` has the focus; fails if the keyboard cannot reach it. */
 async function tabToControl(page: Page, target: Locator, what: string): Promise<void> {
@@ -43,17 +33,17 @@ const focusOutline = (page: Page) => page.evaluate(() => getComputedStyle(docume
 describe('the wizard by keyboard alone, from signing in to adopting the sized crest', () => {
   let page: Page;
   beforeAll(async () => {
-    page = await (await browser.newContext({ viewport: { width: 1280, height: 900 } })).newPage();
+    page = await (await portal.browser.newContext({ viewport: { width: 1280, height: 900 } })).newPage();
   });
 
   it('signs in, creates a scheme and enters its channel without a pointer', async () => {
-    await page.goto(`${app.baseUrl}/sign-in`);
+    await page.goto(`${portal.app.baseUrl}/sign-in`);
     await typeInto(page, 'E-mail address', designer.email);
     await typeInto(page, 'Password', designer.password);
     await page.keyboard.press('Enter');
-    await page.waitForURL(`${app.baseUrl}/home`);
+    await page.waitForURL(`${portal.app.baseUrl}/home`);
 
-    await page.goto(`${app.baseUrl}/schemes/new`);
+    await page.goto(`${portal.app.baseUrl}/schemes/new`);
     await typeInto(page, 'Scheme name', 'Keyboard walk weir');
     await typeInto(page, 'Watercourse', 'River Wendle');
     await typeInto(page, 'Site', 'Harrowfield Mill tail race');

@@ -1,31 +1,20 @@
-import { mkdirSync } from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { DEMO_USERS } from '../../db/seeds/demo-users';
-import { startApp, type RunningApp } from './support/app-server';
-import { launchBrowser, signInAs } from './support/browser';
+import { signInAs } from './support/browser';
 import { accessibilityViolations } from './support/accessibility';
 import { canvasInk, fillByLabel, previewNumbers } from './support/wizard-helpers';
+import { useServedPortal } from './support/served-portal';
 
 const designer = DEMO_USERS.find((u) => u.role === 'designer')!;
 const SCHEME = 'Wendle Meadows footbridge weir';
-let app: RunningApp;
-let browser: Browser;
+const portal = useServedPortal();
 
-beforeAll(async () => {
-  app = await startApp();
-  browser = await launchBrowser();
-  mkdirSync('tests/.artifacts', { recursive: true });
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.stop();
-});
 
 async function signedInPage(): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  const context = await portal.browser.newContext({ viewport: { width: 1280, height: 900 } });
   const page = await context.newPage();
-  await signInAs(page, app.baseUrl, designer.email, designer.password);
+  await signInAs(page, portal.app.baseUrl, designer.email, designer.password);
   return page;
 }
 
@@ -36,7 +25,7 @@ describe('a designer creates a prismatic scheme with the wizard, leaves, comes b
 
   it('enters the scheme, the channel and the design flows, then leaves', async () => {
     const page = await signedInPage();
-    await page.goto(`${app.baseUrl}/schemes`);
+    await page.goto(`${portal.app.baseUrl}/schemes`);
     await page.getByRole('link', { name: '+ New scheme' }).click();
     await page.waitForURL(/\/schemes\/new$/);
     await fillByLabel(page, 'Scheme name', SCHEME);
@@ -81,7 +70,7 @@ describe('a designer creates a prismatic scheme with the wizard, leaves, comes b
 
   it('resumes the draft in a new session, with every saved value restored', async () => {
     const page = await signedInPage();
-    await page.goto(`${app.baseUrl}/schemes`);
+    await page.goto(`${portal.app.baseUrl}/schemes`);
     await page.getByRole('link', { name: SCHEME }).click();
     await page.getByRole('link', { name: /Continue draft revision 1: Structure/ }).click();
     await page.waitForURL(/\/wizard\/structure$/);

@@ -1,37 +1,29 @@
-import { existsSync, mkdirSync, readdirSync, writeFileSync } from 'node:fs';
+import { existsSync, readdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_USERS } from '../../db/seeds/demo-users';
-import { startApp, type RunningApp } from './support/app-server';
-import { launchBrowser, signInAs } from './support/browser';
+import { signInAs } from './support/browser';
 import { canvasInk, fillByLabel } from './support/wizard-helpers';
+import { useServedPortal } from './support/served-portal';
 
 const designer = DEMO_USERS.find((u) => u.role === 'designer')!;
 const DEMO_SURVEY = path.resolve('db/seeds/surveys/wendle-harrowfield-survey.csv');
 const BAD_SURVEY = path.resolve('tests/.artifacts/bad-survey.csv');
-let app: RunningApp;
-let browser: Browser;
+const portal = useServedPortal();
 
 beforeAll(async () => {
-  app = await startApp();
-  browser = await launchBrowser();
-  mkdirSync('tests/.artifacts', { recursive: true });
   writeFileSync(BAD_SURVEY, ['distance_upstream,station,elevation,bank,manning_n', '0,0,34.6,,0.05', '0,10,thirty,,', '0,20,34.6,,', '400,0,34.9,,0.05', '400,20,34.9,,', '200,0,34.8,,0.05'].join('\n'));
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.stop();
 });
 
 const save = (page: Page, name = 'Save and continue') => page.getByRole('button', { name }).click();
 
 describe('a designer builds a scheme on surveyed cross-sections from a CSV file', () => {
   it('is told every bad line first, previews the good survey, and reaches a verdict on the long-section', async () => {
-    const context = await browser.newContext({ viewport: { width: 1024, height: 900 } });
+    const context = await portal.browser.newContext({ viewport: { width: 1024, height: 900 } });
     const page = await context.newPage();
-    await signInAs(page, app.baseUrl, designer.email, designer.password);
-    await page.goto(`${app.baseUrl}/schemes/new`);
+    await signInAs(page, portal.app.baseUrl, designer.email, designer.password);
+    await page.goto(`${portal.app.baseUrl}/schemes/new`);
     await fillByLabel(page, 'Scheme name', 'Harrowfield Mill weir on the surveyed reach');
     await fillByLabel(page, 'Watercourse', 'River Wendle');
     await fillByLabel(page, 'Site', 'Harrowfield Mill');
@@ -89,10 +81,10 @@ describe('a designer builds a scheme on surveyed cross-sections from a CSV file'
   });
 
   it('starts a scheme in US customary units from a case file and reads the results in ft and ft³/s', async () => {
-    const context = await browser.newContext({ viewport: { width: 820, height: 1100 } });
+    const context = await portal.browser.newContext({ viewport: { width: 820, height: 1100 } });
     const page = await context.newPage();
-    await signInAs(page, app.baseUrl, designer.email, designer.password);
-    await page.goto(`${app.baseUrl}/schemes`);
+    await signInAs(page, portal.app.baseUrl, designer.email, designer.password);
+    await page.goto(`${portal.app.baseUrl}/schemes`);
     await page.getByLabel('Start a scheme from a case file').setInputFiles(path.resolve('db/seeds/cases/wendle-harrowfield-us-customary.json'));
     await page.waitForURL(/\/results$/);
     const facts = (await page.getByTestId('event-facts').textContent()) ?? '';
@@ -108,10 +100,10 @@ describe('a designer builds a scheme on surveyed cross-sections from a CSV file'
 
   it('shows the demo scheme’s draft to its checker read-only: results, but no wizard and no adopting', async () => {
     const checker = DEMO_USERS.find((u) => u.role === 'checker')!;
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const context = await portal.browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await context.newPage();
-    await signInAs(page, app.baseUrl, checker.email, checker.password);
-    await page.goto(`${app.baseUrl}/schemes`);
+    await signInAs(page, portal.app.baseUrl, checker.email, checker.password);
+    await page.goto(`${portal.app.baseUrl}/schemes`);
     await page.getByRole('link', { name: 'Harrowfield Mill weir renewal' }).click();
     await page.getByRole('link', { name: /^Results sheet of revision 1/ }).click();
     await page.getByTestId('verdict').waitFor();
@@ -124,21 +116,21 @@ describe('a designer builds a scheme on surveyed cross-sections from a CSV file'
   });
 
   it('refuses a 50 MB survey through the whole server stack, storing nothing', async () => {
-    const context = await browser.newContext();
+    const context = await portal.browser.newContext();
     const page = await context.newPage();
-    await signInAs(page, app.baseUrl, designer.email, designer.password);
-    const created = await page.request.post(`${app.baseUrl}/api/schemes`, { data: { name: 'Upload limit check', watercourse: 'River Wendle', site: 'Harrowfield Mill', datum: 'local datum', units: 'SI' } });
+    await signInAs(page, portal.app.baseUrl, designer.email, designer.password);
+    const created = await page.request.post(`${portal.app.baseUrl}/api/schemes`, { data: { name: 'Upload limit check', watercourse: 'River Wendle', site: 'Harrowfield Mill', datum: 'local datum', units: 'SI' } });
     expect(created.status()).toBe(201);
     const { revisionId } = await created.json();
-    const uploads = path.join(path.dirname(app.databasePath), 'uploads');
+    const uploads = path.join(path.dirname(portal.app.databasePath), 'uploads');
     const stored = () => (existsSync(uploads) ? readdirSync(uploads).sort() : []);
     const filesBefore = stored();
-    const before = await (await page.request.get(`${app.baseUrl}/api/revisions/${revisionId}`)).json();
+    const before = await (await page.request.get(`${portal.app.baseUrl}/api/revisions/${revisionId}`)).json();
     const huge = Buffer.alloc(50 * 1024 * 1024, '0,1,2,,0.03\n');
-    const refused = await page.request.post(`${app.baseUrl}/api/uploads/survey?revision=${revisionId}`, { data: huge, headers: { 'content-type': 'text/csv' } });
+    const refused = await page.request.post(`${portal.app.baseUrl}/api/uploads/survey?revision=${revisionId}`, { data: huge, headers: { 'content-type': 'text/csv' } });
     expect(refused.status()).toBe(413);
     expect((await refused.json()).error).toMatch(/The file is 50\.0 MB; a survey CSV may be at most 2\.0 MB\. Nothing was stored\./);
-    const after = await (await page.request.get(`${app.baseUrl}/api/revisions/${revisionId}`)).json();
+    const after = await (await page.request.get(`${portal.app.baseUrl}/api/revisions/${revisionId}`)).json();
     expect(after.inputs).toEqual(before.inputs);
     expect(stored()).toEqual(filesBefore);
     await context.close();
