@@ -5,6 +5,7 @@ import { LIAISON_READERS } from '@/lib/parcels/liaison-roles';
 import { listLiaisonSchemes } from '@/lib/parcels/list-liaison-schemes';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
+import { DataTable } from '@/components/ui/data-table';
 
 export const metadata: Metadata = { title: 'Landowners' };
 
@@ -19,29 +20,17 @@ export default async function LiaisonIndexPage() {
       {schemes.length === 0 ? (
         <EmptyState title="No scheme to show." />
       ) : (
-        <table className="w-full border-collapse text-sm">
-          <caption className="sr-only">Schemes and their landowner liaison</caption>
-          <thead>
-            <tr className="border-b border-paper-edge text-left text-ink-soft">
-              <th scope="col" className="py-2 pr-4">Reference</th>
-              <th scope="col" className="py-2 pr-4">Scheme</th>
-              <th scope="col" className="py-2 pr-4">Parcels register</th>
-              <th scope="col" className="py-2 pr-4">Certified revision</th>
-              <th scope="col" className="py-2">Letters</th>
+        <DataTable caption="Schemes and their landowner liaison" columns={[{ label: 'Reference' }, { label: 'Scheme' }, { label: 'Parcels register' }, { label: 'Certified revision' }, { label: 'Letters' }]}>
+          {schemes.map((s) => (
+            <tr key={s.id} className="border-b border-paper-edge">
+              <td className="num py-2 pr-4">{s.reference}</td>
+              <td className="py-2 pr-4"><Link className="font-semibold text-accent hover:underline" href={`/liaison/${s.id}`}>{s.name}</Link><span className="block text-ink-soft">{s.watercourse} at {s.site}</span></td>
+              <td className="py-2 pr-4">{s.register ? <>version <span className="num">{s.register.version}</span>, <span className="num">{s.register.parcels}</span> parcels</> : 'none yet'}</td>
+              <td className="py-2 pr-4">{s.certifiedRevision ? <span className="num">rev. {s.certifiedRevision}</span> : 'none yet'}</td>
+              <td className="py-2">{s.letters.total ? <><span className="num">{s.letters.total}</span> made{s.letters.waiting ? <>, <span className="num">{s.letters.waiting}</span> waiting</> : null}</> : 'none'}</td>
             </tr>
-          </thead>
-          <tbody>
-            {schemes.map((s) => (
-              <tr key={s.id} className="border-b border-paper-edge">
-                <td className="num py-2 pr-4">{s.reference}</td>
-                <td className="py-2 pr-4"><Link className="font-semibold text-accent hover:underline" href={`/liaison/${s.id}`}>{s.name}</Link><span className="block text-ink-soft">{s.watercourse} at {s.site}</span></td>
-                <td className="py-2 pr-4">{s.register ? <>version <span className="num">{s.register.version}</span>, <span className="num">{s.register.parcels}</span> parcels</> : 'none yet'}</td>
-                <td className="py-2 pr-4">{s.certifiedRevision ? <span className="num">rev. {s.certifiedRevision}</span> : 'none yet'}</td>
-                <td className="py-2">{s.letters.total ? <><span className="num">{s.letters.total}</span> made{s.letters.waiting ? <>, <span className="num">{s.letters.waiting}</span> waiting</> : null}</> : 'none'}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+          ))}
+        </DataTable>
       )}
     </>
   );

@@ -8,6 +8,7 @@ import { StatusLabel } from '@/components/ui/status-label';
 import { ANY_ROLE } from '@/lib/auth/authorize';
 import { requirePageRole } from '@/lib/auth/page-guard';
 import { listSchemes } from '@/lib/schemes/list-schemes';
+import { DataTable } from '@/components/ui/data-table';
 
 export const metadata: Metadata = { title: 'Schemes' };
 
@@ -26,27 +27,16 @@ export default async function SchemesPage() {
       {schemes.length === 0 ? (
         <EmptyState title="No schemes to show yet." />
       ) : (
-        <table className="w-full border-collapse text-sm">
-          <caption className="sr-only">Schemes</caption>
-          <thead>
-            <tr className="border-b border-paper-edge text-left text-ink-soft">
-              <th scope="col" className="py-2 pr-4">Reference</th>
-              <th scope="col" className="py-2 pr-4">Scheme</th>
-              <th scope="col" className="py-2 pr-4">Watercourse and site</th>
-              <th scope="col" className="py-2">Latest revision</th>
+        <DataTable caption="Schemes" columns={[{ label: 'Reference' }, { label: 'Scheme' }, { label: 'Watercourse and site' }, { label: 'Latest revision' }]}>
+          {schemes.map((s) => (
+            <tr key={s.id} className="border-b border-paper-edge">
+              <td className="num py-2 pr-4">{s.reference}</td>
+              <td className="py-2 pr-4 font-semibold"><Link className="text-accent underline" href={`/schemes/${s.id}`}>{s.name}</Link></td>
+              <td className="py-2 pr-4">{s.watercourse} at {s.site}</td>
+              <td className="py-2">{s.latestRevision ? <span className="flex items-center gap-2"><span className="num">rev. {s.latestRevision.number}</span><StatusLabel status={s.latestRevision.status} /></span> : '—'}</td>
             </tr>
-          </thead>
-          <tbody>
-            {schemes.map((s) => (
-              <tr key={s.id} className="border-b border-paper-edge">
-                <td className="num py-2 pr-4">{s.reference}</td>
-                <td className="py-2 pr-4 font-semibold"><Link className="text-accent underline" href={`/schemes/${s.id}`}>{s.name}</Link></td>
-                <td className="py-2 pr-4">{s.watercourse} at {s.site}</td>
-                <td className="py-2">{s.latestRevision ? <span className="flex items-center gap-2"><span className="num">rev. {s.latestRevision.number}</span><StatusLabel status={s.latestRevision.status} /></span> : '—'}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+          ))}
+        </DataTable>
       )}
     </>
   );

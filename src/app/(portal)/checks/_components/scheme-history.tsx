@@ -1,32 +1,20 @@
 import type { SchemeHistoryEntry } from '@/lib/review/list-scheme-history';
 import { utc } from './quantities';
+import { DataTable } from '@/components/ui/data-table';
 
 /** The scheme's audit trail: who did what, when, with the hash it concerned and the event's own chained hash. */
 export function SchemeHistory({ entries }: { entries: SchemeHistoryEntry[] }) {
   if (entries.length === 0) return <p className="text-sm text-ink-soft">No events yet.</p>;
   return (
-    <div className="overflow-x-auto">
-      <table className="w-full border-collapse text-sm">
-        <caption className="sr-only">History of the scheme</caption>
-        <thead>
-          <tr className="border-b border-paper-edge text-left text-ink-soft">
-            <th scope="col" className="py-2 pr-3">When</th>
-            <th scope="col" className="py-2 pr-3">Who</th>
-            <th scope="col" className="py-2 pr-3">What</th>
-            <th scope="col" className="py-2">Hash</th>
-          </tr>
-        </thead>
-        <tbody>
-          {entries.map((e) => (
-            <tr key={e.id} className="border-b border-paper-edge align-top">
-              <td className="num whitespace-nowrap py-1 pr-3 text-xs">{utc(e.at)}</td>
-              <td className="py-1 pr-3">{e.who}</td>
-              <td className="py-1 pr-3">{e.action}{e.what ? <span className="text-ink-soft"> · {e.what}</span> : null}</td>
-              <td className="num py-1 text-xs text-ink-faint" title={`Event hash ${e.eventHash}`}>{e.hash ? `${e.hash.slice(0, 16)}…` : `event ${e.eventHash.slice(0, 10)}…`}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable caption="History of the scheme" columns={[{ label: 'When' }, { label: 'Who' }, { label: 'What' }, { label: 'Hash' }]}>
+      {entries.map((e) => (
+        <tr key={e.id} className="border-b border-paper-edge align-top">
+          <td className="num whitespace-nowrap py-1 pr-3 text-xs">{utc(e.at)}</td>
+          <td className="py-1 pr-3">{e.who}</td>
+          <td className="py-1 pr-3">{e.action}{e.what ? <span className="text-ink-soft"> · {e.what}</span> : null}</td>
+          <td className="num py-1 text-xs text-ink-faint" title={`Event hash ${e.eventHash}`}>{e.hash ? `${e.hash.slice(0, 16)}…` : `event ${e.eventHash.slice(0, 10)}…`}</td>
+        </tr>
+      ))}
+    </DataTable>
   );
 }

@@ -2,7 +2,7 @@ import type { ParcelImpactTable } from '@/lib/parcels/compute-parcel-impact';
 import { distance, metres } from '@/lib/parcels/format-quantity';
 import { CategoryLabel } from '../../_components/category-label';
 import { ParcelStripSvg } from '../../_components/parcel-strip-svg';
-import { ScrollRegion } from '../../_components/scroll-region';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 type Flooding = ParcelImpactTable['rows'][number]['events'][number]['withScheme'];
 const wet = (f: Flooding) => (f === null ? 'not known' : f.inundatedLength === 0 ? 'dry' : `${distance(f.inundatedLength)}, ${metres(f.maxDepth)} deep`);

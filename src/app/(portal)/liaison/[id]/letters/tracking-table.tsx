@@ -1,7 +1,7 @@
 import Link from 'next/link';
 import type { TrackedLetter } from '@/lib/letters/list-letter-tracking';
 import { LetterStatusLabel } from '../../_components/letter-status-label';
-import { ScrollRegion } from '../../_components/scroll-region';
+import { DataTable } from '@/components/ui/data-table';
 
 const when = (iso: string | null) => (iso ? `${iso.replace('T', ' ').slice(0, 16)} UTC` : '—');
 
@@ -9,34 +9,19 @@ const when = (iso: string | null) => (iso ? `${iso.replace('T', ' ').slice(0, 16
 export function TrackingTable({ schemeId, parcels }: { schemeId: string; parcels: { reference: string; ownerName: string; letters: TrackedLetter[] }[] }) {
   if (parcels.length === 0) return <p className="text-sm text-ink-soft">No letters yet.</p>;
   return (
-    <ScrollRegion label="Letters by parcel">
-      <table className="w-full border-collapse text-sm">
-        <caption className="sr-only">Letters by parcel</caption>
-        <thead>
-          <tr className="border-b border-paper-edge text-left text-ink-soft">
-            <th scope="col" className="py-2 pr-3">Parcel</th>
-            <th scope="col" className="py-2 pr-3">Letter</th>
-            <th scope="col" className="py-2 pr-3">To</th>
-            <th scope="col" className="py-2 pr-3">Status</th>
-            <th scope="col" className="py-2 pr-3">Sent</th>
-            <th scope="col" className="py-2">Responses</th>
+    <DataTable caption="Letters by parcel" columns={[{ label: 'Parcel' }, { label: 'Letter' }, { label: 'To' }, { label: 'Status' }, { label: 'Sent' }, { label: 'Responses' }]}>
+      {parcels.flatMap((p) =>
+        p.letters.map((l, i) => (
+          <tr key={l.id} className="border-b border-paper-edge align-top">
+            {i === 0 ? <th scope="rowgroup" rowSpan={p.letters.length} className="py-2 pr-3 text-left font-normal"><span className="num font-semibold">{p.reference}</span><span className="block text-ink-soft">{p.ownerName}</span></th> : null}
+            <td className="py-2 pr-3"><Link className="text-accent underline" href={`/liaison/${schemeId}/letters/${l.id}`}>Version <span className="num">{l.version}</span>, revision <span className="num">{l.revisionNumber}</span></Link>{l.preliminary ? <span className="ml-1 text-xs font-semibold text-verdict-caution">PRELIMINARY</span> : null}</td>
+            <td className="py-2 pr-3">{l.recipient}</td>
+            <td className="py-2 pr-3"><LetterStatusLabel status={l.status} />{l.failureReason ? <span className="block text-xs text-verdict-fail">{l.failureReason}</span> : null}</td>
+            <td className="num py-2 pr-3">{when(l.sentAt)}</td>
+            <td className="num py-2">{l.responses}</td>
           </tr>
-        </thead>
-        <tbody>
-          {parcels.flatMap((p) =>
-            p.letters.map((l, i) => (
-              <tr key={l.id} className="border-b border-paper-edge align-top">
-                {i === 0 ? <th scope="rowgroup" rowSpan={p.letters.length} className="py-2 pr-3 text-left font-normal"><span className="num font-semibold">{p.reference}</span><span className="block text-ink-soft">{p.ownerName}</span></th> : null}
-                <td className="py-2 pr-3"><Link className="text-accent underline" href={`/liaison/${schemeId}/letters/${l.id}`}>Version <span className="num">{l.version}</span>, revision <span className="num">{l.revisionNumber}</span></Link>{l.preliminary ? <span className="ml-1 text-xs font-semibold text-verdict-caution">PRELIMINARY</span> : null}</td>
-                <td className="py-2 pr-3">{l.recipient}</td>
-                <td className="py-2 pr-3"><LetterStatusLabel status={l.status} />{l.failureReason ? <span className="block text-xs text-verdict-fail">{l.failureReason}</span> : null}</td>
-                <td className="num py-2 pr-3">{when(l.sentAt)}</td>
-                <td className="num py-2">{l.responses}</td>
-              </tr>
-            )),
-          )}
-        </tbody>
-      </table>
-    </ScrollRegion>
+        )),
+      )}
+    </DataTable>
   );
 }

@@ -1,5 +1,5 @@
 import type { ParcelRecord } from '@/lib/parcels/parcel-record';
-import { ScrollRegion } from '../../_components/scroll-region';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 /** The register read-only, for those who may see owner details but not change them, and for earlier versions. */
 export function ParcelTable({ parcels }: { parcels: ParcelRecord[] }) {

@@ -1,6 +1,6 @@
 import { PARCEL_COLUMNS, type ParcelColumn } from '@/lib/parcels/parcel-columns';
 import type { ParcelsCsvPreview } from '@/lib/parcels/preview-parcels-csv';
-import { ScrollRegion } from '../../_components/scroll-region';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 const COLUMNS = Object.keys(PARCEL_COLUMNS) as ParcelColumn[];
 
