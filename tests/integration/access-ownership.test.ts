@@ -1,33 +1,25 @@
 import path from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { Scheme } from '@/lib/db';
 import { ACTION_ACCESS, ACTION_OWNERSHIP, ROUTE_ACCESS, ROUTE_OWNERSHIP, type Access, type Ownership } from './support/access-matrix';
 import { databaseDigest } from './support/database-digest';
 import { OWNED_ACTION_CALLS, OWNED_ROUTE_CALLS, OWNERS, WRONG_OWNERS } from './support/ownership-calls';
-import { PERSON_ROLE, createPortalWorld, type Person, type PortalWorld } from './support/portal-world';
+import { PERSON_ROLE, type Person, usePortalWorld } from './support/portal-world';
 import { callRoute } from './support/scheme-requests';
 import { signedInAs } from './support/session-double';
-import { useTestDatabase } from './support/test-database';
 
 // The "wrong owner" column of the role matrix: someone of an allowed role who does not own the record gets 404
 // (403 for a revision assigned to another checker), never 2xx, and nothing changes; its owner gets past the check.
 
 const APP = path.resolve('src/app');
-let db: Awaited<ReturnType<typeof useTestDatabase>>;
-let world: PortalWorld;
+const portal = usePortalWorld();
 let references: string[];
 
 beforeAll(async () => {
-  db = await useTestDatabase();
-  world = await createPortalWorld();
   references = (await Scheme.findAll()).map((s) => s.reference);
 });
-afterAll(async () => {
-  signedInAs(null);
-  await db.cleanup();
-});
 
-const as = (person: Person) => signedInAs(world.people[person].sessionUser);
+const as = (person: Person) => signedInAs(portal.world.people[person].sessionUser);
 const allows = (access: Access, person: Person) => access === 'public' || access.includes(PERSON_ROLE[person]);
 type Owned = Exclude<Ownership, 'none' | 'shared'>;
 const owned = (o: Ownership): o is Owned => o !== 'none' && o !== 'shared';
@@ -36,13 +28,13 @@ const routes = Object.entries(ROUTE_ACCESS).flatMap(([route, methods]) => Object
 const actions = Object.entries(ACTION_ACCESS).flatMap(([folder, names]) => Object.entries(names).map(([name, access]) => ({ key: `${folder} ${name}`, folder, name, access, ownership: ACTION_OWNERSHIP[folder]?.[name] })));
 
 async function callOwnedRoute(entry: (typeof routes)[number]): Promise<{ status: number; text: string }> {
-  const response = await callRoute(entry.route.replace(/^api\//, ''), entry.method, OWNED_ROUTE_CALLS[entry.key](world));
+  const response = await callRoute(entry.route.replace(/^api\//, ''), entry.method, OWNED_ROUTE_CALLS[entry.key](portal.world));
   return { status: response.status, text: await response.text() };
 }
 
 async function callOwnedAction(entry: (typeof actions)[number], who: Person): Promise<{ status: number; text: string }> {
   const module = (await import(path.join(APP, entry.folder, 'actions.ts'))) as Record<string, (raw: unknown) => Promise<{ ok: boolean; status?: number }>>;
-  const answer = await module[entry.name](OWNED_ACTION_CALLS[entry.key](world, who));
+  const answer = await module[entry.name](OWNED_ACTION_CALLS[entry.key](portal.world, who));
   return { status: answer.ok ? 200 : (answer.status ?? 0), text: JSON.stringify(answer) };
 }
 
@@ -78,12 +70,12 @@ describe('a user of the allowed role who does not own the record is refused, and
 
   it('a planning officer sees no draft of a certified scheme (only its countersigned revision)', async () => {
     as('planning');
-    expect((await callRoute('schemes/[id]', 'GET', { id: world.certified.schemeId })).status).toBe(200);
-    expect((await callRoute('revisions/[id]', 'GET', { id: world.certified.revisionId })).status).toBe(200);
-    expect((await callRoute('revisions/[id]', 'GET', { id: world.certified.laterDraftId })).status).toBe(404);
-    expect((await callRoute('evaluate', 'POST', { json: { revisionId: world.certified.laterDraftId } })).status).toBe(404);
-    expect((await callRoute('schemes/[id]/case-file', 'GET', { id: world.certified.schemeId, query: 'revision=2' })).status).toBe(404);
-    const latest = await callRoute('schemes/[id]/case-file', 'GET', { id: world.certified.schemeId });
+    expect((await callRoute('schemes/[id]', 'GET', { id: portal.world.certified.schemeId })).status).toBe(200);
+    expect((await callRoute('revisions/[id]', 'GET', { id: portal.world.certified.revisionId })).status).toBe(200);
+    expect((await callRoute('revisions/[id]', 'GET', { id: portal.world.certified.laterDraftId })).status).toBe(404);
+    expect((await callRoute('evaluate', 'POST', { json: { revisionId: portal.world.certified.laterDraftId } })).status).toBe(404);
+    expect((await callRoute('schemes/[id]/case-file', 'GET', { id: portal.world.certified.schemeId, query: 'revision=2' })).status).toBe(404);
+    const latest = await callRoute('schemes/[id]/case-file', 'GET', { id: portal.world.certified.schemeId });
     expect(latest.status).toBe(200);
     expect(JSON.parse(await latest.text()).scheme).toMatchObject({ revision: 1, status: 'countersigned' });
   });

@@ -1,13 +1,12 @@
 import path from 'node:path';
 import fc from 'fast-check';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { dotted, garbageJsonText, mutatedJsonText } from '../support/hostile-json';
 import { ACTION_ACCESS } from './support/access-matrix';
 import { expectRefusal, withoutChange } from './support/hostile-checks';
 import { ACTION_TARGETS } from './support/hostile-targets';
-import { createPortalWorld, type PortalWorld } from './support/portal-world';
+import { usePortalWorld } from './support/portal-world';
 import { signedInAs } from './support/session-double';
-import { useTestDatabase } from './support/test-database';
 
 // Every server action, called as the role allowed to call it with random and hostile values (what a forged
 // request could make React deserialise: Maps, Dates, BigInts, sparse arrays, null prototypes, deep nesting):
@@ -15,17 +14,8 @@ import { useTestDatabase } from './support/test-database';
 
 const RUNS = 30;
 const APP = path.resolve('src/app');
-let db: Awaited<ReturnType<typeof useTestDatabase>>;
-let world: PortalWorld;
+const portal = usePortalWorld();
 
-beforeAll(async () => {
-  db = await useTestDatabase();
-  world = await createPortalWorld();
-});
-afterAll(async () => {
-  signedInAs(null);
-  await db.cleanup();
-});
 
 type Action = (raw: unknown) => Promise<{ ok: boolean; status?: number; error?: string; issues?: unknown }>;
 
@@ -56,7 +46,7 @@ for (const [folder, actions] of Object.entries(ACTION_ACCESS)) {
   for (const name of Object.keys(actions)) {
     const target = ACTION_TARGETS[`${folder} ${name}`];
     describe(`${folder} ${name}`, () => {
-      const signIn = () => signedInAs(target.role === 'anonymous' ? null : world.people[target.role].sessionUser);
+      const signIn = () => signedInAs(target.role === 'anonymous' ? null : portal.world.people[target.role].sessionUser);
 
       it('refuses garbage with 400 and field paths, changing nothing', async () => {
         const run = await action(folder, name);
@@ -74,7 +64,7 @@ for (const [folder, actions] of Object.entries(ACTION_ACCESS)) {
       it('refuses a field of the wrong type, a huge number or a deep nest with 400 naming that field', async () => {
         const run = await action(folder, name);
         await fc.assert(
-          fc.asyncProperty(mutatedJsonText(target.valid(world)), async ({ path: at, text }) => {
+          fc.asyncProperty(mutatedJsonText(target.valid(portal.world)), async ({ path: at, text }) => {
             signIn();
             const answer = await withoutChange(() => run(JSON.parse(text)));
             expect(answer.ok).toBe(false);

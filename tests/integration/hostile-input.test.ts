@@ -1,32 +1,22 @@
 import fc from 'fast-check';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { dotted, garbageJsonText, mutatedJsonText, nestedArrays } from '../support/hostile-json';
 import { ACTION_ACCESS, ROUTE_ACCESS } from './support/access-matrix';
 import { expectPreviewIssues, expectRefusal, refusalOf, withoutChange } from './support/hostile-checks';
 import { ACTION_TARGETS, JSON_BODY_TARGETS, RAW_BODY_TARGETS, type JsonBodyTarget } from './support/hostile-targets';
-import { createPortalWorld, type Person, type PortalWorld } from './support/portal-world';
+import { usePortalWorld, type Person, type PortalWorld } from './support/portal-world';
 import { callRoute } from './support/scheme-requests';
 import { signedInAs } from './support/session-double';
-import { useTestDatabase } from './support/test-database';
 
 // Random and hostile bodies sent to every route handler that reads one, as the role allowed to call it:
 // each is refused with 400 (413 when oversized) and field paths, never a 500, and changes nothing stored.
 // Server actions are fuzzed the same way in hostile-input-actions.test.ts.
 
 const RUNS = 30;
-let db: Awaited<ReturnType<typeof useTestDatabase>>;
-let world: PortalWorld;
+const portal = usePortalWorld();
 
-beforeAll(async () => {
-  db = await useTestDatabase();
-  world = await createPortalWorld();
-});
-afterAll(async () => {
-  signedInAs(null);
-  await db.cleanup();
-});
 
-const as = (person: Person) => signedInAs(world.people[person].sessionUser);
+const as = (person: Person) => signedInAs(portal.world.people[person].sessionUser);
 const split = (key: string) => {
   const [method, route] = key.split(' ');
   return { method, route: route.replace(/^api\//, '') };
@@ -35,7 +25,7 @@ const split = (key: string) => {
 function sendJson(key: string, target: Pick<JsonBodyTarget, 'role' | 'id' | 'query'>, body: BodyInit, headers: Record<string, string> = {}) {
   const { method, route } = split(key);
   as(target.role);
-  return callRoute(route, method, { id: target.id?.(world), query: target.query?.(world), body, headers: { 'content-type': 'application/json', ...headers } });
+  return callRoute(route, method, { id: target.id?.(portal.world), query: target.query?.(portal.world), body, headers: { 'content-type': 'application/json', ...headers } });
 }
 
 describe('the fuzz targets cover every route that reads a body', () => {
@@ -46,7 +36,7 @@ describe('the fuzz targets cover every route that reads a body', () => {
         const key = `${method} ${route}`;
         const targets = [...(JSON_BODY_TARGETS[key] ?? []), ...(RAW_BODY_TARGETS[key] ? [RAW_BODY_TARGETS[key]] : [])];
         expect(targets.length, `${key} has no fuzz target in support/hostile-targets.ts`).toBeGreaterThan(0);
-        for (const t of targets) expect(access === 'public' || access.includes(world.people[t.role].sessionUser.role), `${key} fuzzed as ${t.role}`).toBe(true);
+        for (const t of targets) expect(access === 'public' || access.includes(portal.world.people[t.role].sessionUser.role), `${key} fuzzed as ${t.role}`).toBe(true);
       }
     }
     for (const [folder, actions] of Object.entries(ACTION_ACCESS)) for (const name of Object.keys(actions)) expect(ACTION_TARGETS[`${folder} ${name}`], `${folder} ${name} has no fuzz target`).toBeDefined();
@@ -70,7 +60,7 @@ describe('JSON bodies', () => {
 
       it(`${label}: a field of the wrong type, a huge number or a deep nest gets 400 naming that field`, async () => {
         await fc.assert(
-          fc.asyncProperty(mutatedJsonText(target.valid(world)), async ({ path, text }) => {
+          fc.asyncProperty(mutatedJsonText(target.valid(portal.world)), async ({ path, text }) => {
             const refusal = await withoutChange(async () => refusalOf(await sendJson(key, target, text)));
             expectRefusal(refusal, { label: `${label} at ${dotted(path)}`, field: (target.fieldOf ?? dotted)(path) });
           }),
@@ -147,7 +137,7 @@ describe('query strings', () => {
       await fc.assert(
         fc.asyncProperty(fc.dictionary(fc.constantFrom(...params, '__proto__', 'constructor'), value, { maxKeys: params.length + 1 }), async (query) => {
           as(person);
-          const response = await callRoute(route, 'GET', { id: id(world), query: new URLSearchParams(query).toString() });
+          const response = await callRoute(route, 'GET', { id: id(portal.world), query: new URLSearchParams(query).toString() });
           expect(response.status, `${route}?${JSON.stringify(query).slice(0, 200)}`).toBeLessThan(500);
           if (response.status >= 400) expectRefusal(await refusalOf(response), { statuses: [400, 404, 422], label: route });
         }),

@@ -1,34 +1,24 @@
 import { readFileSync, readdirSync, statSync } from 'node:fs';
 import path from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { parseParcelsCsv } from '@/lib/parcels/parcels-csv';
 import { ROUTE_ACCESS, type Access } from './support/access-matrix';
 import { demoParcelsCsv } from './support/liaison-fixtures';
-import { PERSON_ROLE, createPortalWorld, type Person, type PortalWorld } from './support/portal-world';
+import { PERSON_ROLE, usePortalWorld, type Person, type PortalWorld } from './support/portal-world';
 import { callRoute } from './support/scheme-requests';
 import { signedInAs } from './support/session-double';
-import { useTestDatabase } from './support/test-database';
 
 // Landowners' names, addresses and e-mails reach only the liaison officers, admins and the scheme's own designer
 // and checker; and the audit log has no way in code to be changed or deleted.
 
 const APP = path.resolve('src/app');
-let db: Awaited<ReturnType<typeof useTestDatabase>>;
-let world: PortalWorld;
+const portal = usePortalWorld();
 
 const owners = parseParcelsCsv(demoParcelsCsv().toString('utf8')).rows.flatMap((r) => (r.parcel ? [r.parcel] : []));
 const personalData = owners.flatMap((p) => [p.ownerName, p.postalAddress, p.email].filter((v): v is string => Boolean(v)));
 
-beforeAll(async () => {
-  // next.config.mjs turns on experimental.authInterrupts (forbidden()); `next build` passes it to the server this way.
-  process.env.__NEXT_EXPERIMENTAL_AUTH_INTERRUPTS = 'true';
-  db = await useTestDatabase();
-  world = await createPortalWorld();
-});
-afterAll(async () => {
-  signedInAs(null);
-  await db.cleanup();
-});
+// next.config.mjs turns on experimental.authInterrupts (forbidden()); `next build` passes it to the server this way.
+process.env.__NEXT_EXPERIMENTAL_AUTH_INTERRUPTS = 'true';
 
 const allows = (access: Access, person: Person) => access === 'public' || access.includes(PERSON_ROLE[person]);
 const ids = (w: PortalWorld) => [w.certified.schemeId, w.certified.revisionId, w.certified.laterDraftId, w.certified.certificateId, w.draft.schemeId, w.draft.revisionId, w.letters.letterId, w.letters.batchId];
@@ -38,8 +28,8 @@ async function everyGet(person: Person): Promise<{ what: string; status: number;
   const answers = [];
   for (const [route, methods] of Object.entries(ROUTE_ACCESS)) {
     if (!methods.GET || !allows(methods.GET, person)) continue;
-    for (const id of route.includes('[id]') ? ids(world) : ['none']) {
-      signedInAs(world.people[person].sessionUser);
+    for (const id of route.includes('[id]') ? ids(portal.world) : ['none']) {
+      signedInAs(portal.world.people[person].sessionUser);
       const response = await callRoute(route.replace(/^api\//, ''), 'GET', { id });
       answers.push({ what: `GET /${route} ${id}`, status: response.status, text: Buffer.from(await response.arrayBuffer()).toString('latin1') });
     }
@@ -50,8 +40,8 @@ async function everyGet(person: Person): Promise<{ what: string; status: number;
 describe('owner details in GET responses', () => {
   it('the search finds them where they belong: the liaison officer’s register', async () => {
     expect(personalData.length).toBeGreaterThan(10);
-    signedInAs(world.people.liaison.sessionUser);
-    const register = await callRoute('parcels/[id]', 'GET', { id: world.certified.schemeId });
+    signedInAs(portal.world.people.liaison.sessionUser);
+    const register = await callRoute('parcels/[id]', 'GET', { id: portal.world.certified.schemeId });
     expect(leaks(await register.text()).length).toBeGreaterThan(0);
   });
 
@@ -70,8 +60,8 @@ describe('owner details in pages', () => {
     it(`every liaison page refuses ${person} before rendering anything (403 or 404 page)`, async () => {
       for (const page of liaisonPages) {
         const module = (await import(path.join(APP, '(portal)', page, 'page.tsx'))) as { default: (props: unknown) => Promise<unknown> };
-        signedInAs(world.people[person].sessionUser);
-        const rendering = module.default({ params: Promise.resolve({ id: world.certified.schemeId, letterId: world.letters.letterId }), searchParams: Promise.resolve({}) });
+        signedInAs(portal.world.people[person].sessionUser);
+        const rendering = module.default({ params: Promise.resolve({ id: portal.world.certified.schemeId, letterId: portal.world.letters.letterId }), searchParams: Promise.resolve({}) });
         await expect(rendering, page).rejects.toMatchObject({ digest: expect.stringMatching(/^NEXT_HTTP_ERROR_FALLBACK;(403|404)$/) });
       }
     });

@@ -1,30 +1,20 @@
 import { existsSync, readFileSync, readdirSync } from 'node:fs';
 import path from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { Upload } from '@/lib/db';
 import { dataDirectory } from '@/lib/db/database-path';
 import { uploadsDirectory } from '@/lib/uploads/store-upload';
 import { caseFileText, demoParcelsCsv } from './support/liaison-fixtures';
-import { createPortalWorld, type Person, type PortalWorld } from './support/portal-world';
+import { usePortalWorld, type Person, type PortalWorld } from './support/portal-world';
 import { callRoute } from './support/scheme-requests';
 import { signedInAs } from './support/session-double';
 import { tableSnapshot } from './support/table-snapshot';
-import { useTestDatabase } from './support/test-database';
 
 // Uploads of every kind (survey CSV, parcels CSV, case file): a hostile file name is only a label, the bytes decide
 // the type, the size is bounded, and the files land under a random name in the data directory, never in public/.
 // (schemes-survey-upload.test.ts covers the survey's CSV problems, a workbook renamed .csv and the 50 MB stream.)
 
-let db: Awaited<ReturnType<typeof useTestDatabase>>;
-let world: PortalWorld;
-beforeAll(async () => {
-  db = await useTestDatabase();
-  world = await createPortalWorld();
-});
-afterAll(async () => {
-  signedInAs(null);
-  await db.cleanup();
-});
+const portal = usePortalWorld();
 
 type Kind = 'survey' | 'parcels' | 'case';
 const KINDS: Record<Kind, { route: string; who: Person; id?: (w: PortalWorld) => string; query?: (w: PortalWorld) => string; body: () => Uint8Array<ArrayBuffer>; type: string; ext: string; limit: number }> = {
@@ -35,8 +25,8 @@ const KINDS: Record<Kind, { route: string; who: Person; id?: (w: PortalWorld) =>
 
 function upload(kind: Kind, body: BodyInit, headers: Record<string, string> = {}) {
   const k = KINDS[kind];
-  signedInAs(world.people[k.who].sessionUser);
-  return callRoute(k.route, 'POST', { id: k.id?.(world), query: k.query?.(world), body, headers: { 'content-type': k.type, ...headers } });
+  signedInAs(portal.world.people[k.who].sessionUser);
+  return callRoute(k.route, 'POST', { id: k.id?.(portal.world), query: k.query?.(portal.world), body, headers: { 'content-type': k.type, ...headers } });
 }
 
 const HOSTILE_NAMES = ['../../etc/passwd', '..\\x.csv', '%2e%2e%2f%2e%2e%2fetc%2fpasswd', '/var/lib/sillmark/evil.csv', 'C:\\Windows\\System32\\evil.csv', 'nul\u0000byte.csv', `${'a'.repeat(5000)}.csv`, '....//....//x', '%E0%A4%A'];

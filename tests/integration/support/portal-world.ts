@@ -1,3 +1,4 @@
+import { afterAll, beforeAll } from 'vitest';
 import type { Role } from '@/lib/auth/roles';
 import { Letter, database } from '@/lib/db';
 import { generateLettersAction } from '@/app/(portal)/liaison/[id]/letters/actions';
@@ -6,6 +7,7 @@ import { demoParcelsCsv } from './liaison-fixtures';
 import { createCertifiedScheme, createDraftRevision, createTestScheme, demoCase } from './scheme-factory';
 import { callRoute } from './scheme-requests';
 import { signedInAs } from './session-double';
+import { useTestDatabase } from './test-database';
 import { createTestUser } from './user-factory';
 
 type TestPerson = Awaited<ReturnType<typeof createTestUser>>;
@@ -47,3 +49,26 @@ export async function createPortalWorld() {
   };
 }
 export type PortalWorld = Awaited<ReturnType<typeof createPortalWorld>>;
+
+/**
+ * For one test file: a fresh database with the world in it, made before the file's tests; afterwards nobody is
+ * signed in and the database is removed. Read `world` inside hooks and tests only.
+ */
+export function usePortalWorld(): { readonly world: PortalWorld } {
+  let db: Awaited<ReturnType<typeof useTestDatabase>> | undefined;
+  let world: PortalWorld | undefined;
+  beforeAll(async () => {
+    db = await useTestDatabase();
+    world = await createPortalWorld();
+  });
+  afterAll(async () => {
+    signedInAs(null);
+    await db?.cleanup();
+  });
+  return {
+    get world() {
+      if (!world) throw new Error('the portal world is made in beforeAll: use it inside a hook or a test');
+      return world;
+    },
+  };
+}
