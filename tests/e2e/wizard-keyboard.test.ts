@@ -37,13 +37,14 @@ describe('the wizard by keyboard alone, from signing in to adopting the sized cr
   });
 
   it('signs in, creates a scheme and enters its channel without a pointer', async () => {
-    await page.goto(`${portal.app.baseUrl}/sign-in`);
+    await page.goto(`${portal.app.baseUrl}/sign-in`, { waitUntil: 'networkidle' });
     await typeInto(page, 'E-mail address', designer.email);
     await typeInto(page, 'Password', designer.password);
     await page.keyboard.press('Enter');
     await page.waitForURL(`${portal.app.baseUrl}/home`);
 
-    await page.goto(`${portal.app.baseUrl}/schemes/new`);
+    // Keys pressed before the page hydrates would go to a form without its handlers.
+    await page.goto(`${portal.app.baseUrl}/schemes/new`, { waitUntil: 'networkidle' });
     await typeInto(page, 'Scheme name', 'Keyboard walk weir');
     await typeInto(page, 'Watercourse', 'River Wendle');
     await typeInto(page, 'Site', 'Harrowfield Mill tail race');

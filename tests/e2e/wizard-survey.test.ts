@@ -94,7 +94,7 @@ describe('a designer builds a scheme on surveyed cross-sections from a CSV file'
     expect(chart.inked / chart.total).toBeGreaterThan(0.02);
     await page.screenshot({ path: 'tests/.artifacts/wizard-us-results-tablet.png', fullPage: true });
     await page.getByRole('link', { name: /Structure/ }).click();
-    expect(await page.getByLabel('Crest length (ft)').inputValue()).not.toBe('');
+    await expect.poll(() => page.getByLabel('Crest length (ft)').inputValue()).not.toBe('');
     await context.close();
   });
 
