@@ -17,10 +17,17 @@ export interface ControlAdjustments {
   designHead?: Metres;
 }
 
-export function weirSpecOf(control: WeirControl, adjust: ControlAdjustments = {}): WeirSpec {
-  const { type: _type, ...fields } = control;
+/** The downstream depth the case gives at the structure: `tailwaterDepth`, or the key it replaced in version 1 files. */
+export function givenTailwaterDepth(control: WeirControl): Metres | undefined {
+  return control.tailwaterDepth ?? control.tailwaterLevel;
+}
+
+export function weirSpecOf(control: WeirControl, adjust: ControlAdjustments = {}, downstreamDepth?: Metres): WeirSpec {
+  const { type: _type, tailwaterLevel: _deprecated, tailwaterDepth: _given, ...fields } = control;
+  const tailwaterDepth = downstreamDepth ?? givenTailwaterDepth(control);
   return {
     ...fields,
+    ...(tailwaterDepth !== undefined ? { tailwaterDepth } : {}),
     crestLength: adjust.crestLength ?? control.crestLength ?? 0,
     sillHeight: adjust.sillHeight ?? control.sillHeight,
     ...(control.designHead === undefined && adjust.designHead !== undefined ? { designHead: adjust.designHead } : {}),
@@ -37,10 +44,19 @@ export interface StructureOutcome {
   warnings: string[];
 }
 
-/** What the structure alone does at this discharge, before comparing with the downstream level. */
-export function structureOutcome(control: CaseControl, approach: FlowSection, discharge: CubicMetresPerSecond, adjust: ControlAdjustments = {}): StructureOutcome {
+/**
+ * What the structure does at this discharge against the water downstream of it (`downstreamDepth` above the bed, the
+ * case's own tailwater when it gives one): the upstream head for which it passes the discharge, submerged or free.
+ */
+export function structureOutcome(
+  control: CaseControl,
+  approach: FlowSection,
+  discharge: CubicMetresPerSecond,
+  adjust: ControlAdjustments = {},
+  downstreamDepth?: Metres,
+): StructureOutcome {
   if (control.type === 'depth') return { head: 0, depth: control.depth, weir: null, warnings: [] };
-  const spec = weirSpecOf(control, adjust);
+  const spec = weirSpecOf(control, adjust, downstreamDepth);
   const result = weirHead(spec, discharge, approach, { field: 'control' });
   const weir: WeirDetails = {
     kind: spec.kind,
@@ -51,6 +67,8 @@ export function structureOutcome(control: CaseControl, approach: FlowSection, di
     coefficient: result.coefficient,
     coefficientSource: result.coefficientSource,
     coefficientIsDefault: result.coefficientIsDefault,
+    coefficientForm: result.coefficientForm,
+    tailwaterDepth: spec.tailwaterDepth ?? null,
     submergence: result.submergence,
     validity: result.validity,
     designHead: spec.kind === 'ogee' ? (spec.designHead ?? result.energyHead) : null,

@@ -42,6 +42,8 @@ function weir(w: WeirDetails, b: Back): WeirDetails {
     energyHead: L(w.energyHead),
     approachVelocity: L(w.approachVelocity),
     coefficient: w.kind === 'ogee' ? b.weirCoefficient(w.coefficient) : w.coefficient,
+    coefficientForm: w.coefficientForm.unit === 'm^½/s' && b.weirCoefficient(1) !== 1 ? { ...w.coefficientForm, unit: 'ft^½/s' } : w.coefficientForm,
+    tailwaterDepth: w.tailwaterDepth === null ? null : L(w.tailwaterDepth),
     submergence: w.submergence && { ...w.submergence, tailwaterHead: L(w.submergence.tailwaterHead) },
     validity: w.validity.map((c) => check(c, b)),
     designHead: w.designHead === null ? null : L(w.designHead),
@@ -74,8 +76,12 @@ function eventBack(e: EventResult, b: Back): EventResult {
     profile: e.profile.map((p) => point(p, b)),
     selfCheck: e.selfCheck && { ...e.selfCheck, maxLevelDifference: L(e.selfCheck.maxLevelDifference) },
     withoutScheme: { ...e.withoutScheme, controlDepth: L(e.withoutScheme.controlDepth), controlLevel: L(e.withoutScheme.controlLevel), profile: e.withoutScheme.profile.map((p) => point(p, b)) },
-    afflux: { atControl: L(e.afflux.atControl), max: L(e.afflux.max) },
-    extent: { ...e.extent, distanceUpstream: L(e.extent.distanceUpstream) },
+    afflux: { atControl: L(e.afflux.atControl), max: L(e.afflux.max), min: L(e.afflux.min) },
+    extent: {
+      ...e.extent,
+      distanceUpstream: L(e.extent.distanceUpstream),
+      ...(e.extent.affluxAtReachEnd !== undefined ? { affluxAtReachEnd: L(e.extent.affluxAtReachEnd) } : {}),
+    },
     jump: e.jump && { distanceUpstream: L(e.jump.distanceUpstream), upstreamDepth: L(e.jump.upstreamDepth), downstreamDepth: L(e.jump.downstreamDepth) },
     inundation: e.inundation && inundationBack(e.inundation, b),
     limits: e.limits.map((l) => ({

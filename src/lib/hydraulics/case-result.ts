@@ -1,4 +1,5 @@
 // The result of evaluating a case file. Distances are measured upstream from the control section.
+import type { ExtentOfImpact } from './impact/extent-of-impact';
 import type { LimitCheck } from './impact/flood-limits';
 import type { InundationComparison } from './impact/inundation';
 import type { CrestSizingResult } from './design/crest-sizing';
@@ -7,7 +8,7 @@ import type { ProfilePoint, ProfileStop, RefinementReport, SelfCheckReport } fro
 import type { ProfileType } from './profiles/profile-type';
 import type { SlopeClass } from './slope-class';
 import type { CubicMetresPerSecond, Metres } from './units';
-import type { SubmergenceState, ValidityCheck, WeirKind } from './weirs';
+import type { CoefficientForm, SubmergenceState, ValidityCheck, WeirKind } from './weirs';
 
 export type Verdict = 'pass' | 'fail';
 
@@ -20,6 +21,10 @@ export interface WeirDetails {
   coefficient: number;
   coefficientSource: string;
   coefficientIsDefault: boolean;
+  /** The equation the coefficient belongs to and its unit (the unit in the case's own units in a US result). */
+  coefficientForm: CoefficientForm;
+  /** Depth of the water downstream above the bed that the structure was rated against; null in free flow. */
+  tailwaterDepth: Metres | null;
   submergence: SubmergenceState | null;
   validity: ValidityCheck[];
   /** Ogee only: the design head the coefficient was read at. */
@@ -79,8 +84,9 @@ export interface EventResult {
   refinement: RefinementReport;
   selfCheck: SelfCheckReport | null;
   withoutScheme: WithoutSchemeResult;
-  afflux: { atControl: Metres; max: Metres };
-  extent: { distanceUpstream: Metres; endsBy: string; warning?: string };
+  /** Afflux at the control, its largest rise and its deepest drawdown (≤ 0; negative afflux). */
+  afflux: { atControl: Metres; max: Metres; min: Metres };
+  extent: ExtentOfImpact;
   jump: { distanceUpstream: Metres; upstreamDepth: Metres; downstreamDepth: Metres } | null;
   /** Null when the case gives no bank height or bank levels to check against. */
   inundation: InundationComparison | null;

@@ -60,6 +60,7 @@ function controlToSI(control: CaseInput['control'], k: UnitScale): CaseInput['co
     channelWidth: scaled(control.channelWidth, L),
     designHead: scaled(control.designHead, L),
     tailwaterLevel: scaled(control.tailwaterLevel, L),
+    tailwaterDepth: scaled(control.tailwaterDepth, L),
     ratingTable: control.ratingTable?.map(([level, q]) => [level * L, q * k.discharge] as [number, number]),
   };
 }

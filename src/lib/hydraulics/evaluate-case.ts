@@ -5,7 +5,8 @@ import { type CaseRunner, caseSensitivity, crestSizing, type RunOptions } from '
 import { reachModel } from './case-reach';
 import type { CaseResult, EventResult } from './case-result';
 import { resultToUS } from './case-result-units';
-import { caseToSI } from './case-units';
+import { casePlausibility } from './case-plausibility';
+import { caseToSI, unitScale } from './case-units';
 import { EngineError, InvalidInputError, NoPhysicalSolutionError } from './errors';
 import { evaluateEvent } from './evaluate-event';
 import { ENGINE_VERSION } from './version';
@@ -20,14 +21,6 @@ const runEvents: CaseRunner = (input, opts) => {
   return input.events.map((event, i) => evaluateEvent(event, i, { input, model, adjust, dischargeFactor: opts.dischargeFactor, skipSelfCheck: opts.skipSelfCheck }));
 };
 
-function checkLimitsWithinReach(input: CaseInput, reachLength: number): void {
-  input.limits.forEach((limit, i) => {
-    if (limit.distanceUpstream > reachLength * (1 + 1e-12)) {
-      throw new InvalidInputError(`limits[${i}].distanceUpstream`, `lies beyond the upstream end of the reach (${reachLength} m from the control)`);
-    }
-  });
-}
-
 function governingEvent(events: readonly EventResult[]): CaseResult['governingEvent'] {
   let best: CaseResult['governingEvent'] = null;
   events.forEach((e, index) => {
@@ -36,8 +29,8 @@ function governingEvent(events: readonly EventResult[]): CaseResult['governingEv
   return best;
 }
 
-function caseWarnings(input: CaseInput, events: readonly EventResult[]): string[] {
-  const warnings: string[] = [];
+function caseWarnings(input: CaseInput, events: readonly EventResult[], plausibility: readonly string[]): string[] {
+  const warnings: string[] = [...plausibility];
   if (input.limits.length === 0) warnings.push('No limits were given: the verdict "pass" only means that nothing was checked against a limit.');
   const seen = new Set<string>();
   for (const event of events) {
@@ -52,7 +45,8 @@ function caseWarnings(input: CaseInput, events: readonly EventResult[]): string[
 
 function evaluateInSI(input: CaseInput): CaseResult {
   const si = caseToSI(input);
-  checkLimitsWithinReach(si, reachModel(si.reach).length);
+  const scale = unitScale(input.units).length;
+  const plausibility = casePlausibility(si, reachModel(si.reach), { toCaseUnits: (m) => m / scale, unit: input.units === 'US' ? 'ft' : 'm' });
   const events = runEvents(si, BASE_RUN);
   const governing = governingEvent(events);
   return {
@@ -60,7 +54,7 @@ function evaluateInSI(input: CaseInput): CaseResult {
     title: input.title ?? '',
     units: 'SI',
     verdict: events.every((e) => e.verdict === 'pass') ? 'pass' : 'fail',
-    warnings: caseWarnings(si, events),
+    warnings: caseWarnings(si, events, plausibility),
     events,
     governingEvent: governing,
     sizing: crestSizing(si, runEvents),

@@ -1,13 +1,12 @@
 // One flood event through the case: flow regime, control, profiles with and without the scheme, impact, limits.
 import type { CaseInput } from '@/lib/validation/case-schema';
 import type { ControlAdjustments } from './case-control';
-import { structureOutcome } from './case-control';
 import type { ReachModel } from './case-reach';
 import type { ControlResult, EventResult, WithoutSchemeResult } from './case-result';
-import { controlDepth } from './control-depth';
 import { criticalDepth } from './critical-depth';
 import { InvalidInputError, NoPhysicalSolutionError } from './errors';
 import { withSchemeProfile, withoutSchemeLevels } from './event-profiles';
+import { type HeldControl, heldControl } from './event-control';
 import { eventImpact } from './event-impact';
 import { normalDepth } from './normal-depth';
 import type { GvfProfile, ProfilePoint } from './profiles/profile-point';
@@ -61,6 +60,20 @@ function profileSettingsLocatingImpact(input: CaseInput, yn: Metres | null, warn
   return { ...input.profile, normalDepthTolerance: locating };
 }
 
+/**
+ * What the control does in words. A given depth is a boundary condition: above the level without the scheme it heads
+ * the water up, below it the water is drawn down towards it (M2 on a mild bed; Chow, Open-Channel Hydraulics, 1959,
+ * §9-3 — from memory). Only a structure can fail to control.
+ */
+function controlExplanation(input: CaseInput, held: HeldControl, withoutDepth: Metres): string | null {
+  if (!held.controls) return held.explanation;
+  if (input.control.type === 'depth' && held.startDepth < withoutDepth) {
+    return `The given depth at the control (${m(held.startDepth)}) is below the level without the scheme (${m(withoutDepth)} deep): the water is drawn down upstream of it, shown as negative afflux.`;
+  }
+  if (held.startDepth <= withoutDepth) return held.explanation;
+  return null;
+}
+
 /** Evaluates one event in SI units. */
 export function evaluateEvent(event: CaseEvent, index: number, ctx: EventContext): EventResult {
   const { model, input } = ctx;
@@ -74,23 +87,21 @@ export function evaluateEvent(event: CaseEvent, index: number, ctx: EventContext
   const warnings: string[] = [];
   if (yn === null) warnings.push(`The bed is ${slopeClass}: uniform flow cannot exist, so normalDepth is reported as 0, meaning none.`);
 
-  const structure = structureOutcome(input.control, section, discharge, ctx.adjust);
-  warnings.push(...structure.warnings);
-  // A depth control holds its depth with no head over a crest: it enters as a sill of that height.
-  const held = controlDepth({ sillHeight: structure.depth - structure.head, head: structure.head, criticalDepth: yc, normalDepth: yn });
-  if (!held.controls) throw new NoPhysicalSolutionError('control', 'control-below-critical', held.explanation ?? 'the structure does not control the flow');
-
   const without = withoutSchemeStart(ctx, yn, yc);
-  // A structure lower than the level the channel downstream already holds is drowned by it and raises nothing.
-  const drowned = without.depth >= yc && held.depth < without.depth;
-  const startDepth = drowned ? without.depth : held.depth;
-  if (drowned) warnings.push(`The level without the scheme (${m(without.depth)} deep at the control) is above the depth the structure holds (${m(held.depth)}): the structure is drowned and causes no backwater.`);
-  else if (held.explanation) warnings.push(held.explanation);
+  const held = heldControl(input, section, discharge, ctx.adjust, without.depth, yc, yn);
+  warnings.push(...held.warnings);
+  const { structure, startDepth } = held;
+  const explanation = controlExplanation(input, held, without.depth);
+  if (explanation) warnings.push(explanation);
+  const bankAtControl = model.bankLevelAt?.(0);
+  if (held.controls && bankAtControl !== undefined && model.bedLevelAtControl + startDepth > bankAtControl) {
+    warnings.push(`The level at the structure (${m(model.bedLevelAtControl + startDepth)}) is above the bank there (${m(bankAtControl)}): the structure itself floods the banks.`);
+  }
 
   let levels: WithoutScheme;
   let profile: GvfProfile;
-  if (drowned) {
-    // The same control depth as without the scheme: the with-scheme profile is the without-scheme one.
+  if (!held.controls) {
+    // The same depth at the control as without the scheme: the with-scheme profile is the without-scheme one.
     levels = withoutSchemeLevels(model, input.profile, discharge, input.existingControl?.depth, [0, model.length]);
     profile = levels.profile ?? uniformFlowProfile(levels.points, profileType(slopeClass, without.depth, yn, yc));
   } else {
@@ -108,10 +119,10 @@ export function evaluateEvent(event: CaseEvent, index: number, ctx: EventContext
     head: structure.head,
     depth: startDepth,
     level: model.bedLevelAtControl + startDepth,
-    structureDepth: held.depth,
+    structureDepth: structure.depth,
     controls: held.controls,
-    causesBackwater: held.causesBackwater && !drowned,
-    explanation: drowned ? 'The structure is drowned by the level downstream and causes no backwater.' : held.explanation,
+    causesBackwater: held.controls && startDepth > without.depth,
+    explanation,
     weir: structure.weir,
   };
   return {

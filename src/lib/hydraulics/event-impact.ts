@@ -18,7 +18,7 @@ export function eventImpact(input: CaseInput, model: ReachModel, profile: GvfPro
   // The without-scheme level is read at each with-scheme point; it is defined along the whole reach.
   const afflux: AffluxPoint[] = profile.points.map((p) => ({ distanceUpstream: p.distanceUpstream, afflux: p.waterLevel - levels.levelAt(p.distanceUpstream) }));
   const extent = extentOfImpact(afflux, input.impactThreshold ?? DEFAULT_IMPACT_THRESHOLD, profile.stoppedBy);
-  if (extent.warning) warnings.push(extent.warning);
+  if (extent.warning) warnings.push(extent.warning.replace(/^the afflux/, extent.sense === 'drawdown' ? 'The drawdown' : 'The afflux'));
 
   let inundation: EventResult['inundation'] = null;
   if (model.bankLevelAt) {
@@ -36,7 +36,7 @@ export function eventImpact(input: CaseInput, model: ReachModel, profile: GvfPro
   const limits = checkLimits(profile.points, levels.levelAt, input.limits, 'limits');
   const leastMargin = limits.length === 0 ? null : Math.min(...limits.map((l) => l.margin));
   return {
-    afflux: { atControl: afflux[0]?.afflux ?? 0, max: Math.max(0, ...afflux.map((a) => a.afflux)) },
+    afflux: { atControl: afflux[0]?.afflux ?? 0, max: Math.max(0, ...afflux.map((a) => a.afflux)), min: Math.min(0, ...afflux.map((a) => a.afflux)) },
     extent,
     inundation,
     limits,

@@ -125,7 +125,9 @@ export function weirControlSchema(u: UnitLabels) {
       designHead: positive(u.length).optional(),
       piers: z.object({ count: finite().int({ error: 'must be a whole number' }).nonnegative({ error: 'must be 0 or more' }), coefficient: nonNegative().optional() }).optional(),
       abutmentCoefficient: nonNegative().optional(),
-      tailwaterLevel: nonNegative(`${u.length} above the channel bed at the weir`).optional(),
+      tailwaterDepth: nonNegative(`${u.length} above the channel bed just downstream of the structure`).optional(),
+      /** Version 1's name for tailwaterDepth (it always held a depth); still read, with a deprecation warning. */
+      tailwaterLevel: nonNegative(`${u.length} above the channel bed just downstream of the structure`).optional(),
       ratingTable: z
         .array(z.tuple([nonNegative(`level above the crest, ${u.length}`), nonNegative(u.discharge)], { error: 'must be a [level, discharge] pair' }))
         .min(2, { error: 'must list at least two [level, discharge] pairs' })
@@ -142,6 +144,9 @@ export function weirControlSchema(u: UnitLabels) {
       if (v.kind === 'rating-table' && v.ratingTable === undefined) ctx.addIssue({ code: 'custom', path: ['ratingTable'], message: 'is required for a rating-table control' });
       if (v.kind !== 'rating-table' && v.crestLength === undefined) ctx.addIssue({ code: 'custom', path: ['crestLength'], message: 'is required' });
       if (v.kind !== 'rating-table' && v.sillHeight <= 0) ctx.addIssue({ code: 'custom', path: ['sillHeight'], message: `must be greater than 0 ${u.length}` });
+      if (v.tailwaterDepth !== undefined && v.tailwaterLevel !== undefined && v.tailwaterDepth !== v.tailwaterLevel) {
+        ctx.addIssue({ code: 'custom', path: ['tailwaterLevel'], message: 'is the old name of tailwaterDepth; give only tailwaterDepth' });
+      }
     });
 }
 

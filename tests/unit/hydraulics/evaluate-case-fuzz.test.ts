@@ -26,7 +26,7 @@ const mutations: Record<string, (c: Raw, v: unknown) => void> = {
   discharge: (c, v) => ((c.events[0] as Record<string, unknown>).discharge = v),
   sillHeight: (c, v) => (c.control.sillHeight = v),
   crestLength: (c, v) => (c.control.crestLength = v),
-  tailwaterLevel: (c, v) => (c.control.tailwaterLevel = v),
+  tailwaterDepth: (c, v) => (c.control.tailwaterDepth = v),
   coefficient: (c, v) => (c.control.coefficient = v),
   kind: (c, v) => (c.control.kind = v),
   depthControl: (c, v) => (c.control = { type: 'depth', depth: v }),

@@ -184,24 +184,38 @@ describe('explained failures and special cases', () => {
     } catch (error) {
       expect(error).toBeInstanceOf(NoPhysicalSolutionError);
       expect((error as NoPhysicalSolutionError).code).toBe('control-below-critical');
-      expect((error as NoPhysicalSolutionError).field).toBe('control');
+      expect((error as NoPhysicalSolutionError).field).toBe('control.depth');
     }
   });
 
-  it('a structure below the existing level is drowned: no afflux, no impact', SLOW, () => {
+  it('a given depth below the level without the scheme is a boundary condition: an M2 drawdown, negative afflux with its extent', SLOW, () => {
     const c = simple({ ...base(), control: { type: 'depth', depth: 1.5 } });
     const event = evaluateCase(c).events[0];
     expect(event.control.causesBackwater).toBe(false);
+    expect(event.profileType).toBe('M2');
     expect(event.afflux.max).toBeCloseTo(0, 9);
-    expect(event.extent.endsBy).toBe('no-impact');
+    expect(event.afflux.min).toBeLessThan(-0.1);
+    expect(event.afflux.atControl).toBeCloseTo(event.afflux.min, 9);
+    expect(event.extent.sense).toBe('drawdown');
+    expect(event.extent.distanceUpstream).toBeGreaterThan(0);
   });
 
-  it('a weir drowned by its tailwater is an explained error naming control.tailwaterLevel', SLOW, () => {
+  it('a weir deep in its tailwater still heads the water up: computed past the data, with a warning', SLOW, () => {
     const b = base();
-    // Tailwater 4.1 m over a 0.9 m sill: the 1 % AEP flow would need H₂/H₁ above 0.95 to pass.
-    const c = simple({ ...b, control: { ...b.control, tailwaterLevel: 5.0 } as CaseInput['control'] });
-    expect(() => evaluateCase(c)).toThrow(NoPhysicalSolutionError);
-    expect(() => evaluateCase(c)).toThrow(/^control\.tailwaterLevel/);
+    // Tailwater 5.0 m over a 0.9 m sill: the 1 % AEP flow passes with H₂/H₁ above 0.95.
+    const c = simple({ ...b, control: { ...b.control, tailwaterDepth: 5.0 } as CaseInput['control'] });
+    const event = evaluateCase(c).events[0];
+    expect(event.control.head).toBeGreaterThan(5.0 - 0.9);
+    expect(event.afflux.atControl).toBeGreaterThan(0);
+    expect(event.warnings.join(' ')).toMatch(/past the data of the relation/);
+  });
+
+  it('a version 1 file with the old tailwaterLevel key is read as the depth, with a deprecation warning', SLOW, () => {
+    const b = base();
+    const old = evaluateCase(simple({ ...b, control: { ...b.control, tailwaterLevel: 3.0 } as CaseInput['control'] }));
+    const renamed = evaluateCase(simple({ ...b, control: { ...b.control, tailwaterDepth: 3.0 } as CaseInput['control'] }));
+    expect(old.events[0].control.head).toBeCloseTo(renamed.events[0].control.head, 12);
+    expect(old.warnings.join(' ')).toMatch(/tailwaterLevel.*tailwaterDepth/);
   });
 
   it('a limit beyond the reach is an input error on that limit', SLOW, () => {

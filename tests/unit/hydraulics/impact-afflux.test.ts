@@ -40,14 +40,25 @@ describe('extentOfImpact', () => {
     expect(extentOfImpact(bumpy, 0.01).distanceUpstream).toBeCloseTo(20 + 10 * (0.01 / 0.02), 9);
   });
 
+  it('a drawdown has its own extent, where the negative afflux is back within the threshold', () => {
+    const down = afflux.map((a) => ({ ...a, afflux: -a.afflux }));
+    const raised = extentOfImpact(afflux, 0.01);
+    const drawn = extentOfImpact(down, 0.01);
+    expect(drawn.sense).toBe('drawdown');
+    expect(drawn.distanceUpstream).toBeCloseTo(raised.distanceUpstream, 12);
+  });
+
   it('says when there is no impact at all', () => {
-    expect(extentOfImpact(afflux, 0.6)).toEqual({ distanceUpstream: 0, endsBy: 'no-impact' });
+    expect(extentOfImpact(afflux, 0.6)).toEqual({ distanceUpstream: 0, endsBy: 'no-impact', sense: 'raise' });
   });
 
   it('ends at the reach end or the jump when the afflux is still above the threshold there', () => {
     const high = afflux.map((a) => ({ ...a, afflux: a.afflux + 1 }));
-    expect(extentOfImpact(high, 0.01, 'reach-end')).toEqual({ distanceUpstream: 300, endsBy: 'reach-end' });
-    expect(extentOfImpact(high, 0.01, 'hydraulic-jump')).toEqual({ distanceUpstream: 300, endsBy: 'hydraulic-jump' });
+    const beyond = extentOfImpact(high, 0.01, 'reach-end');
+    expect(beyond).toMatchObject({ distanceUpstream: 300, endsBy: 'beyond-reach', sense: 'raise' });
+    expect(beyond.affluxAtReachEnd).toBeCloseTo(high[high.length - 1].afflux, 12);
+    expect(beyond.warning).toMatch(/beyond the reach; lengthen the reach/);
+    expect(extentOfImpact(high, 0.01, 'hydraulic-jump')).toEqual({ distanceUpstream: 300, endsBy: 'hydraulic-jump', sense: 'raise' });
     const stopped = extentOfImpact(high, 0.01, 'normal-depth');
     expect(stopped.endsBy).toBe('threshold');
     expect(stopped.warning).toContain('at least this far');

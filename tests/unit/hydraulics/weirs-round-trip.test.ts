@@ -32,7 +32,7 @@ describe('forward and inverse ratings agree', () => {
           };
           // A tailwater up to 0.9 of the free head keeps the solved H₂/H₁ below 0.9, short of drowning.
           if (tailwaterFraction !== undefined) {
-            spec.tailwaterLevel = sillHeight + tailwaterFraction * weirHead(spec, discharge, approach).head;
+            spec.tailwaterDepth = sillHeight + tailwaterFraction * weirHead(spec, discharge, approach).head;
           }
           const result = weirHead(spec, discharge, approach);
           expect(weirDischarge(spec, result.head, approach)).toBeCloseTo(discharge, 6);
@@ -55,13 +55,13 @@ describe('weirHead on any input', () => {
         fc.double({ min: -1, max: 500, noNaN: true }),
         fc.option(fc.double({ min: -1, max: 8, noNaN: true }), { nil: undefined }),
         fc.option(fc.double({ min: -0.5, max: 3, noNaN: true }), { nil: undefined }),
-        (kind, crestLength, sillHeight, discharge, tailwaterLevel, coefficient) => {
+        (kind, crestLength, sillHeight, discharge, tailwaterDepth, coefficient) => {
           const approach = prismaticSection({ shape: 'trapezoidal', bottomWidth: 8, sideSlope: 2 }, 0.035);
           const spec: WeirSpec = {
             kind,
             crestLength,
             sillHeight,
-            ...(tailwaterLevel === undefined ? {} : { tailwaterLevel }),
+            ...(tailwaterDepth === undefined ? {} : { tailwaterDepth }),
             ...(coefficient === undefined ? {} : { coefficient }),
             ...(kind === 'rating-table' ? { ratingTable: [[0, 0], [1, 20], [2, 60]] as [number, number][] } : {}),
           };

@@ -1,6 +1,7 @@
 'use client';
 
 import useSWR from 'swr';
+import { coefficientWords } from '@/lib/hydraulics/weirs/coefficient-words';
 import type { HeadPreview } from '@/lib/revisions/preview-head';
 import { useDebounced } from './use-debounced';
 
@@ -50,12 +51,12 @@ export function HeadPreviewPanel({ revisionId, structureJson, lengthUnit, discha
                 {e.weir ? (
                   <>
                     <dt className="text-ink-soft">Coefficient</dt>
-                    <dd><span className="num">{f(e.weir.coefficient, 4)}</span> {e.weir.coefficientIsDefault ? 'published default' : 'your own value'}<span className="block text-xs text-ink-faint">{e.weir.coefficientSource}</span></dd>
+                    <dd><span className="num">{coefficientWords(e.weir.coefficient, e.weir.coefficientForm)}</span> — {e.weir.coefficientIsDefault ? 'published default' : 'your own value'}<span className="block text-xs text-ink-faint">{e.weir.coefficientSource}</span></dd>
                     <dt className="text-ink-soft">Validity range</dt>
                     <dd className="text-xs">{e.weir.validity.map((c) => <span key={c.name} className="block">{c.ok ? '✔' : '⚠'} {c.name} <span className="num">{c.value.toPrecision(3)}</span>{c.min !== undefined ? `, from ${c.min}` : ''}{c.max !== undefined ? ` to ${c.max}` : ''}{c.ok ? '' : ' — outside the range'}</span>)}</dd>
                   </>
                 ) : null}
-                {e.weir?.submergence && e.weir.submergence.ratio > 0 ? <dd className="col-span-2 text-xs text-verdict-caution">⚠ Submerged by the tailwater: ratio <span className="num">{e.weir.submergence.ratio.toFixed(3)}</span>, discharge reduced by the factor <span className="num">{e.weir.submergence.factor.toFixed(3)}</span>.</dd> : null}
+                {e.weir?.submergence && e.weir.submergence.tailwaterHead > 0 && !e.weir.submergence.modular ? <dd className="col-span-2 text-xs text-verdict-caution">⚠ Submerged by the water downstream: ratio <span className="num">{e.weir.submergence.ratio.toFixed(3)}</span>, discharge reduced by the factor <span className="num">{e.weir.submergence.factor.toFixed(3)}</span> ({e.weir.submergence.relation}).{e.weir.submergence.extrapolated ? ' Past the data of the relation: see the warnings.' : ''}</dd> : null}
                 {!e.causesBackwater && e.explanation ? <dd className="col-span-2 text-xs text-verdict-caution">⚠ {e.explanation}</dd> : null}
               </dl>
             ))}

@@ -13,6 +13,18 @@ import { StepActions } from './step-actions';
 import { type StructureForm, WEIR_KINDS, cleanStructure } from './structure-values';
 import { useStepSave } from './use-step-save';
 
+// Each type's coefficient with its equation form and unit, so that a Cd and a C are never typed into one label.
+const COEFFICIENT_LABEL: Record<string, (u: string) => string> = {
+  'sharp-crested': () => 'Cd (dimensionless)',
+  'broad-crested': () => 'Cd (dimensionless)',
+  ogee: (u) => `C (${u}^½/s)`,
+};
+const COEFFICIENT_FORM: Record<string, string> = {
+  'sharp-crested': 'In Q = Cd·(2/3)·√(2g)·b·H^1.5, H the energy head.',
+  'broad-crested': 'In Q = Cd·(2/3)·√((2/3)g)·b·H^1.5, H the energy head.',
+  ogee: 'In Q = C·L·He^1.5, L the effective crest length.',
+};
+
 type Props = { schemeId: string; revisionId: string; units: CaseUnits; defaults?: StructureForm; backHref: string };
 
 /** Step 4: the weir or spillway. The head over the crest and the control depth update as the designer types. */
@@ -73,7 +85,7 @@ export function StructureStepForm({ schemeId, revisionId, units, defaults, backH
           </fieldset>
           {ownCoefficient ? (
             <div className="grid gap-x-6 sm:grid-cols-[12rem_1fr]">
-              {numberField('control.coefficient', 'Coefficient', 'In the form of the type’s own equation.')}
+              {numberField('control.coefficient', COEFFICIENT_LABEL[kind]?.(u) ?? 'Coefficient', COEFFICIENT_FORM[kind])}
               <WizardField id="structure-reason" label="Reason for your own coefficient" noun="The reason" error={e('control.coefficientReason')}>
                 <textarea id="structure-reason" rows={2} className={inputClassName} {...describedBy('structure-reason', { error: e('control.coefficientReason') })} {...register('control.coefficientReason')} />
               </WizardField>
@@ -85,7 +97,7 @@ export function StructureStepForm({ schemeId, revisionId, units, defaults, backH
             {numberField('control.abutmentCoefficient', 'Abutment contraction coefficient', 'Blank for the default.')}
           </div>
           <div className="grid gap-x-6 sm:grid-cols-2">
-            {numberField('control.tailwaterLevel', `Tailwater depth (${u}, optional)`, 'Downstream depth above the bed at the structure, for submergence.')}
+            {numberField('control.tailwaterDepth', `Tailwater depth (${u}, optional)`, 'Depth of the water just downstream, above the bed. Left empty, the level the channel holds there without the scheme is used.')}
             {numberField('existingControl.depth', `Depth without the scheme (${u}, optional)`, 'At the structure today. Blank: normal depth. Needed on a flat or adverse bed.')}
           </div>
         </div>

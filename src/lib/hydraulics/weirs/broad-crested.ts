@@ -1,5 +1,6 @@
 import { requirePositive } from '../errors';
 import { GRAVITY, type Metres } from '../units';
+import { broadCrestedRelation } from './submergence';
 import { check, type FreeFlowRating, type ValidityCheck, type WeirSpec } from './weir-types';
 
 // Broad-crested weir, Q = Cd·(2/3)·√((2/3)·g)·b·H^1.5 with H the upstream energy head over the crest
@@ -71,6 +72,8 @@ export function broadCrestedRating(spec: WeirSpec, field: string): FreeFlowRatin
     usesEnergyHead: true,
     coefficientSource,
     coefficientIsDefault: userCoefficient === undefined,
+    coefficientForm: { symbol: 'Cd', equation: 'Q = Cd·(2/3)·√((2/3)·g)·b·H^1.5', unit: 'dimensionless' },
+    submergence: broadCrestedRelation(),
     notes,
   };
 }

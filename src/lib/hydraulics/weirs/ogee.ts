@@ -7,6 +7,7 @@ import {
   ogeeDesignCoefficient,
   ogeeHeadRatioFactor,
 } from './ogee-coefficients';
+import { villemonteRelation } from './submergence';
 import { check, type FreeFlowRating, type WeirSpec } from './weir-types';
 
 /**
@@ -69,6 +70,9 @@ export function ogeeRating(spec: WeirSpec, field: string): FreeFlowRating {
         ? `C given by the user${spec.coefficientReason ? `: ${spec.coefficientReason}` : ''}`
         : `USBR Design of Small Dams (1987) Figs. 9-23 and 9-24 (digitised from memory)${spec.designHead === undefined ? ', design head = this head' : ''}`,
     coefficientIsDefault: userCoefficient === undefined,
+    coefficientForm: { symbol: 'C', equation: 'Q = C·L·He^1.5 with L = L′ − 2(N·Kp + Ka)·He', unit: 'm^½/s' },
+    // Villemonte's relation with n = 1.5 stands in for the USBR submergence curves, which this engine does not hold.
+    submergence: villemonteRelation(),
     notes,
   };
 }

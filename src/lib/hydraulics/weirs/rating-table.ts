@@ -1,7 +1,20 @@
 import { InvalidInputError } from '../errors';
 import type { CubicMetresPerSecond, Metres } from '../units';
 import { monotoneCubic } from './monotone-cubic';
+import { RECTANGULAR_WEIR_EXPONENT, villemonteRelation } from './submergence';
 import { check, type FreeFlowRating, type WeirSpec } from './weir-types';
+
+/**
+ * The rating's local exponent n = d ln Q / d ln h, the n of Villemonte's (1947) relation, which he wrote for any free-flow
+ * rating Q ∝ h^n; read off the table by a central difference. Outside a sensible range (a table starting at a level that
+ * is not the crest) it falls back to the rectangular weir's 1.5.
+ */
+function localExponent(discharge: (h: Metres) => CubicMetresPerSecond, head: Metres, [lo, hi]: [Metres, Metres]): number {
+  const step = Math.min(0.01 * head, head - lo, hi - head);
+  if (!(step > 0)) return RECTANGULAR_WEIR_EXPONENT;
+  const n = (Math.log(discharge(head + step)) - Math.log(discharge(head - step))) / (Math.log(head + step) - Math.log(head - step));
+  return Number.isFinite(n) && n > 0.5 && n < 5 ? n : RECTANGULAR_WEIR_EXPONENT;
+}
 
 type RatingPoint = [level: Metres, discharge: CubicMetresPerSecond];
 
@@ -38,6 +51,8 @@ export function ratingTableRating(spec: WeirSpec, field: string): FreeFlowRating
     headLimit: levels[1],
     coefficientSource: 'User rating table, monotone cubic interpolation (Fritsch & Carlson 1980)',
     coefficientIsDefault: false,
+    coefficientForm: { symbol: '', equation: 'Q read from the rating table at h', unit: 'none' },
+    submergence: villemonteRelation((h) => localExponent(interpolant.at, h, levels), 'n read off the rating table at the head'),
     notes: [],
     dischargeRange: [table[0][1], table[table.length - 1][1]],
   };

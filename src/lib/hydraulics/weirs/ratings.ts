@@ -29,7 +29,7 @@ function unscaledRating(spec: WeirSpec, field: string): Rating {
   if (spec.kind === 'rating-table') requireNonNegative(spec.sillHeight, `${field}.sillHeight`);
   else requirePositive(spec.sillHeight, `${field}.sillHeight`);
   if (spec.kind !== 'rating-table') requirePositive(spec.crestLength, `${field}.crestLength`);
-  if (spec.tailwaterLevel !== undefined) requireFinite(spec.tailwaterLevel, `${field}.tailwaterLevel`);
+  if (spec.tailwaterDepth !== undefined) requireFinite(spec.tailwaterDepth, `${field}.tailwaterDepth`);
   switch (spec.kind) {
     case 'sharp-crested':
       return sharpCrestedRating(spec, field);

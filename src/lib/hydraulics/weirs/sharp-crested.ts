@@ -5,11 +5,15 @@ import {
   kindsvaterCarterCoefficient,
   kindsvaterCarterWidthCorrection,
 } from './kindsvater-carter';
-import { check, type FreeFlowRating, type WeirSpec } from './weir-types';
+import { villemonteRelation } from './submergence';
+import { check, type CoefficientForm, type FreeFlowRating, type WeirSpec } from './weir-types';
 
 // Thin-plate rectangular weir in coefficient form Q = (2/3)·Cd·√(2g)·b·h^1.5
 // (Henderson, Open Channel Flow (1966), ch. 6 (from memory); Chow, Open-Channel Hydraulics (1959), ch. 14 (from memory)).
 const THIN_PLATE_FACTOR = (2 / 3) * Math.sqrt(2 * GRAVITY);
+
+const THIN_PLATE_FORM: CoefficientForm = { symbol: 'Cd', equation: 'Q = Cd·(2/3)·√(2g)·b·h^1.5', unit: 'dimensionless' };
+const KINDSVATER_CARTER_FORM: CoefficientForm = { symbol: 'Ce', equation: 'Q = Ce·(2/3)·√(2g)·be·he^1.5', unit: 'dimensionless' };
 
 /** Rehbock's coefficient as quoted by Henderson (1966) (from memory): Cd = 0.611 + 0.08 h/P. */
 export function rehbockCoefficient(head: Metres, sillHeight: Metres): number {
@@ -35,6 +39,8 @@ export function sharpCrestedRating(spec: WeirSpec, field: string): FreeFlowRatin
       usesEnergyHead: true,
       coefficientSource: `Cd given by the user${spec.coefficientReason ? `: ${spec.coefficientReason}` : ''}`,
       coefficientIsDefault: false,
+      coefficientForm: { ...THIN_PLATE_FORM, equation: 'Q = Cd·(2/3)·√(2g)·b·H^1.5' },
+      submergence: villemonteRelation(),
       notes: [],
     };
   }
@@ -48,6 +54,8 @@ export function sharpCrestedRating(spec: WeirSpec, field: string): FreeFlowRatin
       usesEnergyHead: false,
       coefficientSource: 'Rehbock, Cd = 0.611 + 0.08 h/P (as quoted by Henderson 1966, from memory)',
       coefficientIsDefault: true,
+      coefficientForm: THIN_PLATE_FORM,
+      submergence: villemonteRelation(),
       notes,
     };
   }
@@ -75,6 +83,8 @@ export function sharpCrestedRating(spec: WeirSpec, field: string): FreeFlowRatin
     usesEnergyHead: false,
     coefficientSource: `Kindsvater–Carter, b/B = ${contraction.toFixed(3)} (ISO 1438:2008; contracted rows digitised from memory)`,
     coefficientIsDefault: true,
+    coefficientForm: KINDSVATER_CARTER_FORM,
+    submergence: villemonteRelation(),
     notes,
   };
 }

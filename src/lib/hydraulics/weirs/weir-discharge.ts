@@ -3,7 +3,7 @@ import type { FlowSection } from '../section';
 import type { CubicMetresPerSecond, Metres } from '../units';
 import { approachState } from './approach';
 import { freeFlowRating } from './ratings';
-import { tailwaterHead, villemonteFactor } from './submergence';
+import { tailwaterHead } from './submergence';
 import type { WeirOptions, WeirSpec } from './weir-types';
 
 const MAX_ITERATIONS = 2000;
@@ -20,9 +20,8 @@ export function weirDischarge(spec: WeirSpec, head: Metres, approach: FlowSectio
   requireFinite(head, 'head');
   if (head < 0) throw new InvalidInputError('head', 'must be 0 or more');
   const rating = freeFlowRating(spec, field);
-  const tailwater = spec.tailwaterLevel === undefined ? 0 : tailwaterHead(spec.tailwaterLevel, spec.sillHeight);
-  const factor = tailwater > 0 ? (head > 0 ? villemonteFactor(tailwater / head) : 0) : 1;
-  const freeDischarge = (energyHead: Metres) => rating.discharge(head, energyHead) * factor;
+  const tailwater = spec.tailwaterDepth === undefined ? 0 : tailwaterHead(spec.tailwaterDepth, spec.sillHeight);
+  const freeDischarge = (energyHead: Metres) => rating.discharge(head, energyHead) * rating.submergence.factor(head, energyHead, tailwater);
   if (spec.approachVelocity === false || !rating.usesEnergyHead || head === 0) return freeDischarge(head);
   let discharge = freeDischarge(head);
   for (let iteration = 0; iteration < MAX_ITERATIONS; iteration++) {

@@ -5,7 +5,7 @@ import { brentRoot, expandBracketUpward } from '../solvers';
 import type { CubicMetresPerSecond, Metres } from '../units';
 import { approachState } from './approach';
 import { freeFlowRating } from './ratings';
-import { assertNotDrowned, submergenceState, tailwaterHead, villemonteFactor } from './submergence';
+import { submergenceState, submergenceWarnings, tailwaterHead } from './submergence';
 import { validityWarnings } from './validity-warnings';
 import type { FreeFlowRating, WeirHeadResult, WeirOptions, WeirSpec } from './weir-types';
 
@@ -32,9 +32,10 @@ function ratingEnergyHead(problem: HeadProblem, head: Metres): Metres {
 
 /** Discharge the weir passes at head h, with its submergence factor, minus the discharge wanted. */
 function dischargeSurplus(problem: HeadProblem, head: Metres): number {
-  const factor = problem.tailwater > 0 ? villemonteFactor(problem.tailwater / head) : 1;
+  const energyHead = ratingEnergyHead(problem, head);
+  const factor = problem.rating.submergence.factor(head, energyHead, problem.tailwater);
   if (factor === 0) return -problem.discharge;
-  return problem.rating.discharge(head, ratingEnergyHead(problem, head)) * factor - problem.discharge;
+  return problem.rating.discharge(head, energyHead) * factor - problem.discharge;
 }
 
 /**
@@ -104,24 +105,21 @@ export function weirHead(spec: WeirSpec, discharge: CubicMetresPerSecond, approa
   requirePositive(discharge, 'discharge');
   const rating = freeFlowRating(spec, field);
   checkRatingTableCovers(rating, discharge, field);
-  const tailwater = spec.tailwaterLevel === undefined ? 0 : tailwaterHead(spec.tailwaterLevel, spec.sillHeight);
+  const tailwater = spec.tailwaterDepth === undefined ? 0 : tailwaterHead(spec.tailwaterDepth, spec.sillHeight);
   const addsApproachVelocity = spec.approachVelocity !== false && rating.usesEnergyHead;
   const problem: HeadProblem = { spec, rating, approach, discharge, addsApproachVelocity, tailwater, energyCoefficient: opts.energyCoefficient, field };
   const { head, iterations } = runSolve(problem);
-  const submergence = spec.tailwaterLevel === undefined ? null : submergenceState(head, tailwater);
-  if (submergence) assertNotDrowned(submergence, field);
   const flow = approachState(approach, spec.sillHeight, head, discharge, opts.energyCoefficient, field);
   const equationHead = ratingEnergyHead(problem, head);
+  const submergence = spec.tailwaterDepth === undefined ? null : submergenceState(rating.submergence, head, equationHead, tailwater);
   const validity = rating.validity(head, equationHead);
   const warnings = [...rating.notes, ...validityWarnings(validity)];
   if (spec.approachVelocity === true && !rating.usesEnergyHead) {
     warnings.push('This coefficient already allows for the approach velocity, so the approach-velocity head was not added again.');
   }
-  if (submergence && submergence.ratio > 0) {
-    warnings.push(`The weir is submerged (H₂/H₁ = ${submergence.ratio.toFixed(3)}); Villemonte's reduction factor ${submergence.factor.toFixed(3)} was applied.`);
-    if (spec.kind !== 'sharp-crested') {
-      warnings.push("Villemonte's submergence relation comes from sharp-crested weirs; for this crest it errs on the high side of the upstream level.");
-    }
+  if (submergence) warnings.push(...submergenceWarnings(rating.submergence, submergence));
+  if (submergence && !submergence.modular && spec.kind === 'ogee') {
+    warnings.push("Villemonte's relation, fitted to sharp-crested weirs, stands in for the ogee's own submergence curves (USBR, Design of Small Dams, 1987, ch. 9); check the upstream level against them.");
   }
   if (flow.overtopped) warnings.push('The water at the weir stands above the top of the approach section.');
   return {
@@ -131,6 +129,7 @@ export function weirHead(spec: WeirSpec, discharge: CubicMetresPerSecond, approa
     coefficient: rating.coefficient(head, equationHead),
     coefficientSource: rating.coefficientSource,
     coefficientIsDefault: rating.coefficientIsDefault,
+    coefficientForm: rating.coefficientForm,
     iterations,
     submergence,
     validity,

@@ -1,3 +1,4 @@
+import type { SubmergenceRelation } from './submergence';
 import type { CubicMetresPerSecond, Metres, MetresPerSecond } from '../units';
 
 export type WeirKind = 'sharp-crested' | 'broad-crested' | 'ogee' | 'rating-table';
@@ -22,8 +23,11 @@ export interface WeirSpec {
   designHead?: Metres;
   piers?: { count: number; coefficient?: number };
   abutmentCoefficient?: number;
-  /** Tailwater depth above the channel bed at the weir, m (same datum as the sill height). */
-  tailwaterLevel?: Metres;
+  /**
+   * Depth of the water just downstream of the structure above the channel bed there, m (measured like the sill
+   * height). Omitted, the structure is rated in free flow.
+   */
+  tailwaterDepth?: Metres;
   /**
    * Scales the coefficient (and so the discharge at a head) of whichever rating applies; for sensitivity
    * studies. Default 1.
@@ -42,12 +46,28 @@ export interface ValidityCheck {
 }
 
 export interface SubmergenceState {
-  /** Tailwater height above the crest, m (0 when the tailwater is below the crest). */
+  /** Downstream water height above the crest, m (0 when the water downstream is below the crest). */
   tailwaterHead: Metres;
-  /** Tailwater head over upstream head, H₂/H₁. */
+  /** Downstream head over upstream head, as the relation defines it (h₂/h₁, or h₂/H₁ on a broad crest). */
   ratio: number;
-  /** Villemonte reduction factor Qs/Q. */
+  /** Reduction factor Qs/Q of the relation. */
   factor: number;
+  /** The relation applied, with its source. */
+  relation: string;
+  /** True while the ratio is within the modular limit, so that the flow over the crest is free. */
+  modular: boolean;
+  /** True when the ratio is past the relation's data (see SUBMERGENCE_DATA_LIMIT). */
+  extrapolated: boolean;
+}
+
+/** The published equation a coefficient belongs to, and its unit, so that Cd and C are never shown under one label. */
+export interface CoefficientForm {
+  /** Symbol as the equation writes it: Cd, Ce or C. */
+  symbol: string;
+  /** The equation, e.g. "Q = C·L·He^1.5". */
+  equation: string;
+  /** 'dimensionless', or the SI unit of a dimensional coefficient ('m^½/s'). */
+  unit: 'dimensionless' | 'm^½/s' | 'ft^½/s' | 'none';
 }
 
 export interface WeirHeadResult {
@@ -59,6 +79,7 @@ export interface WeirHeadResult {
   coefficient: number;
   coefficientSource: string;
   coefficientIsDefault: boolean;
+  coefficientForm: CoefficientForm;
   iterations: number;
   submergence: SubmergenceState | null;
   validity: ValidityCheck[];
@@ -91,6 +112,9 @@ export interface FreeFlowRating {
   headLimit?: Metres;
   coefficientSource: string;
   coefficientIsDefault: boolean;
+  coefficientForm: CoefficientForm;
+  /** How the discharge falls when the water downstream stands above the crest. */
+  submergence: SubmergenceRelation;
   /** Notes about assumptions made while building the rating. */
   notes: string[];
 }
