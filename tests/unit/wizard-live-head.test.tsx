@@ -20,7 +20,7 @@ const server = setupServer(
     const { sillHeight, crestLength } = body.control;
     if (crestLength === undefined) return HttpResponse.json({ error: 'Some fields need attention.', issues: [{ path: 'control.crestLength', message: 'is required' }] }, { status: 400 });
     const head = 10 / crestLength;
-    const weir = { kind: 'broad-crested', sillHeight, head, energyHead: head, approachVelocity: 0.4, coefficient: 0.95, coefficientSource: 'Published source (test)', coefficientIsDefault: true, submergence: null, validity: [], designHead: null };
+    const weir = { kind: 'broad-crested', sillHeight, head, energyHead: head, approachVelocity: 0.4, coefficient: 0.95, coefficientSource: 'Published source (test)', coefficientIsDefault: true, coefficientForm: { symbol: 'Cd', equation: 'Q = Cd·(2/3)·√((2/3)·g)·b·H^1.5', unit: 'dimensionless' }, tailwaterDepth: null, submergence: null, validity: [], designHead: null };
     return HttpResponse.json({ units: 'SI', events: [{ name: '1% AEP', discharge: 38, head, controlDepth: (sillHeight ?? 0) + head, controlLevel: 31.2 + (sillHeight ?? 0) + head, structureDepth: (sillHeight ?? 0) + head, criticalDepth: 1.1, normalDepth: 2.7, causesBackwater: true, explanation: null, weir }] });
   }),
 );

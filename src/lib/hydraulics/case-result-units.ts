@@ -113,7 +113,14 @@ export function resultToUS(result: CaseResult): CaseResult {
     warnings: [...result.warnings, 'Numbers quoted inside warning and explanation texts are in SI units (m, m³/s); the result fields are in ft and ft³/s.'],
     events: result.events.map((e) => eventBack(e, b)),
     governingEvent: result.governingEvent && { ...result.governingEvent, leastMargin: L(result.governingEvent.leastMargin) },
-    sizing: result.sizing && { ...result.sizing, value: result.sizing.value === null ? null : L(result.sizing.value), lower: L(result.sizing.lower), upper: L(result.sizing.upper) },
+    sizing: result.sizing && {
+      ...result.sizing,
+      value: result.sizing.value === null ? null : L(result.sizing.value),
+      lower: L(result.sizing.lower),
+      upper: L(result.sizing.upper),
+      governing: result.sizing.governing && { ...result.sizing.governing, margin: L(result.sizing.governing.margin) },
+    },
+    robustness: { ...result.robustness, minimumMargin: L(result.robustness.minimumMargin) },
     sensitivity: sensitivity && {
       ...sensitivity,
       base: runBack(sensitivity.base, b),

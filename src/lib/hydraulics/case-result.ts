@@ -3,6 +3,7 @@ import type { ExtentOfImpact } from './impact/extent-of-impact';
 import type { LimitCheck } from './impact/flood-limits';
 import type { InundationComparison } from './impact/inundation';
 import type { CrestSizingResult } from './design/crest-sizing';
+import type { Robustness } from './design/robustness';
 import type { SensitivityReport } from './design/sensitivity';
 import type { ProfilePoint, ProfileStop, RefinementReport, SelfCheckReport } from './profiles/profile-point';
 import type { ProfileType } from './profiles/profile-type';
@@ -106,6 +107,20 @@ export interface CaseResult {
   events: EventResult[];
   /** The event with the least limit margin; null without limits. */
   governingEvent: { index: number; name: string; leastMargin: Metres } | null;
-  sizing: (CrestSizingResult & { vary: 'sillHeight' | 'crestLength'; lower: Metres; upper: Metres }) | null;
+  sizing:
+    | (CrestSizingResult & {
+        vary: 'sillHeight' | 'crestLength';
+        lower: Metres;
+        upper: Metres;
+        /** The range searched and why it ends there, in words. */
+        searchedRange: string;
+        /** Sized so that every sensitivity run passes too. */
+        robust: boolean;
+        /** The limit and event with the least margin at the sized value. */
+        governing: { margin: Metres; event: string; limit: string } | null;
+      })
+    | null;
+  /** Whether the pass holds with the minimum margin and under every sensitivity run. */
+  robustness: Robustness;
   sensitivity: (SensitivityReport & { event: string; percentages: { manningN: number; discharge: number; coefficient: number } }) | null;
 }

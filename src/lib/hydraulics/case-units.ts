@@ -78,6 +78,7 @@ export function caseToSI(input: CaseInput): CaseInput {
     control: controlToSI(input.control, k),
     existingControl: input.existingControl && { ...input.existingControl, depth: input.existingControl.depth * L },
     impactThreshold: scaled(input.impactThreshold, L),
+    minimumMargin: scaled(input.minimumMargin, L),
     limits: input.limits.map((l) => ({ ...l, distanceUpstream: l.distanceUpstream * L, maxLevel: l.maxLevel * L, freeboard: l.freeboard * L })),
     sizing: input.sizing && { ...input.sizing, increment: input.sizing.increment * L, min: scaled(input.sizing.min, L), max: scaled(input.sizing.max, L) },
   };

@@ -1,7 +1,8 @@
 // Evaluating a whole case file: every event, the overall verdict, and crest sizing and sensitivity if asked for.
 import type { CaseInput } from '@/lib/validation/case-schema';
 import { defaultDesignHead } from './case-control';
-import { type CaseRunner, caseSensitivity, crestSizing, type RunOptions } from './case-design';
+import { type CaseRunner, caseSensitivity, crestSizing, leastMarginOf, type RunOptions } from './case-design';
+import { failingRuns, robustness } from './design/robustness';
 import { reachModel } from './case-reach';
 import type { CaseResult, EventResult } from './case-result';
 import { resultToUS } from './case-result-units';
@@ -49,6 +50,7 @@ function evaluateInSI(input: CaseInput): CaseResult {
   const plausibility = casePlausibility(si, reachModel(si.reach), { toCaseUnits: (m) => m / scale, unit: input.units === 'US' ? 'ft' : 'm' });
   const events = runEvents(si, BASE_RUN);
   const governing = governingEvent(events);
+  const sensitivity = caseSensitivity(si, events, governing?.index ?? null, runEvents);
   return {
     engineVersion: ENGINE_VERSION,
     title: input.title ?? '',
@@ -58,7 +60,13 @@ function evaluateInSI(input: CaseInput): CaseResult {
     events,
     governingEvent: governing,
     sizing: crestSizing(si, runEvents),
-    sensitivity: caseSensitivity(si, events, governing?.index ?? null, runEvents),
+    sensitivity,
+    robustness: robustness({
+      verdict: events.every((e) => e.verdict === 'pass') ? 'pass' : 'fail',
+      least: leastMarginOf(events),
+      minimumMargin: si.minimumMargin ?? 0,
+      failures: sensitivity && governing ? failingRuns(sensitivity, events[governing.index].limits, sensitivity.percentages) : [],
+    }),
   };
 }
 

@@ -44,6 +44,8 @@ function caseObject(units: CaseUnits) {
       })
       .default({ normalDepthTolerance: 0.01 }),
     impactThreshold: positive(u.length).optional(),
+    /** A pass with less room than this below every limit is reported as not robust. */
+    minimumMargin: nonNegative(u.length).optional(),
     limits: z
       .array(
         z.object({
@@ -60,6 +62,8 @@ function caseObject(units: CaseUnits) {
         increment: positive(u.length).default(units === 'US' ? 0.05 : 0.01),
         min: positive(u.length).optional(),
         max: positive(u.length).optional(),
+        /** Size so that every sensitivity run passes too, not only the base case. */
+        robust: z.boolean({ error: 'must be true or false' }).optional(),
       })
       .superRefine((v, ctx) => {
         if (v.min !== undefined && v.max !== undefined && v.max <= v.min) ctx.addIssue({ code: 'custom', path: ['max'], message: 'must be greater than sizing.min' });

@@ -5,10 +5,11 @@ import { useState, useTransition } from 'react';
 import { buttonClassName } from '@/components/ui/form-field';
 import { adoptSizedCrestAction } from '../actions';
 
-type Props = { revisionId: string; vary: 'sillHeight' | 'crestLength'; value: number | null; reason: string; current: number | null; lengthUnit: string; editable: boolean };
+type Governing = { margin: number; event: string; limit: string };
+type Props = { revisionId: string; vary: 'sillHeight' | 'crestLength'; value: number | null; reason: string; governing: Governing | null; current: number | null; lengthUnit: string; editable: boolean };
 
 /** The engine's sized crest, and the button that writes it into the draft's structure. */
-export function CrestSizingPanel({ revisionId, vary, value, reason, current, lengthUnit: u, editable }: Props) {
+export function CrestSizingPanel({ revisionId, vary, value, reason, governing, current, lengthUnit: u, editable }: Props) {
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
@@ -20,6 +21,7 @@ export function CrestSizingPanel({ revisionId, vary, value, reason, current, len
         {vary === 'sillHeight' ? 'Highest sill that passes every limit in every event' : 'Shortest crest that passes every limit in every event'}:{' '}
         <strong className="num text-base">{value === null ? 'none in the range searched' : `${value.toFixed(3)} ${u}`}</strong>
       </p>
+      {governing ? <p className="text-sm" data-testid="sizing-governing">Governed by <strong>{governing.limit}</strong> in <strong>{governing.event}</strong>, margin <span className="num">{governing.margin.toFixed(3)} {u}</span> at the sized value.</p> : null}
       <p className="text-xs text-ink-faint">{reason}. The {what} in the draft now: <span className="num">{current === null ? '—' : `${current.toFixed(3)} ${u}`}</span>.</p>
       {adopted ? <p role="status" className="mt-2 text-sm text-verdict-pass"><span aria-hidden="true">✔ </span>The draft already uses this {what}.</p> : null}
       {editable && value !== null && !adopted ? (

@@ -62,7 +62,7 @@ export function ResultsSheet({ scheme, revision, input, result, eventIndex, gove
       </Section>
       {result.sizing ? (
         <Section id="sizing-heading" title="Crest sizing">
-          <CrestSizingPanel revisionId={revision.id} vary={result.sizing.vary} value={result.sizing.value} reason={result.sizing.reason} current={control ? (control[result.sizing.vary] ?? null) : null} lengthUnit={u} editable={editable} />
+          <CrestSizingPanel revisionId={revision.id} vary={result.sizing.vary} value={result.sizing.value} reason={result.sizing.reason} governing={result.sizing.governing ?? null} current={control ? (control[result.sizing.vary] ?? null) : null} lengthUnit={u} editable={editable} />
         </Section>
       ) : null}
       <Section id="warnings-heading" title={`Warnings (${result.warnings.length})`}>

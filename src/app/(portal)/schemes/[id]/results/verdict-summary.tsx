@@ -22,6 +22,13 @@ export function VerdictSummary({ result, lengthUnit, governingName }: { result: 
       <h2 id="verdict-heading" className="text-xl font-semibold" data-testid="verdict">
         <VerdictWord pass={pass}>{pass ? (noLimits ? 'Pass — but no limits were set' : 'Pass: every limit is met in every event') : 'Fail: at least one limit is exceeded'}</VerdictWord>
       </h2>
+      {result.robustness?.status === 'not-robust' ? (
+        <p className="mt-2 text-sm font-semibold text-verdict-caution" data-testid="robustness">
+          <span aria-hidden="true">⚠ </span>Passes, but not robustly: {result.robustness.reasons.join('; ')}.
+        </p>
+      ) : result.robustness?.status === 'robust' && !noLimits ? (
+        <p className="mt-2 text-sm" data-testid="robustness">Robust: the least margin is at least the minimum margin of <span className="num">{f(result.robustness.minimumMargin)} {u}</span>{result.sensitivity ? ', and every sensitivity run passes' : ' (no sensitivity runs were asked for)'}.</p>
+      ) : null}
       {result.governingEvent ? (
         <p className="mt-1 text-sm">Governing event (least margin): <strong>{result.governingEvent.name}</strong>, margin <span className="num">{f(result.governingEvent.leastMargin)} {u}</span>.{governingName && governingName !== result.governingEvent.name ? ` You marked ${governingName} as the design event.` : ''}</p>
       ) : null}
