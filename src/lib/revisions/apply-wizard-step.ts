@@ -57,9 +57,9 @@ export function applyWizardStep(draft: DraftInputs, input: StepValues): DraftInp
       return { ...rest, control: input.values.control, ...(input.values.existingControl ? { existingControl: input.values.existingControl } : {}), wizard };
     }
     case 'limits': {
-      const { sizing: _s, sensitivity: _t, impactThreshold: _i, ...rest } = draft;
+      const { sizing: _s, sensitivity: _t, impactThreshold: _i, minimumMargin: _m, ...rest } = draft;
       const v = input.values;
-      return { ...rest, reach: limitsIntoReach(draft.reach, v), limits: v.limits, ...defined({ impactThreshold: v.impactThreshold, sizing: v.sizing, sensitivity: v.sensitivity }), wizard };
+      return { ...rest, reach: limitsIntoReach(draft.reach, v), limits: v.limits, ...defined({ impactThreshold: v.impactThreshold, minimumMargin: v.minimumMargin, sizing: v.sizing, sensitivity: v.sensitivity }), wizard };
     }
   }
 }

@@ -29,6 +29,7 @@ export interface DraftInputs {
   existingControl?: CaseInput['existingControl'];
   profile?: CaseInput['profile'];
   impactThreshold?: number;
+  minimumMargin?: number;
   limits?: CaseInput['limits'];
   sizing?: CaseInput['sizing'];
   sensitivity?: CaseInput['sensitivity'];

@@ -9,6 +9,7 @@ import { type EditableStep, STEP_SCHEMAS, type SaveStepRequest, type WizardStep,
 import type { CaseUnits } from '@/lib/validation/case-schema';
 import { type StepValues, applyWizardStep } from './apply-wizard-step';
 import { changedFields } from './changed-fields';
+import { limitsBeyondReach } from './limits-within-reach';
 import { type DraftInputs, caseFileOf, decodeDraft, encodeDraft } from './draft-inputs';
 
 function nextStep(step: EditableStep): WizardStep {
@@ -44,6 +45,8 @@ function checkedValues(request: SaveStepRequest, draft: DraftInputs): StepValues
       if (v.sectionBankLevels && v.sectionBankLevels.length !== sections) {
         throw new InvalidRequestError([{ path: 'sectionBankLevels', message: `must give one bank level (or none) for each of the ${sections} surveyed sections` }]);
       }
+      const beyond = limitsBeyondReach(draft.reach, v.limits, units);
+      if (beyond.length > 0) throw new InvalidRequestError(beyond);
       return { step, values: v };
     }
   }

@@ -93,6 +93,7 @@ export function limitsStepSchema(units: CaseUnits) {
     // One entry per surveyed section; null (JSON has no undefined) means "the lower ground level at its bank stations".
     sectionBankLevels: z.array(surveyedSection(units).shape.bankLevel.nullable()).optional(),
     impactThreshold: c.impactThreshold,
+    minimumMargin: c.minimumMargin,
     limits: c.limits,
     sizing: c.sizing,
     sensitivity: c.sensitivity,

@@ -43,7 +43,8 @@ export function LimitsOptions({ register, errorAt, units, sizing, setSizing, sen
           </WizardField>
           {numberInput('sizing.increment', `Step (${u})`, 'The answer is a multiple of this.')}
           {numberInput('sizing.min', `Search from (${u}, optional)`)}
-          {numberInput('sizing.max', `Search to (${u}, optional)`)}
+          {numberInput('sizing.max', `Search to (${u}, optional)`, 'Empty: up to the bank, the limits or the channel width.')}
+          <label className="flex items-center gap-2 text-sm sm:col-span-2 lg:col-span-4"><input type="checkbox" {...register('sizing.robust')} /> Size so that every sensitivity run passes too (slower)</label>
         </div>
       ) : null}
       <h2 className="mb-2 mt-6 text-lg font-semibold">Sensitivity</h2>

@@ -76,7 +76,10 @@ export function LimitsStepForm({ schemeId, revisionId, units, sections, defaults
           </tbody>
         </table>
       )}
-      <div className="max-w-sm">{numberInput('impactThreshold', `Impact threshold for afflux (${u})`, `The scheme's impact reaches as far as it raises the water by this much; ${units === 'US' ? '0.033 ft' : '0.010 m (10 mm)'} unless you change it.`, 'The impact threshold')}</div>
+      <div className="grid max-w-2xl gap-x-6 sm:grid-cols-2">
+        {numberInput('impactThreshold', `Impact threshold for afflux (${u})`, `The scheme's impact reaches as far as it raises the water by this much; ${units === 'US' ? '0.033 ft' : '0.010 m (10 mm)'} unless you change it.`, 'The impact threshold')}
+        {numberInput('minimumMargin', `Minimum margin (${u}, optional)`, 'A pass with less room than this below any limit is reported as passing, but not robustly. Empty means 0.', 'The minimum margin')}
+      </div>
 
       <h2 className="mb-2 mt-6 text-lg font-semibold">Flood-level limits</h2>
       <p className="mb-3 text-sm text-ink-soft">Each place the water must stay below: it passes when the water level plus the freeboard is at most the maximum level.</p>
