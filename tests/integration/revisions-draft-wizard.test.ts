@@ -40,6 +40,18 @@ describe('the wizard saves each step into a draft revision', () => {
     expect(history.some((s: string) => s.includes('Saved the structure') && s.includes('control.sillHeight'))).toBe(true);
   });
 
+  it('refuses a limit beyond the reach on the limits step, naming the limit and both distances, and stores nothing', async () => {
+    signedInAs(designer);
+    const { revisionId } = await completedDraft();
+    const before = await tableSnapshot();
+    const limits = [{ label: 'Far pasture gate', distanceUpstream: 7500, maxLevel: 40, freeboard: 0 }];
+    const response = await callRoute('revisions/[id]', 'PUT', { id: revisionId, json: { step: 'limits', values: { impactThreshold: 0.01, limits } } });
+    expect(response.status).toBe(400);
+    const { issues } = (await response.json()) as { issues: { path: string; message: string }[] };
+    expect(issues).toEqual([{ path: 'limits[0].distanceUpstream', message: expect.stringMatching(/"Far pasture gate" is 7500 m upstream, beyond the upstream end of the reach \(6000 m from the structure\)/) }]);
+    expect(await tableSnapshot()).toEqual(before);
+  });
+
   it('refuses bad values with the field path and the unit, and stores nothing', async () => {
     signedInAs(designer);
     const { revisionId } = await completedDraft();
