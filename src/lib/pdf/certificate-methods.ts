@@ -17,8 +17,22 @@ export function certificateMethods(inputs: CaseInput, results: CaseResult): stri
   ];
   const sources = new Set<string>();
   for (const event of results.events) if (event.control.weir) sources.add(event.control.weir.coefficientSource);
+  for (const event of results.events) {
+    const weir = event.control.weir;
+    if (weir?.coefficientForm) sources.add(`${weir.coefficientSource}; ${weir.coefficientForm.symbol ? `${weir.coefficientForm.symbol} ${weir.coefficientForm.unit === 'dimensionless' ? 'dimensionless' : `in ${weir.coefficientForm.unit}`}, ` : ''}${weir.coefficientForm.equation}`);
+    else if (weir) sources.add(weir.coefficientSource);
+  }
   for (const source of sources) lines.push(`Weir discharge coefficient: ${source}.`);
-  if (results.events.some((e) => e.control.weir?.submergence)) lines.push('Drowned (submerged) weir flow: Villemonte, J. R. (1947) Submerged-weir discharge studies. Engineering News-Record, 139.');
+  const relations = new Set(results.events.flatMap((e) => (e.control.weir?.submergence && !e.control.weir.submergence.modular ? [e.control.weir.submergence.relation ?? 'Villemonte (1947)'] : [])));
+  for (const relation of relations) {
+    lines.push(
+      relation.startsWith('Villemonte')
+        ? `Submerged structure, rated against the water downstream of it: ${relation} (Villemonte, J. R. (1947) Submerged-weir discharge studies. Engineering News-Record, 139).`
+        : `Submerged structure, rated against the water downstream of it: ${relation} (Bos, M. G. (1989) Discharge Measurement Structures, 3rd ed. ILRI Publication 20, Wageningen).`,
+    );
+  }
+  if (results.events.some((e) => e.extent?.sense === 'drawdown')) lines.push(`Drawdown upstream of a given depth below normal depth (M2 profile) reported as negative afflux (${CHOW}, ch. 9).`);
+  if (results.robustness) lines.push(`Robustness of the pass: ${results.robustness.statement}.`);
   if (results.events.some((e) => e.jump)) lines.push(`Hydraulic jump: the sequent-depth (Belanger) equation (${CHOW}, ch. 15).`);
   const selfCheck = results.events.find((e) => e.selfCheck)?.selfCheck;
   if (selfCheck) lines.push(`Independent self-check of each profile: ${selfCheck.method}.`);
