@@ -46,7 +46,7 @@ async function schemeWithHundredAffected() {
 }
 
 async function makeBatch({ schemeId, revisionId }: { schemeId: string; revisionId: string }): Promise<string> {
-  return (await generateLetters({ user: liaison, input: { schemeId, revisionId } })).batchId;
+  return (await generateLetters({ user: liaison, input: { schemeId, revisionId }, baseUrl: 'http://localhost:3000' })).batchId;
 }
 
 beforeAll(async () => {

@@ -140,7 +140,10 @@ describe('designer → checker → designer → checker → planning officer', (
     // An administrator revokes it with a reason; the public lookup says so from then on.
     const admin = await signedInPage(people.admin);
     await admin.goto(`${portal.app.baseUrl}/admin/certificates`);
-    await admin.getByLabel(`Reason for revoking ${number}`).fill('Revoked in the end-to-end test: the bridge soffit level was re-surveyed.');
+    const revokeForm = admin.getByRole('form', { name: `Revoke certificate ${number}` });
+    await revokeForm.getByLabel(`Reason for revoking ${number}`).fill('Revoked in the end-to-end test: the bridge soffit level was re-surveyed.');
+    await revokeForm.getByRole('checkbox').check();
+    await revokeForm.getByLabel('Your password').fill(people.admin.password);
     await shot(admin, '10-revoke');
     await admin.getByRole('button', { name: `Revoke ${number}` }).click();
     await admin.getByText('Revoked; nothing more to do.').waitFor();

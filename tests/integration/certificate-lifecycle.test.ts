@@ -96,13 +96,13 @@ describe('revocation', () => {
     const { certificate } = certified[2];
     signedInAs(admin.sessionUser);
     const before = await tableSnapshot();
-    expect(await revokeCertificateAction({ certificateId: certificate.id, reason: 'oops' })).toMatchObject({ ok: false, status: 400, issues: [{ path: 'reason' }] });
+    expect(await revokeCertificateAction({ certificateId: certificate.id, reason: 'oops', confirmed: true, password: admin.password })).toMatchObject({ ok: false, status: 400, issues: [{ path: 'reason' }] });
     expect(await tableSnapshot()).toEqual(before);
 
     const reason = 'The survey of the Mill Lane bridge soffit was found to be wrong.';
-    expect(await revokeCertificateAction({ certificateId: certificate.id, reason })).toMatchObject({ ok: true, data: { status: 'revoked' } });
+    expect(await revokeCertificateAction({ certificateId: certificate.id, reason, confirmed: true, password: admin.password })).toMatchObject({ ok: true, data: { status: 'revoked' } });
     expect(await lookupCertificate({ number: certificate.number })).toMatchObject({ status: 'revoked', revocationReason: reason });
-    expect(await revokeCertificateAction({ certificateId: certificate.id, reason })).toMatchObject({ ok: false, status: 409 });
+    expect(await revokeCertificateAction({ certificateId: certificate.id, reason, confirmed: true, password: admin.password })).toMatchObject({ ok: false, status: 409 });
 
     signedInAs(planning.sessionUser);
     const pdf = Buffer.from(await (await download(certificate.id)).arrayBuffer());

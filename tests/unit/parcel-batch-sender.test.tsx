@@ -15,7 +15,7 @@ let state: BatchProgress;
 const requests: { max: number; retryFailed: boolean }[] = [];
 
 function progress(): BatchProgress {
-  const counts = { queued: 0, sending: 0, sent: 0, failed: 0, acknowledged: 0 };
+  const counts = { queued: 0, sending: 0, sent: 0, failed: 0, acknowledged: 0, held: 0 };
   for (const l of state.letters) counts[l.status] += 1;
   return { ...state, counts };
 }
@@ -39,7 +39,7 @@ afterEach(() => {
 afterAll(() => server.close());
 
 function renderSender(manage: boolean) {
-  state = { batchId: 'b1', schemeId: 's1', revisionNumber: 2, preliminary: false, status: 'open', createdAt: '2026-03-15T10:00:00.000Z', total: 5, counts: { queued: 5, sending: 0, sent: 0, failed: 0, acknowledged: 0 }, letters: letters.map((l) => ({ ...l })) };
+  state = { batchId: 'b1', schemeId: 's1', revisionNumber: 2, preliminary: false, status: 'open', createdAt: '2026-03-15T10:00:00.000Z', total: 5, counts: { queued: 5, sending: 0, sent: 0, failed: 0, acknowledged: 0, held: 0 }, letters: letters.map((l) => ({ ...l })) };
   // A fresh SWR cache for each test.
   return render(<SWRConfig value={{ provider: () => new Map() }}><BatchSender batchId="b1" manage={manage} initiallyOpen /></SWRConfig>);
 }

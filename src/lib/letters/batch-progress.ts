@@ -31,7 +31,7 @@ export async function batchProgress({ user, batchId }: { user: SessionUser; batc
   const letters = await Letter.findAll({ where: { batchId }, order: [['createdAt', 'ASC'], ['id', 'ASC']] });
   const parcels = new Map((await Parcel.findAll({ where: { id: letters.map((l) => l.parcelId) } })).map((p) => [p.id, p]));
   const revision = await Revision.findByPk(batch.revisionId, { attributes: ['number'] });
-  const counts: Record<LetterStatus, number> = { queued: 0, sending: 0, sent: 0, failed: 0, acknowledged: 0 };
+  const counts: Record<LetterStatus, number> = { queued: 0, sending: 0, sent: 0, failed: 0, acknowledged: 0, held: 0 };
   for (const l of letters) counts[l.status as LetterStatus] += 1;
   return {
     batchId,

@@ -5,6 +5,7 @@ import type { Transaction } from 'sequelize';
 import { recordAuditEvent } from '@/lib/audit/record-audit-event';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Letter, LetterBatch, ParcelRegister, database } from '@/lib/db';
+import { type Revocation, revisionRevocation } from '@/lib/certificates/revision-revocation';
 import { ConflictError, NotFoundError, UnprocessableError } from '@/lib/http/app-errors';
 import { requireSchemeLiaisonAccess } from '@/lib/parcels/scheme-liaison-access';
 import { selectRevision } from '@/lib/parcels/select-revision';
@@ -15,28 +16,37 @@ async function pendingLetters(revisionId: string, transaction?: Transaction): Pr
   return Letter.count({ where: { revisionId, status: ['queued', 'sending'] }, transaction });
 }
 
+function revokedRefusal(revocation: Revocation): UnprocessableError {
+  return new UnprocessableError(`Letters cannot be made from revision ${revocation.revisionNumber}: its certificate ${revocation.certificateNumber} was revoked. Reason given: ${revocation.reason}`);
+}
+
 const sameVersions = (a: Map<string, number>, b: Map<string, number>) => a.size === b.size && [...a].every(([k, v]) => b.get(k) === v);
 
 /**
  * Makes one letter (a PDF and a queued row) per affected parcel of the current register, from the chosen revision,
- * in a new batch; letters from a revision that is not countersigned are PRELIMINARY. The PDFs are rendered first;
+ * in a new batch; letters from a revision that is not countersigned are PRELIMINARY, and a revision whose certificate
+ * is revoked gives none. A letter from a certified revision cites its certificate number and verification link. The PDFs are rendered first;
  * the batch, its letters and the audit event are then recorded in one short transaction, which re-checks that
  * nothing changed meanwhile. Nothing is sent here.
  */
-export async function generateLetters({ user, input }: { user: SessionUser; input: GenerateLettersInput }) {
+export async function generateLetters({ user, input, baseUrl }: { user: SessionUser; input: GenerateLettersInput; baseUrl: string }) {
   const sequelize = database();
   const { scheme } = await requireSchemeLiaisonAccess({ user, schemeId: input.schemeId, manage: true });
   const revision = await selectRevision({ schemeId: scheme.id, revisionId: input.revisionId });
   if (!revision) throw new NotFoundError('No such revision of this scheme.');
   if (revision.status === 'withdrawn') throw new UnprocessableError(`Revision ${revision.number} was withdrawn; letters cannot be made from it.`);
+  const revocation = await revisionRevocation(revision);
+  if (revocation) throw revokedRefusal(revocation);
   const pending = await pendingLetters(revision.id);
   if (pending > 0) throw new ConflictError(`${pending} letter(s) from this revision are still waiting to be sent. Send them (or let them fail) before making new ones.`);
 
   const written: string[] = [];
   try {
-    const prepared = await prepareLetters({ user, scheme, revision, written });
+    const prepared = await prepareLetters({ user, scheme, revision, written, baseUrl });
     return await sequelize.transaction(async (transaction) => {
       await requireSchemeLiaisonAccess({ user, schemeId: scheme.id, manage: true, transaction });
+      const revokedMeanwhile = await revisionRevocation(revision, transaction);
+      if (revokedMeanwhile) throw revokedRefusal(revokedMeanwhile);
       const register = await ParcelRegister.findOne({ where: { schemeId: scheme.id }, order: [['version', 'DESC']], transaction });
       const unchanged = register?.id === prepared.register.id && (await pendingLetters(revision.id, transaction)) === 0 && sameVersions(prepared.versions, await latestVersions(revision.id, transaction));
       if (!unchanged) throw new ConflictError('The register or the letters changed while these letters were being made. Make them again.');

@@ -47,6 +47,7 @@ export function emailText({ ownerName, subject, impact, preliminary }: { ownerNa
     '',
     cautionText(impact),
     '',
+    impact.certificate ? `The design was checked independently and certified: certificate ${impact.certificate.number}. You can check that it is genuine and still in force at ${impact.certificate.verificationUrl}\n` : '',
     'The attached letter explains how to respond.',
   ].join('\n');
 }

@@ -1,7 +1,8 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
 import { recordAuditEvent } from '@/lib/audit/record-audit-event';
-import { Letter, OutboxMessage, database } from '@/lib/db';
+import { heldReason } from '@/lib/certificates/held-reason';
+import { Certificate, Letter, OutboxMessage, database } from '@/lib/db';
 
 /** Our own Message-ID for a letter, so its message can be found again after an interrupted send. */
 export function letterMessageId(letterId: string): string {
@@ -40,8 +41,20 @@ export async function recordOutcome({ letterId, actorId, schemeId, outcome }: { 
   });
 }
 
-/** Claims a queued letter for sending; false when another run claimed it first. */
+/**
+ * Claims a queued letter for sending; false when another run claimed it first, or when its revision's certificate
+ * was revoked after the letter was queued (it is then held, in the same transaction, so it is never sent).
+ */
 export async function claimLetter(letterId: string): Promise<boolean> {
   const sequelize = database();
-  return sequelize.transaction(async (transaction) => (await Letter.update({ status: 'sending' }, { where: { id: letterId, status: 'queued' }, transaction }))[0] === 1);
+  return sequelize.transaction(async (transaction) => {
+    const letter = await Letter.findOne({ where: { id: letterId, status: 'queued' }, transaction });
+    if (!letter) return false;
+    const revoked = await Certificate.findOne({ where: { revisionId: letter.revisionId, status: 'revoked' }, transaction });
+    if (revoked) {
+      await Letter.update({ status: 'held', failureReason: heldReason(revoked.number) }, { where: { id: letterId, status: 'queued' }, transaction });
+      return false;
+    }
+    return (await Letter.update({ status: 'sending' }, { where: { id: letterId, status: 'queued' }, transaction }))[0] === 1;
+  });
 }

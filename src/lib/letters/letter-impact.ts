@@ -12,6 +12,8 @@ export interface LetterImpact {
   methods: string[];
   engineVersion: string;
   revision: { id: string; number: number; status: string };
+  /** The certificate of a certified revision, for the landowner to check; absent in letters made before letters cited it. */
+  certificate?: { number: string; verificationUrl: string } | null;
   events: (ParcelEventImpact & { event: string; dischargeM3s: number })[];
   governingEvent: number;
   strip: ParcelStrip | null;

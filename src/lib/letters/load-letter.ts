@@ -1,6 +1,7 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/current-session';
+import { revisionRevocation } from '@/lib/certificates/revision-revocation';
 import { Letter, LetterResponse, Parcel, Revision, User, database } from '@/lib/db';
 import type { LetterStatus } from '@/lib/db/models/letter';
 import { NotFoundError } from '@/lib/http/app-errors';
@@ -26,7 +27,7 @@ export async function loadLetterDetail({ user, letterId }: { user: SessionUser; 
   return {
     access,
     scheme: { id: scheme.id, reference: scheme.reference, name: scheme.name },
-    revision: { id: revision.id, number: revision.number, status: revision.status },
+    revision: { id: revision.id, number: revision.number, status: revision.status, revoked: (await revisionRevocation(revision)) !== null },
     letter: { id: letter.id, version: letter.version, preliminary: letter.preliminary, category: letter.category, status: letter.status as LetterStatus, recipientEmail: letter.recipientEmail, failureReason: letter.failureReason, messageId: letter.messageId, sentAt: letter.sentAt, acknowledgedAt: letter.acknowledgedAt, createdAt: letter.createdAt, pdfSha256: letter.pdfSha256 },
     parcel: parcel ? { reference: parcel.reference, ownerName: parcel.ownerName, postalAddress: parcel.postalAddress } : null,
     impact: JSON.parse(letter.impactJson) as LetterImpact,

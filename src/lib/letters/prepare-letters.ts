@@ -3,6 +3,8 @@ import { createHash, randomUUID } from 'node:crypto';
 import type { Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Letter, Parcel, type Revision, type Scheme, User } from '@/lib/db';
+import { certificateVerificationUrl } from '@/lib/certificates/certificate-urls';
+import { citableCertificate } from '@/lib/certificates/revision-revocation';
 import { UnprocessableError } from '@/lib/http/app-errors';
 import { type ParcelImpactRow, impactForRevision } from '@/lib/parcels/compute-parcel-impact';
 import { isPreliminary } from '@/lib/parcels/select-revision';
@@ -55,14 +57,15 @@ function letterImpact(row: ParcelImpactRow, revision: Revision, shared: Omit<Let
  * written under the data directory. Outside any transaction, so rendering many letters never holds the write lock.
  * `written` collects the files, for the caller to remove if recording fails.
  */
-export async function prepareLetters({ user, scheme, revision, written }: { user: SessionUser; scheme: Scheme; revision: Revision; written: string[] }) {
+export async function prepareLetters({ user, scheme, revision, written, baseUrl }: { user: SessionUser; scheme: Scheme; revision: Revision; written: string[]; baseUrl: string }) {
   const { register, results, rows } = await impactForRevision({ schemeId: scheme.id, revision });
   if (!register) throw new UnprocessableError('This scheme has no parcels register yet; upload the parcels CSV first.');
   const affected = rows.filter((r) => r.category === 'affected');
   if (affected.length === 0) throw new UnprocessableError('No parcel is affected by this revision, so there are no letters to make.');
   const template = await loadLetterTemplate(scheme.id);
   const organisation = (await User.findByPk(user.id))?.organisation ?? 'Sillmark';
-  const shared = { impactThresholdM: results.impactThreshold, methods: namedMethods(results.caseInput), engineVersion: results.engineVersion };
+  const certificate = revision.status === 'countersigned' ? await citableCertificate(revision.id) : null;
+  const shared = { impactThresholdM: results.impactThreshold, methods: namedMethods(results.caseInput), engineVersion: results.engineVersion, certificate: certificate ? { number: certificate.number, verificationUrl: certificateVerificationUrl(baseUrl, certificate.number) } : null };
   const discharges = new Map(results.events.map((e) => [e.name, e.discharge]));
   const versions = await latestVersions(revision.id);
   const preliminary = isPreliminary(revision);

@@ -76,6 +76,7 @@ function letterhead(doc: Doc, letter: LetterDocument): void {
   doc.font('sans').fontSize(9).fillColor(INK).text(`Our reference: ${letterText(letter.reference)}`, 339, MARGIN, right);
   doc.text(`Date: ${new Date(letter.date).toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' })}`, right);
   doc.text(`Scheme ${letterText(letter.scheme.reference)}, revision ${letter.impact.revision.number} (${letter.impact.revision.status})`, right);
+  if (letter.impact.certificate) doc.text(`Certificate ${letterText(letter.impact.certificate.number)}`, right);
   doc.x = MARGIN;
   doc.y = MARGIN + 70;
   doc.font('sans').fontSize(10).text(letterText(letter.recipient.name));
@@ -94,6 +95,13 @@ function cautionBox(doc: Doc, impact: LetterImpact): void {
   doc.fillColor(INK).text(letterText(text), MARGIN + 12, top + 7, { width: 463 });
   doc.x = MARGIN;
   doc.y = top + height + 4;
+}
+
+/** How the landowner can check, on the public verification page, that the design's certificate is genuine and still in force. */
+function certificateCheck(doc: Doc, certificate: NonNullable<LetterImpact['certificate']>): void {
+  heading(doc, 'Checking the design certificate');
+  paragraph(doc, `The design behind these figures was checked independently and certified: certificate ${certificate.number}. You can check that this certificate is genuine and has not been withdrawn at:`);
+  doc.font('sans').fontSize(10).fillColor(INK).text(letterText(certificate.verificationUrl), { link: certificate.verificationUrl, underline: true }).moveDown(0.5);
 }
 
 function footers(doc: Doc, letter: LetterDocument): void {
@@ -132,6 +140,7 @@ function body(doc: Doc, letter: LetterDocument): void {
     doc.font('sansItalic').fontSize(8).fillColor(SOFT).text(letterText(`Distance upstream of the structure across, level above datum up. Your land is the shaded band from ${distance(impact.strip.from)} to ${distance(impact.strip.to)}.`));
   }
   cautionBox(doc, impact);
+  if (impact.certificate) certificateCheck(doc, impact.certificate);
   heading(doc, 'How to respond');
   paragraph(doc, paragraphs.response);
   paragraph(doc, paragraphs.contact);

@@ -1,6 +1,6 @@
 import 'server-only';
 import { Op, type Transaction } from 'sequelize';
-import { Revision, database } from '@/lib/db';
+import { Certificate, Revision, database } from '@/lib/db';
 import { NotFoundError } from '@/lib/http/app-errors';
 
 /**
@@ -19,10 +19,12 @@ export async function selectRevision({ schemeId, revisionId, transaction }: { sc
   return Revision.findOne({ where: { schemeId, status: { [Op.ne]: 'withdrawn' } }, order: [['number', 'DESC']], transaction });
 }
 
+/** The scheme's revisions, newest first; `revoked` when the revision's certificate was revoked. */
 export async function listSchemeRevisions(schemeId: string) {
   database();
   const revisions = await Revision.findAll({ where: { schemeId }, order: [['number', 'DESC']], attributes: ['id', 'number', 'status'] });
-  return revisions.map((r) => ({ id: r.id, number: r.number, status: r.status }));
+  const revoked = new Set((await Certificate.findAll({ where: { schemeId, status: 'revoked' }, attributes: ['revisionId'] })).map((c) => c.revisionId));
+  return revisions.map((r) => ({ id: r.id, number: r.number, status: r.status, revoked: revoked.has(r.id) }));
 }
 
 /** Letters from a revision that is not countersigned are watermarked PRELIMINARY. */

@@ -2,31 +2,16 @@ import 'server-only';
 import { Op } from 'sequelize';
 import { recordAuditEvent } from '@/lib/audit/record-audit-event';
 import type { SessionUser } from '@/lib/auth/current-session';
-import { verifyPassword } from '@/lib/auth/password';
-import { clearFailures, lockedForMs, recordFailure } from '@/lib/auth/sign-in-throttle';
+import { confirmPassword } from '@/lib/auth/confirm-password';
 import { issueCertificate } from '@/lib/certificates/issue-certificate';
 import { removeCertificateFile } from '@/lib/certificates/certificate-files';
 import { Revision, User, database } from '@/lib/db';
-import { ConflictError, InvalidRequestError, NotFoundError, ThrottledError } from '@/lib/http/app-errors';
+import { ConflictError, NotFoundError } from '@/lib/http/app-errors';
 import { signingIdentity } from '@/lib/signing/signing-identity';
 import type { CountersignInput } from '@/lib/validation/check-schemas';
 import { checkFrozenRevision } from './check-frozen-revision';
 import { notifyAfterCommit } from './notify';
 import { openReview, revisionForCheck } from './revision-for-check';
-
-// Wrong passwords here count with the sign-in failures of the same address, so the form cannot be used to guess one.
-async function confirmPassword(checker: SessionUser, password: string): Promise<User> {
-  const address = checker.email.toLowerCase();
-  const waitMs = lockedForMs(address);
-  if (waitMs > 0) throw new ThrottledError(`Too many wrong passwords. Try again in ${Math.ceil(waitMs / 60000)} minute(s).`);
-  const account = await User.findByPk(checker.id);
-  if (!account || !account.passwordHash || !(await verifyPassword(account.passwordHash, password))) {
-    recordFailure(address);
-    throw new InvalidRequestError([{ path: 'password', message: 'That is not your password. Countersigning needs the password you sign in with.' }], 'The password did not match.');
-  }
-  clearFailures(address);
-  return account;
-}
 
 /**
  * The checker countersigns: password re-entered, four-eyes rule, frozen hashes intact, and an independent re-run of
@@ -35,7 +20,7 @@ async function confirmPassword(checker: SessionUser, password: string): Promise<
  */
 export async function countersignRevision({ input, checker, baseUrl }: { input: CountersignInput; checker: SessionUser; baseUrl: string }) {
   const sequelize = database();
-  const checkerAccount = await confirmPassword(checker, input.password);
+  const checkerAccount = await confirmPassword({ user: checker, password: input.password, act: 'Countersigning' });
   const preview = await sequelize.transaction((transaction) => revisionForCheck(input.revisionId, checker, transaction));
   const check = checkFrozenRevision(preview.revision);
   if (check.blockers.length) throw new ConflictError(`Countersigning is blocked. ${check.blockers.join(' ')}`);

@@ -41,6 +41,8 @@ export type CertificateRegisterQuery = z.infer<typeof certificateRegisterQuerySc
 export const revokeCertificateSchema = z.object({
   certificateId: z.string().trim().min(1, 'Choose the certificate to revoke.').max(64),
   reason: z.string().trim().min(10, 'Give the reason for revoking (at least 10 characters): the verification page shows it.').max(1000, 'The reason has at most 1000 characters.'),
+  confirmed: z.literal(true, { message: 'Tick the statement to confirm that this certificate is to be revoked for good.' }),
+  password: z.string().min(1, 'Enter your password: revoking a certificate needs it again.').max(200, 'A password has at most 200 characters.'),
 });
 export type RevokeCertificateInput = z.infer<typeof revokeCertificateSchema>;
 

@@ -36,7 +36,7 @@ async function run(job: FaultJob): Promise<unknown> {
   if (job.use === 'generate-letters') {
     // Inside the recording transaction, after every letter's PDF has been written.
     if (job.stopAt === 'batch-recorded') LetterBatch.addHook('afterCreate', 'fault', async () => stop('batch-recorded'));
-    return generateLetters({ user: job.user as SessionUser, input: { schemeId: job.schemeId, revisionId: job.revisionId } });
+    return generateLetters({ user: job.user as SessionUser, input: { schemeId: job.schemeId, revisionId: job.revisionId }, baseUrl: 'http://localhost:3000' });
   }
   let delivered = 0;
   const stopAt = job.stopAt;

@@ -1,7 +1,8 @@
 import { Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import { booleanColumn, createdAtColumn, idColumn, integerColumn, textColumn } from './columns';
 
-export type LetterStatus = 'queued' | 'sending' | 'sent' | 'failed' | 'acknowledged';
+/** `held`: kept but never sent, because the certificate of the letter's revision was revoked. */
+export type LetterStatus = 'queued' | 'sending' | 'sent' | 'failed' | 'acknowledged' | 'held';
 
 export class LetterTemplate extends Model<InferAttributes<LetterTemplate>, InferCreationAttributes<LetterTemplate>> {
   declare id: string;

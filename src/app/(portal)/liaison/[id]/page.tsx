@@ -1,6 +1,8 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import type { ReactNode } from 'react';
+import { schemeRevocations } from '@/lib/certificates/revision-revocation';
+import { revisionStanding } from '@/lib/certificates/revision-standing';
 import { listLetterTracking } from '@/lib/letters/list-letter-tracking';
 import { computeParcelImpact } from '@/lib/parcels/compute-parcel-impact';
 import { loadParcelRegister } from '@/lib/parcels/load-parcel-register';
@@ -27,6 +29,7 @@ export default async function SchemeLiaisonOverview({ params }: { params: Promis
   const impact = register.register ? await computeParcelImpact({ user, schemeId: id }) : null;
   const tracking = await listLetterTracking({ user, schemeId: id });
   const letters = tracking.parcels.flatMap((p) => p.letters);
+  const revoked = new Set((await schemeRevocations(id)).map((r) => r.revisionId));
   const counts = impact ? Object.entries(CATEGORY_WORDS).map(([category, words]) => ({ words, n: impact.rows.filter((r) => r.category === category).length })).filter((c) => c.n > 0) : [];
   return (
     <>
@@ -37,13 +40,13 @@ export default async function SchemeLiaisonOverview({ params }: { params: Promis
         <Card title="Impact on parcels" href={`/liaison/${id}/impact`} linkText="See the impact table">
           {!impact?.revision ? <p>No revision to read yet.</p> : (
             <>
-              <p>From revision <span className="num">{impact.revision.number}</span> ({impact.revision.status}){impact.revision.preliminary ? ', so any letter is PRELIMINARY' : ''}.</p>
+              <p>From revision <span className="num">{impact.revision.number}</span> ({revisionStanding({ status: impact.revision.status, revoked: revoked.has(impact.revision.id) })}){revoked.has(impact.revision.id) ? ', so no letter can be made from it' : impact.revision.preliminary ? ', so any letter is PRELIMINARY' : ''}.</p>
               <ul className="mt-1">{counts.map((c) => <li key={c.words}><span className="num">{c.n}</span> {c.words.toLowerCase()}</li>)}</ul>
             </>
           )}
         </Card>
         <Card title="Letters" href={`/liaison/${id}/letters`} linkText="Letters and responses">
-          {letters.length === 0 ? <p>No letters yet.</p> : <p><span className="num">{letters.filter((l) => l.status === 'sent' || l.status === 'acknowledged').length}</span> sent, <span className="num">{letters.filter((l) => l.status === 'queued').length}</span> queued, <span className="num">{letters.filter((l) => l.status === 'failed').length}</span> failed, <span className="num">{letters.filter((l) => l.status === 'acknowledged').length}</span> answered.</p>}
+          {letters.length === 0 ? <p>No letters yet.</p> : <p><span className="num">{letters.filter((l) => l.status === 'sent' || l.status === 'acknowledged').length}</span> sent, <span className="num">{letters.filter((l) => l.status === 'queued').length}</span> queued, <span className="num">{letters.filter((l) => l.status === 'failed').length}</span> failed, <span className="num">{letters.filter((l) => l.status === 'held').length}</span> held, <span className="num">{letters.filter((l) => l.status === 'acknowledged').length}</span> answered.</p>}
         </Card>
       </div>
       <CautionNote className="mt-8" />

@@ -6,6 +6,7 @@ const STATUSES: Record<LetterStatus, { icon: string; label: string; className: s
   sent: { icon: '✔', label: 'Sent', className: 'text-verdict-pass border-verdict-pass' },
   failed: { icon: '✖', label: 'Failed', className: 'text-verdict-fail border-verdict-fail' },
   acknowledged: { icon: '✉', label: 'Acknowledged', className: 'text-verdict-pass border-verdict-pass' },
+  held: { icon: '⏸', label: 'Held, not sent', className: 'text-verdict-fail border-verdict-fail' },
 };
 
 export function LetterStatusLabel({ status }: { status: LetterStatus }) {

@@ -6,7 +6,7 @@ import { StartDraftButton } from './start-draft-button';
 const when = (iso: string) => `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
 
 /** Every revision, newest first, with who did what and when; a submitted revision is read at /revisions/<id>. */
-export function RevisionHistory({ schemeId, revisions, canStartDraft }: { schemeId: string; revisions: History[]; canStartDraft: boolean }) {
+export function RevisionHistory({ schemeId, revisions, revokedRevisionIds, canStartDraft }: { schemeId: string; revisions: History[]; revokedRevisionIds: string[]; canStartDraft: boolean }) {
   return (
     <section aria-labelledby="history-heading">
       <h2 id="history-heading" className="mb-3 text-lg font-semibold">Revisions and history</h2>
@@ -17,6 +17,7 @@ export function RevisionHistory({ schemeId, revisions, canStartDraft }: { scheme
               <p className="flex flex-wrap items-center gap-2">
                 <Link className="font-semibold text-accent underline" href={`/revisions/${r.id}`}>Revision {r.number}</Link>
                 <StatusLabel status={r.status} />
+                {revokedRevisionIds.includes(r.id) ? <StatusLabel status="revoked" /> : null}
                 <span className="text-sm text-ink-soft">by {r.author}, started {when(r.createdAt)}{r.basedOnNumber ? `, from revision ${r.basedOnNumber}` : ''}</span>
               </p>
               <span className="flex flex-wrap items-center gap-3 text-sm">

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { revisionStanding } from '@/lib/certificates/revision-standing';
 import { computeParcelImpact } from '@/lib/parcels/compute-parcel-impact';
 import { listSchemeRevisions } from '@/lib/parcels/select-revision';
 import { CautionNote } from '@/components/ui/caution-note';
@@ -27,7 +28,7 @@ export default async function ImpactPage({ params, searchParams }: { params: Pro
         <div>
           <label htmlFor="impact-revision" className="block text-sm font-semibold">Revision</label>
           <select id="impact-revision" name="revision" defaultValue={table.revision.id} className={inputClassName}>
-            {revisions.map((r) => <option key={r.id} value={r.id}>Revision {r.number} ({r.status})</option>)}
+            {revisions.map((r) => <option key={r.id} value={r.id}>Revision {r.number} ({revisionStanding(r)})</option>)}
           </select>
         </div>
         <button type="submit" className={buttonClassName}>Show</button>

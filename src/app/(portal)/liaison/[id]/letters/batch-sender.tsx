@@ -51,7 +51,7 @@ export function BatchSender({ batchId, manage, initiallyOpen }: { batchId: strin
 
   if (error) return <p role="alert" className="text-sm text-verdict-fail">✖ {error.message}</p>;
   if (!data) return <p className="text-sm text-ink-soft">Reading the batch…</p>;
-  const done = data.counts.sent + data.counts.acknowledged + data.counts.failed;
+  const done = data.counts.sent + data.counts.acknowledged + data.counts.failed + data.counts.held;
   const retryable = data.letters.some((l) => l.status === 'failed' && l.recipientEmail);
   return (
     <section aria-label={`Batch of ${data.createdAt.slice(0, 10)}`} className="rounded border border-paper-edge bg-white/60 p-4" data-testid="letter-batch">
@@ -70,6 +70,7 @@ export function BatchSender({ batchId, manage, initiallyOpen }: { batchId: strin
         <progress id={`progress-${batchId}`} max={data.total} value={done} className="h-2 w-full overflow-hidden rounded [&::-webkit-progress-bar]:bg-paper-deep [&::-webkit-progress-value]:bg-accent [&::-moz-progress-bar]:bg-accent" />
         <p role="status" aria-live="polite" className="mt-1 text-sm" data-testid="batch-progress">
           <span className="num">{data.counts.sent + data.counts.acknowledged}</span> of <span className="num">{data.total}</span> sent, <span className="num">{data.counts.failed}</span> failed, <span className="num">{data.counts.queued + data.counts.sending}</span> waiting.
+          {data.counts.held > 0 ? <> <span className="num">{data.counts.held}</span> held and not sent: the certificate of revision <span className="num">{data.revisionNumber}</span> was revoked.</> : null}
         </p>
         {problem ? <p role="alert" className="mt-1 text-sm text-verdict-fail">✖ {problem}</p> : null}
       </div>

@@ -4,17 +4,18 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { revisionStanding } from '@/lib/certificates/revision-standing';
 import { type GenerateLettersInput, generateLettersSchema } from '@/lib/validation/letter-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { generateLettersAction } from './actions';
 
-type RevisionOption = { id: string; number: number; status: string };
+type RevisionOption = { id: string; number: number; status: string; revoked: boolean };
 
 /** Makes one letter per affected parcel from the chosen revision; a revision not countersigned gives PRELIMINARY letters. */
 export function GenerateForm({ schemeId, revisions }: { schemeId: string; revisions: RevisionOption[] }) {
   const router = useRouter();
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
-  const preferred = revisions.find((r) => r.status === 'countersigned') ?? revisions[0];
+  const preferred = revisions.find((r) => r.status === 'countersigned' && !r.revoked) ?? revisions.find((r) => !r.revoked) ?? revisions[0];
   const { register, handleSubmit, watch, setError, formState } = useForm<GenerateLettersInput>({ resolver: zodResolver(generateLettersSchema), defaultValues: { schemeId, revisionId: preferred?.id ?? '' } });
   const chosen = revisions.find((r) => r.id === watch('revisionId'));
 
@@ -35,10 +36,11 @@ export function GenerateForm({ schemeId, revisions }: { schemeId: string; revisi
       {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-3 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}>{message.ok ? '✔ ' : '✖ '}{message.text}</p> : null}
       <FormField id="letters-revision" label="From revision" hint="One letter for each parcel the impact table shows as affected, from the current parcels register and letter template." error={formState.errors.revisionId?.message}>
         <select id="letters-revision" className={inputClassName} aria-describedby="letters-revision-hint" {...register('revisionId')}>
-          {revisions.map((r) => <option key={r.id} value={r.id}>Revision {r.number} ({r.status})</option>)}
+          {revisions.map((r) => <option key={r.id} value={r.id}>Revision {r.number} ({revisionStanding(r)})</option>)}
         </select>
       </FormField>
-      {chosen && chosen.status !== 'countersigned' ? <p role="note" className="mb-4 border-l-4 border-verdict-caution bg-paper-deep px-3 py-2 text-sm"><span aria-hidden="true">⚠ </span>Revision {chosen.number} is not countersigned: its letters will be watermarked PRELIMINARY.</p> : null}
+      {chosen?.revoked ? <p role="note" className="mb-4 border-l-4 border-verdict-fail bg-paper-deep px-3 py-2 text-sm"><span aria-hidden="true">✖ </span>The certificate of revision {chosen.number} was revoked: letters cannot be made from it.</p> : null}
+      {chosen && !chosen.revoked && chosen.status !== 'countersigned' ? <p role="note" className="mb-4 border-l-4 border-verdict-caution bg-paper-deep px-3 py-2 text-sm"><span aria-hidden="true">⚠ </span>Revision {chosen.number} is not countersigned: its letters will be watermarked PRELIMINARY.</p> : null}
       <button type="submit" className={buttonClassName} disabled={formState.isSubmitting}>{formState.isSubmitting ? 'Making letters…' : 'Make letters'}</button>
     </form>
   );

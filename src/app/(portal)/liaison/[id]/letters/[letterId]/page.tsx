@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { revisionStanding } from '@/lib/certificates/revision-standing';
 import { eventParagraph } from '@/lib/letters/letter-content';
 import { loadLetterDetail } from '@/lib/letters/load-letter';
 import { CautionNote } from '@/components/ui/caution-note';
@@ -21,7 +22,8 @@ export default async function LetterPage({ params }: { params: Promise<{ id: str
         <h2 className="text-lg font-semibold">Letter to {detail.parcel?.ownerName} about <span className="num">{impact.parcel.reference}</span></h2>
         <dl className="mt-3 grid grid-cols-[10rem_1fr] gap-y-1 text-sm">
           <dt className="text-ink-soft">Version</dt><dd className="num">{letter.version}{letter.preliminary ? ' · PRELIMINARY' : ''}</dd>
-          <dt className="text-ink-soft">From revision</dt><dd className="num">{detail.revision.number} ({detail.revision.status})</dd>
+          <dt className="text-ink-soft">From revision</dt><dd className="num">{detail.revision.number} ({revisionStanding(detail.revision)})</dd>
+          <dt className="text-ink-soft">Certificate</dt><dd className="num">{impact.certificate ? impact.certificate.number : 'none cited'}</dd>
           <dt className="text-ink-soft">Status</dt><dd><LetterStatusLabel status={letter.status} />{letter.failureReason ? <span className="block text-verdict-fail">{letter.failureReason}</span> : null}</dd>
           <dt className="text-ink-soft">To</dt><dd>{letter.recipientEmail ?? 'by post'}<span className="block text-ink-soft">{detail.parcel?.postalAddress}</span></dd>
           <dt className="text-ink-soft">Made</dt><dd className="num">{when(letter.createdAt)}</dd>
