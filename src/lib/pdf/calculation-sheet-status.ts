@@ -29,13 +29,13 @@ export function sheetStatusWords(status: SheetStatus, revision: number): SheetSt
   const sheet = (state: string) => `Calculation sheet, revision ${revision}, ${state}`;
   switch (status.kind) {
     case 'draft':
-      return { line: 'Draft: not yet submitted for check.', watermark: 'DRAFT', standing: `A draft, open to change. ${NOT_A_CERTIFICATE}`, footer: sheet('draft') };
+      return { line: 'Draft: not yet submitted for check.', watermark: 'DRAFT', standing: `A draft, open to change. ${NOT_A_CERTIFICATE}`, footer: sheet('DRAFT') };
     case 'submitted':
-      return { line: `Submitted for check${at(status.submittedAt)}${status.checker ? `, awaiting ${status.checker}` : ''}.`, watermark: 'FOR CHECK', standing: `Frozen and awaiting an independent check. ${NOT_A_CERTIFICATE}`, footer: sheet('submitted for check') };
+      return { line: `Submitted for check${at(status.submittedAt)}${status.checker ? `, awaiting ${status.checker}` : ''}.`, watermark: 'FOR CHECK', standing: `Frozen and awaiting an independent check. ${NOT_A_CERTIFICATE}`, footer: sheet('FOR CHECK') };
     case 'returned':
-      return { line: `Returned${by(status.checker)} for changes.`, watermark: 'RETURNED', standing: `Returned by the checker, open to change. ${NOT_A_CERTIFICATE}`, footer: sheet('returned') };
+      return { line: `Returned${by(status.checker)} for changes.`, watermark: 'RETURNED', standing: `Returned by the checker, open to change. ${NOT_A_CERTIFICATE}`, footer: sheet('RETURNED') };
     case 'withdrawn':
-      return { line: 'Withdrawn by its designer.', watermark: 'WITHDRAWN', standing: `Withdrawn; it will not be checked. ${NOT_A_CERTIFICATE}`, footer: sheet('withdrawn') };
+      return { line: 'Withdrawn by its designer.', watermark: 'WITHDRAWN', standing: `Withdrawn; it will not be checked. ${NOT_A_CERTIFICATE}`, footer: sheet('WITHDRAWN') };
     case 'countersigned': {
       const certified = status.certificate ? `; certified by certificate ${status.certificate}` : '';
       return {
@@ -50,14 +50,14 @@ export function sheetStatusWords(status: SheetStatus, revision: number): SheetSt
         line: `Countersigned; its certificate ${status.certificate} is superseded${status.supersededBy ? ` by certificate ${status.supersededBy}` : ''}.`,
         watermark: 'SUPERSEDED',
         standing: `The working of certificate ${status.certificate}, which is superseded and no longer current.`,
-        footer: sheet(`superseded certificate ${status.certificate}`),
+        footer: sheet(`SUPERSEDED certificate ${status.certificate}`),
       };
     case 'revoked':
       return {
         line: `Countersigned; its certificate ${status.certificate} was revoked${at(status.revokedAt)}${status.reason ? `: ${status.reason}` : ''}.`,
         watermark: 'REVOKED',
         standing: `The working of certificate ${status.certificate}, which is revoked and certifies nothing.`,
-        footer: sheet(`revoked certificate ${status.certificate}`),
+        footer: sheet(`REVOKED certificate ${status.certificate}`),
       };
   }
 }

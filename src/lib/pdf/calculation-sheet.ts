@@ -49,7 +49,6 @@ export function renderCalculationSheet(o: CalculationSheetOptions): Promise<Buff
     heading(doc, `Results: ${e.name}`);
     drawEventResults(doc, e, o.input.units, o.datum);
   }
-  heading(doc, 'Sensitivity and robustness of the verdict', 60);
   drawSensitivity(doc, r, o.datum);
   drawLongSections(doc, o.input, r, o.datum);
   if (r.warnings.length > 0) {

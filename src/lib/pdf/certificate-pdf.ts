@@ -86,7 +86,6 @@ export function renderCertificatePdf(c: CertificateContent): Promise<Buffer> {
   eventsTable(doc, c.results, c.datum);
   heading(doc, 'Flood-level limits, as checked', 50);
   limitsTable(doc, c.results, c.datum);
-  heading(doc, 'Sensitivity and robustness of the verdict', 60);
   drawSensitivity(doc, c.results, c.datum);
   drawLongSections(doc, c.inputs, c.results, c.datum);
   heading(doc, 'Assumptions');

@@ -1,7 +1,11 @@
 import type { CaseResult, LimitResult } from '@/lib/hydraulics/case-result';
 import { runWords } from '@/lib/hydraulics/design/robustness';
-import { FAIL, INK, type Doc, type Row, paragraph, table } from './pdf-layout';
-import { fixed, lengthUnit, levelUnit } from './certificate-text';
+import { fixed, lengthUnit, levelUnit, pdfText } from './certificate-text';
+import { FAIL, INK, type Doc, type Row, contentWidth, heading, paragraph, table } from './pdf-layout';
+
+const HEADING = 'Sensitivity and robustness of the verdict';
+/** The table's header and its first run (two limits), kept on the page with the heading and the introduction. */
+const TABLE_START = 110;
 
 type Sensitivity = NonNullable<CaseResult['sensitivity']>;
 
@@ -31,7 +35,8 @@ function runOutcome(words: string, levels: number[] | null, changes: (number | n
 
 function outcomes(s: Sensitivity, limits: LimitResult[]): RunOutcome[] {
   const base = runOutcome('As designed', s.base.levelsAtLimits, s.base.levelsAtLimits.map(() => 0), s.base.extent, limits, null);
-  return [base, ...s.cases.map((c) => runOutcome(runWords(c.label, s.percentages).replace(/ is /, ' '), c.result?.levelsAtLimits ?? null, c.levelChanges ?? [], c.result?.extent ?? null, limits, c.error))];
+  const label = (words: string) => words.charAt(0).toUpperCase() + words.slice(1).replace(/ is /, ' ');
+  return [base, ...s.cases.map((c) => runOutcome(label(runWords(c.label, s.percentages)), c.result?.levelsAtLimits ?? null, c.levelChanges ?? [], c.result?.extent ?? null, limits, c.error))];
 }
 
 /**
@@ -50,18 +55,21 @@ export function robustnessWords(results: CaseResult, runs: RunOutcome[] | null):
   return failing.length === 0 ? 'Derived from the sensitivity runs above: every run meets every limit.' : `Derived from the sensitivity runs above: not every limit is met in these runs: ${failing.join('; ')}.`;
 }
 
-/** The sensitivity runs of the governing event, limit by limit, then the robustness of the pass. */
+/** Under its heading, the sensitivity runs of the governing event, limit by limit, then the robustness of the pass. */
 export function drawSensitivity(doc: Doc, results: CaseResult, datum: string | null): void {
   const s = results.sensitivity;
   const L = lengthUnit(results.units);
   if (!s) {
+    heading(doc, HEADING);
     paragraph(doc, 'No sensitivity runs were asked for in this case.');
     paragraph(doc, robustnessWords(results, null));
     return;
   }
   const limits = results.events.find((e) => e.name === s.event)?.limits ?? [];
   const runs = outcomes(s, limits);
-  paragraph(doc, `Event ${s.event}, run again with Manning's n ${s.percentages.manningN} % higher and lower, the discharge ${s.percentages.discharge} % higher, and the weir coefficient ${s.percentages.coefficient} % higher and lower. The margin is the room left below the maximum level less its freeboard.`);
+  const introduction = `Event ${s.event}, run again with Manning's n ${s.percentages.manningN} % higher and lower, the discharge ${s.percentages.discharge} % higher, and the weir coefficient ${s.percentages.coefficient} % higher and lower. The margin is the room left below the maximum level less its freeboard.`;
+  heading(doc, HEADING, doc.font('sans').fontSize(9).heightOfString(pdfText(introduction), { width: contentWidth(doc), lineGap: 1.5 }) + TABLE_START);
+  paragraph(doc, introduction);
   table(
     doc,
     [
