@@ -121,6 +121,17 @@ describe('the certificate says what it certifies', () => {
   });
 });
 
+describe('the certificate of a given depth', () => {
+  it('says there is no crest, and that levels are above a datum even when the scheme names none', async () => {
+    const checker = await createTestUser('checker');
+    const depth = await createCertifiedScheme({ designer, checker }, demoCase('wendle-harrowfield-depth-control.json'));
+    const text = flat(pdfPages(await readCertificateFile(depth.certificate.pdfPath), 'depth.pdf'));
+    expect(text).toContain('A given depth at the control section (no crest is modelled)');
+    expect(text).toContain('m above the scheme datum (not named)');
+    expect(text).not.toContain('Crest level');
+  });
+});
+
 describe('the calculation sheet of a countersigned revision', () => {
   it('names its certificate, lists the inputs and sensitivity, and never calls itself a draft', async () => {
     const text = flat(await calculationSheet());
