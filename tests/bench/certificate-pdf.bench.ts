@@ -33,6 +33,7 @@ function certificateContent(revision: Revision, scheme: Scheme): CertificateCont
     revision: { number: revision.number, engineVersion: revision.engineVersion ?? '', revisionSha256: revision.revisionSha256 ?? '', inputsSha256: revision.inputsSha256 ?? '', resultsSha256: revision.resultsSha256 ?? '' },
     designer: person('Bench designer', 'Designer'),
     checker: person('Bench checker', 'Checker'),
+    datum: 'Ordnance Datum Newlyn',
     inputs: parsed.value,
     results: JSON.parse(revision.resultsJson) as CaseResult,
     verificationUrl: 'http://localhost:3000/verify?number=SM-2026-0001',

@@ -9,6 +9,7 @@ import type { CaseResult } from '@/lib/hydraulics/case-result';
 import type { CertificateContent } from '@/lib/pdf/certificate-content';
 import { renderCertificatePdf } from '@/lib/pdf/certificate-pdf';
 import { utcDateTime } from '@/lib/pdf/certificate-text';
+import { decodeDraft } from '@/lib/revisions/draft-inputs';
 import { frozenCaseFile, sha256Hex } from '@/lib/revisions/revision-hashes';
 import { signPdf } from '@/lib/signing/sign-pdf';
 import { parseCase } from '@/lib/validation/parse-case';
@@ -39,6 +40,7 @@ function content(o: IssueCertificateOptions, number: string): CertificateContent
     revision: { number: r.number, engineVersion: r.engineVersion ?? '', revisionSha256: r.revisionSha256 ?? '', inputsSha256: r.inputsSha256 ?? '', resultsSha256: r.resultsSha256 ?? '' },
     designer: { name: o.designer.name, organisation: o.designer.organisation, role: ROLE_LABELS.designer, act: `Designed the revision and submitted it for check on ${utcDateTime(r.submittedAt ?? o.issuedAt)}.` },
     checker: { name: o.checker.name, organisation: o.checker.organisation, role: ROLE_LABELS.checker, act: `Checked the revision independently and countersigned it on ${utcDateTime(o.issuedAt)}.` },
+    datum: decodeDraft(r.inputsJson).wizard?.datum ?? null,
     inputs: parsed.value,
     results: JSON.parse(o.revision.resultsJson) as CaseResult,
     verificationUrl: certificateVerificationUrl(o.baseUrl, number),

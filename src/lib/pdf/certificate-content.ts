@@ -17,18 +17,10 @@ export interface CertificateContent {
   revision: { number: number; engineVersion: string; revisionSha256: string; inputsSha256: string; resultsSha256: string };
   designer: CertificatePerson;
   checker: CertificatePerson;
+  /** The datum every level is measured from, as the scheme names it; null when the scheme does not name one. */
+  datum: string | null;
   inputs: CaseInput;
   results: CaseResult;
   verificationUrl: string;
   signingCertificateUrl: string;
-}
-
-/** The event the certificate draws: the governing one (least limit margin), else the largest design discharge. */
-export function certificateEventIndex(results: CaseResult): number {
-  if (results.governingEvent) return results.governingEvent.index;
-  let best = 0;
-  results.events.forEach((e, i) => {
-    if (e.discharge > results.events[best].discharge) best = i;
-  });
-  return best;
 }

@@ -16,7 +16,6 @@ export function certificateMethods(inputs: CaseInput, results: CaseResult): stri
       : `Backwater profile: standard step method between surveyed cross-sections (${CHOW}, section 10-4).`,
   ];
   const sources = new Set<string>();
-  for (const event of results.events) if (event.control.weir) sources.add(event.control.weir.coefficientSource);
   for (const event of results.events) {
     const weir = event.control.weir;
     if (weir?.coefficientForm) sources.add(`${weir.coefficientSource}; ${weir.coefficientForm.symbol ? `${weir.coefficientForm.symbol} ${weir.coefficientForm.unit === 'dimensionless' ? 'dimensionless' : `in ${weir.coefficientForm.unit}`}, ` : ''}${weir.coefficientForm.equation}`);
@@ -44,12 +43,7 @@ export function certificateAssumptions(inputs: CaseInput, results: CaseResult): 
   const L = lengthUnit(results.units);
   const reach = inputs.reach;
   const lines = ['Steady, one-dimensional, gradually varied flow in a fixed-bed channel; each design flood is taken at its peak discharge.'];
-  if (reach.kind === 'prismatic') {
-    lines.push(`Prismatic ${reach.section.shape} channel, Manning's n ${reach.manningN}, bed slope ${reach.bedSlope} m/m, reach length ${reach.length} ${L}, bed level at the control ${reach.bedLevelAtControl} ${L}.`);
-    if (reach.bankHeight !== undefined) lines.push(`Bank level taken as ${reach.bankHeight} ${L} above the bed along the reach.`);
-  } else {
-    lines.push(`Surveyed reach of ${reach.sections.length} cross-sections up to ${reach.sections[reach.sections.length - 1].distanceUpstream} ${L} upstream of the control.`);
-  }
+  lines.push(reach.kind === 'prismatic' ? 'One cross-section and one roughness along the whole reach (a prismatic channel), as listed under The channel.' : 'The channel is represented by its surveyed cross-sections, summarised under The channel.');
   const without = results.events[0]?.withoutScheme.controlBy;
   lines.push(without === 'existing-control' ? 'Without the scheme, the level at the control is the existing control depth given in the case.' : 'Without the scheme, the flow at the control is at normal depth.');
   if (inputs.control.type === 'weir') {

@@ -1,13 +1,15 @@
 import 'server-only';
 import PDFDocument from 'pdfkit';
 import { registerPdfFonts } from './fonts';
-import { certificateEventIndex, type CertificateContent } from './certificate-content';
-import { ACCENT, CAUTION, type Doc, FAIL, FAINT, INK, MARGIN, PASS, SOFT, bullets, contentWidth, fields, heading, keepTogether, paragraph } from './certificate-layout';
-import { drawLongSection, longSectionLegend } from './certificate-long-section';
+import type { CertificateContent } from './certificate-content';
 import { certificateAssumptions, certificateMethods } from './certificate-methods';
 import { drawQrCode } from './certificate-qr';
 import { eventsTable, limitsTable } from './certificate-results';
-import { lengthUnit, pdfText, utcDateTime } from './certificate-text';
+import { datumName, pdfText, utcDateTime } from './certificate-text';
+import { drawInputSummary } from './input-summary';
+import { drawLongSections } from './long-sections';
+import { ACCENT, CAUTION, type Doc, FAIL, INK, MARGIN, PASS, SOFT, bullets, contentWidth, fields, footers, heading, keepTogether, paragraph } from './pdf-layout';
+import { drawSensitivity } from './sensitivity-table';
 
 export const CERTIFICATE_CAUTION =
   'Caution. The results on this certificate are estimates by the named published methods from the data entered. They support, and never replace, the judgement of a licensed engineer and the local codes and regulations that apply to the site. The certificate covers the frozen revision identified by its SHA-256 below and nothing else.';
@@ -22,6 +24,7 @@ function titleBlock(doc: Doc, c: CertificateContent): void {
     ['Scheme', `${c.scheme.reference} ${c.scheme.name}`],
     ['Watercourse and site', `${c.scheme.watercourse} at ${c.scheme.site}`],
     ['Revision', `${c.revision.number} (engine version ${c.revision.engineVersion})`],
+    ['Level datum', `levels in ${c.results.units === 'US' ? 'ft' : 'm'} above ${datumName(c.datum)}`],
   ]);
 }
 
@@ -33,19 +36,6 @@ function verdictLine(doc: Doc, c: CertificateContent): void {
   const text = pass ? 'PASS: every flood-level limit is met for every design event.' : 'FAIL: at least one flood-level limit is not met; see the table of limits.';
   doc.font('sansSemiBold').fontSize(10).fillColor(pass ? PASS : FAIL).text(pdfText(`Verdict ${text}`), MARGIN + 10, y + 8, { width: contentWidth(doc) - 20 });
   doc.y = y + 34;
-}
-
-function longSection(doc: Doc, c: CertificateContent): void {
-  const index = certificateEventIndex(c.results);
-  const event = c.results.events[index];
-  const unit = lengthUnit(c.results.units);
-  const bank = c.inputs.reach.kind === 'prismatic' ? (c.inputs.reach.bankHeight ?? null) : null;
-  heading(doc, `Long-section, ${event.name}${c.results.governingEvent ? ' (the governing event)' : ''}`);
-  keepTogether(doc, 260);
-  const box = { x: MARGIN, y: doc.y, width: contentWidth(doc), height: 210 };
-  drawLongSection(doc, event, bank, unit, box);
-  doc.y = box.y + box.height + 6;
-  for (const line of longSectionLegend(event, bank !== null, unit)) paragraph(doc, line, { size: 7.5, colour: SOFT });
 }
 
 function people(doc: Doc, c: CertificateContent): void {
@@ -78,17 +68,6 @@ function integrity(doc: Doc, c: CertificateContent): void {
   doc.x = MARGIN;
 }
 
-function footers(doc: Doc, number: string): void {
-  const range = doc.bufferedPageRange();
-  for (let i = range.start; i < range.start + range.count; i++) {
-    doc.switchToPage(i);
-    // Writing inside the bottom margin would otherwise make pdfkit start a new page.
-    doc.page.margins.bottom = 0;
-    const y = doc.page.height - MARGIN + 14;
-    doc.font('sans').fontSize(7).fillColor(FAINT).text(pdfText(`Sillmark certificate ${number} · page ${i + 1} of ${range.count}`), MARGIN, y, { width: contentWidth(doc), align: 'right', lineBreak: false });
-  }
-}
-
 /** The certificate as an unsigned PDF (pdfkit's PDF 1.3 with a classic cross-reference table, ready for signing). */
 export function renderCertificatePdf(c: CertificateContent): Promise<Buffer> {
   const doc = new PDFDocument({ size: 'A4', margin: MARGIN, bufferPages: true, info: { Title: `Sillmark certificate ${c.number}`, Author: 'Sillmark', Subject: `${c.scheme.reference} revision ${c.revision.number}`, Keywords: c.number } });
@@ -101,11 +80,14 @@ export function renderCertificatePdf(c: CertificateContent): Promise<Buffer> {
   registerPdfFonts(doc);
   titleBlock(doc, c);
   verdictLine(doc, c);
-  heading(doc, 'Governing results');
-  eventsTable(doc, c.results);
-  heading(doc, 'Flood-level limits');
-  limitsTable(doc, c.results);
-  longSection(doc, c);
+  paragraph(doc, 'What is certified: every input of the frozen revision follows under its heading, so that the check can be rebuilt from this certificate.', { colour: SOFT });
+  drawInputSummary(doc, { inputs: c.inputs, results: c.results, datum: c.datum });
+  heading(doc, 'Governing results', 50);
+  eventsTable(doc, c.results, c.datum);
+  heading(doc, 'Flood-level limits, as checked', 50);
+  limitsTable(doc, c.results, c.datum);
+  drawSensitivity(doc, c.results, c.datum);
+  drawLongSections(doc, c.inputs, c.results, c.datum);
   heading(doc, 'Assumptions');
   bullets(doc, certificateAssumptions(c.inputs, c.results));
   heading(doc, 'Methods and their published sources');
@@ -118,7 +100,7 @@ export function renderCertificatePdf(c: CertificateContent): Promise<Buffer> {
   heading(doc, 'Caution');
   paragraph(doc, CERTIFICATE_CAUTION, { colour: CAUTION });
   integrity(doc, c);
-  footers(doc, c.number);
+  footers(doc, `Sillmark certificate ${c.number}`);
   doc.end();
   return done;
 }

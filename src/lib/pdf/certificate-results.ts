@@ -1,6 +1,6 @@
 import type { CaseResult, EventResult } from '@/lib/hydraulics/case-result';
-import { type Doc, FAIL, INK, table } from './certificate-layout';
-import { dischargeUnit, fixed, lengthUnit, withUnit } from './certificate-text';
+import { type Doc, FAIL, INK, table } from './pdf-layout';
+import { dischargeUnit, fixed, lengthUnit, levelUnit, withUnit } from './certificate-text';
 
 function inundationText(event: EventResult, unit: string): string {
   if (!event.inundation) return 'not checked (no bank level)';
@@ -10,7 +10,7 @@ function inundationText(event: EventResult, unit: string): string {
 }
 
 /** The governing results of every design event: head, control depth and level, extents of impact and inundation. */
-export function eventsTable(doc: Doc, results: CaseResult): void {
+export function eventsTable(doc: Doc, results: CaseResult, datum: string | null): void {
   const L = lengthUnit(results.units);
   table(
     doc,
@@ -19,7 +19,7 @@ export function eventsTable(doc: Doc, results: CaseResult): void {
       { title: 'Discharge', width: 58, align: 'right', mono: true },
       { title: 'Head over crest', width: 52, align: 'right', mono: true },
       { title: 'Control depth', width: 52, align: 'right', mono: true },
-      { title: 'Control level', width: 56, align: 'right', mono: true },
+      { title: `Control level (${levelUnit(L, datum)})`, width: 62, align: 'right', mono: true },
       { title: 'Greatest afflux', width: 50, align: 'right', mono: true },
       { title: 'Extent of impact', width: 60, align: 'right', mono: true },
       { title: 'Extent of inundation', width: 80, align: 'right', mono: true },
@@ -32,7 +32,7 @@ export function eventsTable(doc: Doc, results: CaseResult): void {
         withUnit(e.discharge, dischargeUnit(results.units), 2),
         e.control.type === 'weir' ? withUnit(e.control.head, L) : 'no crest',
         withUnit(e.control.depth, L),
-        withUnit(e.control.level, L),
+        fixed(e.control.level),
         withUnit(e.afflux.max, L),
         withUnit(e.extent.distanceUpstream, L, 0),
         inundationText(e, L),
@@ -43,12 +43,12 @@ export function eventsTable(doc: Doc, results: CaseResult): void {
 }
 
 /** Each flood-level limit for each event: the limit, the water level with the scheme, the margin and the outcome. */
-export function limitsTable(doc: Doc, results: CaseResult): void {
+export function limitsTable(doc: Doc, results: CaseResult, datum: string | null): void {
   const L = lengthUnit(results.units);
   const rows = results.events.flatMap((e) =>
     e.limits.map((l) => ({
       colour: l.pass ? INK : FAIL,
-      cells: [e.name, l.label, withUnit(l.distanceUpstream, L, 0), withUnit(l.maxLevel, L), withUnit(l.freeboard, L), withUnit(l.waterLevel, L), `${l.margin >= 0 ? '+' : ''}${fixed(l.margin)} ${L}`, l.pass ? 'met' : 'NOT MET'],
+      cells: [e.name, l.label, withUnit(l.distanceUpstream, L, 0), fixed(l.maxLevel), withUnit(l.freeboard, L), fixed(l.waterLevel), `${l.margin >= 0 ? '+' : ''}${fixed(l.margin)} ${L}`, l.pass ? 'met' : 'NOT MET'],
     })),
   );
   if (rows.length === 0) return;
@@ -58,9 +58,9 @@ export function limitsTable(doc: Doc, results: CaseResult): void {
       { title: 'Design event', width: 62 },
       { title: 'Flood-level limit', width: 120 },
       { title: 'Upstream', width: 48, align: 'right', mono: true },
-      { title: 'Limit level', width: 54, align: 'right', mono: true },
+      { title: `Maximum level (${levelUnit(L, datum)})`, width: 64, align: 'right', mono: true },
       { title: 'Freeboard', width: 46, align: 'right', mono: true },
-      { title: 'Water level', width: 54, align: 'right', mono: true },
+      { title: `Water level (${levelUnit(L, datum)})`, width: 64, align: 'right', mono: true },
       { title: 'Margin', width: 50, align: 'right', mono: true },
       { title: 'Outcome', width: 42 },
     ],

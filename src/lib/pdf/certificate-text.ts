@@ -45,3 +45,34 @@ export function lengthUnit(units: 'SI' | 'US'): string {
 export function dischargeUnit(units: 'SI' | 'US'): string {
   return units === 'US' ? 'ft³/s' : 'm³/s';
 }
+
+/** The datum levels are measured from, as the scheme names it; a scheme without one still says that levels have a datum. */
+export function datumName(datum: string | null | undefined): string {
+  return datum?.trim() ? datum.trim() : 'the scheme datum (not named)';
+}
+
+/** "m above Ordnance Datum Newlyn": the unit of every level. */
+export function levelUnit(unit: string, datum: string | null | undefined): string {
+  return `${unit} above ${datumName(datum)}`;
+}
+
+/** "32.400 m above Ordnance Datum Newlyn". */
+export function levelText(value: number | null | undefined, unit: string, datum: string | null | undefined, digits = 3): string {
+  return withUnit(value, levelUnit(unit, datum), digits);
+}
+
+/** "1.200 m above the bed": a depth or height is above the bed, never above the datum. */
+export function heightText(value: number | null | undefined, unit: string, digits = 3): string {
+  return withUnit(value, `${unit} above the bed`, digits);
+}
+
+/** "0.00060 m/m (1 in 1667)". */
+export function slopeText(slope: number): string {
+  if (slope === 0) return '0 m/m (horizontal)';
+  const oneIn = Math.abs(1 / slope);
+  return `${slope.toFixed(5)} m/m (${slope < 0 ? 'adverse, rising downstream: ' : ''}1 in ${oneIn >= 100 ? oneIn.toFixed(0) : oneIn.toFixed(1)})`;
+}
+
+export function percent(value: number, digits = 1): string {
+  return `${Number.isInteger(value) ? value.toFixed(0) : value.toFixed(digits)} %`;
+}
