@@ -144,7 +144,7 @@ describe('the calculation sheet of a countersigned revision', () => {
 
   it('says the certificate is revoked once it is, and nothing else', async () => {
     const admin = await createTestUser('admin');
-    await revokeCertificate({ input: { certificateId: certified.certificate.id, reason: 'Survey datum found wrong', confirmed: true, password: admin.password }, admin: admin.sessionUser });
+    await revokeCertificate({ input: { certificateId: certified.certificate.id, reason: 'Survey datum found wrong', confirmed: true, password: admin.password }, admin: admin.sessionUser, baseUrl: 'http://localhost:3000' });
     const text = flat(await calculationSheet());
     expect(text).toContain(`Status: Countersigned; its certificate ${certified.certificate.number} was revoked on `);
     expect(text).toContain('Survey datum found wrong');
