@@ -70,7 +70,7 @@ describe('a designer builds a scheme on surveyed cross-sections from a CSV file'
     await page.waitForURL(/\/results$/);
 
     expect(await page.getByTestId('verdict').textContent()).toMatch(/Pass|Fail/);
-    const extent = (await page.getByTestId('event-facts').textContent())?.match(/Extent of impact(\d+) m upstream/);
+    const extent = (await page.getByTestId('event-facts').textContent())?.match(/Extent of impact(?:beyond )?(\d+) m upstream/);
     expect(Number(extent?.[1])).toBeGreaterThan(0);
     const chart = await canvasInk(page, '[data-testid="long-section-chart"]');
     expect(chart.inked / chart.total).toBeGreaterThan(0.02);
