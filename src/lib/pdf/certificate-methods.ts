@@ -31,7 +31,6 @@ export function certificateMethods(inputs: CaseInput, results: CaseResult): stri
     );
   }
   if (results.events.some((e) => e.extent?.sense === 'drawdown')) lines.push(`Drawdown upstream of a given depth below normal depth (M2 profile) reported as negative afflux (${CHOW}, ch. 9).`);
-  if (results.robustness) lines.push(`Robustness of the pass: ${results.robustness.statement}.`);
   if (results.events.some((e) => e.jump)) lines.push(`Hydraulic jump: the sequent-depth (Belanger) equation (${CHOW}, ch. 15).`);
   const selfCheck = results.events.find((e) => e.selfCheck)?.selfCheck;
   if (selfCheck) lines.push(`Independent self-check of each profile: ${selfCheck.method}.`);
