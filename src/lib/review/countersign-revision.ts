@@ -3,28 +3,30 @@ import { Op } from 'sequelize';
 import { recordAuditEvent } from '@/lib/audit/record-audit-event';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { verifyPassword } from '@/lib/auth/password';
-import { clearFailures, lockedForMs, recordFailure } from '@/lib/auth/sign-in-throttle';
+import { reserveAttempt, restrictionsStarted, settleSuccess } from '@/lib/auth/sign-in-throttle';
 import { issueCertificate } from '@/lib/certificates/issue-certificate';
 import { removeCertificateFile } from '@/lib/certificates/certificate-files';
 import { Revision, User, database } from '@/lib/db';
-import { ConflictError, InvalidRequestError, NotFoundError, ThrottledError } from '@/lib/http/app-errors';
+import { ConflictError, InvalidRequestError, NotFoundError } from '@/lib/http/app-errors';
 import { signingIdentity } from '@/lib/signing/signing-identity';
 import type { CountersignInput } from '@/lib/validation/check-schemas';
 import { checkFrozenRevision } from './check-frozen-revision';
 import { notifyAfterCommit } from './notify';
 import { openReview, revisionForCheck } from './revision-for-check';
 
-// Wrong passwords here count with the sign-in failures of the same address, so the form cannot be used to guess one.
-async function confirmPassword(checker: SessionUser, password: string): Promise<User> {
-  const address = checker.email.toLowerCase();
-  const waitMs = lockedForMs(address);
-  if (waitMs > 0) throw new ThrottledError(`Too many wrong passwords. Try again in ${Math.ceil(waitMs / 60000)} minute(s).`);
+// Re-entering the password has its own budget, keyed on the signed-in checker: anonymous sign-in failures for the
+// same address cannot block countersigning, and this form cannot be used to guess more passwords than sign-in allows.
+async function confirmPassword(checker: SessionUser, password: string, now: number): Promise<User> {
+  const reservation = await reserveAttempt([{ scope: 'countersign', subject: checker.id }], now);
   const account = await User.findByPk(checker.id);
   if (!account || !account.passwordHash || !(await verifyPassword(account.passwordHash, password))) {
-    recordFailure(address);
+    await database().transaction(async (transaction) => {
+      await recordAuditEvent({ actorId: checker.id, action: 'user.countersign-password-failed', entityType: 'user', entityId: checker.id }, transaction);
+      if (restrictionsStarted(reservation).length) await recordAuditEvent({ actorId: checker.id, action: 'user.countersign-locked-out', entityType: 'user', entityId: checker.id }, transaction);
+    });
     throw new InvalidRequestError([{ path: 'password', message: 'That is not your password. Countersigning needs the password you sign in with.' }], 'The password did not match.');
   }
-  clearFailures(address);
+  await database().transaction((transaction) => settleSuccess(reservation, transaction));
   return account;
 }
 
@@ -33,9 +35,9 @@ async function confirmPassword(checker: SessionUser, password: string): Promise<
  * the frozen inputs that reproduces the stored results. Then, in one transaction: the review's decision, the
  * revision's status, the signed certificate, the supersession of the scheme's earlier certificate and the audit events.
  */
-export async function countersignRevision({ input, checker, baseUrl }: { input: CountersignInput; checker: SessionUser; baseUrl: string }) {
+export async function countersignRevision({ input, checker, baseUrl, now = Date.now() }: { input: CountersignInput; checker: SessionUser; baseUrl: string; now?: number }) {
   const sequelize = database();
-  const checkerAccount = await confirmPassword(checker, input.password);
+  const checkerAccount = await confirmPassword(checker, input.password, now);
   const preview = await sequelize.transaction((transaction) => revisionForCheck(input.revisionId, checker, transaction));
   const check = checkFrozenRevision(preview.revision);
   if (check.blockers.length) throw new ConflictError(`Countersigning is blocked. ${check.blockers.join(' ')}`);
