@@ -1,4 +1,5 @@
 import { NextResponse, type NextRequest } from 'next/server';
+import { trustedOrigins } from '@/lib/config/public-url';
 
 const SESSION_COOKIE = 'sillmark_session';
 const PUBLIC_PAGES = ['/sign-in', '/invitation', '/verify', '/robots.txt'];
@@ -10,9 +11,9 @@ const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
  */
 export function proxy(request: NextRequest) {
   if (!SAFE_METHODS.has(request.method)) {
+    // Compared with the configured origin, never with Host or X-Forwarded-Host, which the client controls.
     const origin = request.headers.get('origin');
-    const host = request.headers.get('x-forwarded-host') ?? request.headers.get('host');
-    if (origin && (() => { try { return new URL(origin).host !== host; } catch { return true; } })()) {
+    if (origin && !trustedOrigins().has(origin)) {
       return NextResponse.json({ error: 'Cross-origin requests that change data are refused.' }, { status: 403 });
     }
   }

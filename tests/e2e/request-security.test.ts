@@ -16,6 +16,50 @@ describe('requests across origins and sessions', () => {
     expect(api.status).toBe(403);
   });
 
+  it('refuses a cross-origin POST that forges X-Forwarded-Host to match its Origin', async () => {
+    const response = await fetch(`${app.baseUrl}/sign-in`, { method: 'POST', headers: { origin: 'http://evil.example', 'x-forwarded-host': 'evil.example', host: 'evil.example', 'content-type': 'text/plain' }, body: '[]' });
+    expect(response.status).toBe(403);
+  });
+
+  it('sends the browser to the portal’s home page, not to another site, after signing in with a crafted next', async () => {
+    const browser = await launchBrowser();
+    try {
+      const page = await browser.newPage();
+      const admin = DEMO_USERS.find((u) => u.role === 'admin')!;
+      for (const next of ['/%5Cevil.example/landed', '/%09/evil.example/landed']) {
+        await page.context().clearCookies();
+        await page.goto(`${app.baseUrl}/sign-in?next=${next}`);
+        await page.getByLabel('E-mail address').fill(admin.email);
+        await page.getByLabel('Password').fill(admin.password);
+        await page.getByRole('button', { name: 'Sign in' }).click();
+        await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
+        expect(page.url()).toBe(`${app.baseUrl}/home`);
+      }
+    } finally {
+      await browser.close();
+    }
+  });
+
+  it('counts wrong sign-ins by the address on the socket, whatever X-Forwarded-For the client writes', async () => {
+    const browser = await launchBrowser();
+    try {
+      const page = await browser.newPage();
+      const planning = DEMO_USERS.find((u) => u.role === 'planning')!;
+      const attempt = async (password: string, forwarded: string) => {
+        await page.setExtraHTTPHeaders({ 'x-forwarded-for': forwarded });
+        await page.goto(`${app.baseUrl}/sign-in`);
+        await page.getByLabel('E-mail address').fill(planning.email);
+        await page.getByLabel('Password').fill(password);
+        await page.getByRole('button', { name: 'Sign in' }).click();
+        return (await page.locator('#sign-in-failure').textContent()) ?? '';
+      };
+      for (let i = 1; i <= 5; i++) expect(await attempt(`wrong-${i}`, `192.0.2.${i}`)).toMatch(/do not match an active account/);
+      expect(await attempt(planning.password, '192.0.2.99')).toMatch(/Too many failed sign-ins for this account from this computer/);
+    } finally {
+      await browser.close();
+    }
+  });
+
   it('answers API calls without a session with 401 and sets security headers', async () => {
     const response = await fetch(`${app.baseUrl}/api/schemes`);
     expect(response.status).toBe(401);

@@ -131,13 +131,22 @@ describe('bad input is named at its field and stores nothing', () => {
     const { revision } = await submittedRevision();
     signedInAs(checker.sessionUser);
     const cases: [() => Promise<unknown>, number, string][] = [
-      [() => countersignRevisionAction({ revisionId: revision.id, password: 'not-my-password', confirmed: true }), 400, 'password'],
       [() => countersignRevisionAction({ revisionId: revision.id, password: checker.password, confirmed: false }), 400, 'confirmed'],
       [() => addReviewCommentAction({ revisionId: revision.id, part: 'structure', body: '  ' }), 400, 'body'],
       [() => addReviewCommentAction({ revisionId: revision.id, part: 'weather', body: 'A comment on nothing.' }), 400, 'part'],
       [() => returnRevisionAction({ revisionId: revision.id, summary: 'Fix it' }), 400, 'summary'],
     ];
     for (const [call, status, path] of cases) expect(await refusedWithoutChange(call)).toMatchObject({ ok: false, status, issues: [expect.objectContaining({ path })] });
+  });
+
+  it('refuses a wrong countersigning password, storing only the counted attempt and its audit entry', async () => {
+    const { revision } = await submittedRevision();
+    signedInAs(checker.sessionUser);
+    const before = await tableSnapshot();
+    const result = await countersignRevisionAction({ revisionId: revision.id, password: 'not-my-password', confirmed: true });
+    expect(result).toMatchObject({ ok: false, status: 400, issues: [expect.objectContaining({ path: 'password' })] });
+    expect(await tableSnapshot()).toEqual({ ...before, audit_events: before.audit_events + 1, sign_in_attempts: expect.any(Number) });
+    expect((await Revision.findByPk(revision.id))?.status).toBe('submitted');
   });
 
   it('refuses to submit an incomplete draft, naming the missing fields', async () => {

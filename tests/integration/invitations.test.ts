@@ -27,7 +27,7 @@ describe('admin invites a user by e-mail', () => {
     expect((await User.findOne({ where: { email: 'new.checker@example.test' } }))?.status).toBe('invited');
     const token = await tokenFromOutbox('new.checker@example.test');
     await acceptInvitation({ token, password: 'a-long-new-password', confirmPassword: 'a-long-new-password' });
-    const { user } = await signIn({ email: 'new.checker@example.test', password: 'a-long-new-password' });
+    const { user } = await signIn({ email: 'new.checker@example.test', password: 'a-long-new-password', clientAddress: '192.0.2.10' });
     expect(user.role).toBe('checker');
     const before = await tableSnapshot();
     await expect(acceptInvitation({ token, password: 'another-password', confirmPassword: 'another-password' })).rejects.toMatchObject({ status: 404 });

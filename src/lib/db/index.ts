@@ -9,6 +9,7 @@ import { initParcel } from './models/parcel';
 import { initReview } from './models/review';
 import { initRevision } from './models/revision';
 import { initScheme } from './models/scheme';
+import { initSignInAttempt } from './models/sign-in-attempt';
 import { initUpload } from './models/upload';
 import { initUser } from './models/user';
 import { getSequelize } from './sequelize';
@@ -19,7 +20,7 @@ const initialised = new WeakSet<Sequelize>();
 export function database(): Sequelize {
   const sequelize = getSequelize();
   if (!initialised.has(sequelize)) {
-    for (const init of [initUser, initInvitation, initScheme, initRevision, initReview, initCertificate, initUpload, initParcel, initLetter, initOutboxMessage, initAuditEvent]) {
+    for (const init of [initUser, initInvitation, initScheme, initRevision, initReview, initCertificate, initUpload, initParcel, initLetter, initOutboxMessage, initAuditEvent, initSignInAttempt]) {
       init(sequelize);
     }
     initialised.add(sequelize);
@@ -37,5 +38,6 @@ export { Parcel, ParcelRegister } from './models/parcel';
 export { Review, ReviewComment } from './models/review';
 export { Revision } from './models/revision';
 export { Scheme } from './models/scheme';
+export { SignInAttempt } from './models/sign-in-attempt';
 export { Upload } from './models/upload';
 export { User } from './models/user';

@@ -18,9 +18,9 @@ import { openReview, revisionForCheck } from './revision-for-check';
  * the frozen inputs that reproduces the stored results. Then, in one transaction: the review's decision, the
  * revision's status, the signed certificate, the supersession of the scheme's earlier certificate and the audit events.
  */
-export async function countersignRevision({ input, checker, baseUrl }: { input: CountersignInput; checker: SessionUser; baseUrl: string }) {
+export async function countersignRevision({ input, checker, baseUrl, now = Date.now() }: { input: CountersignInput; checker: SessionUser; baseUrl: string; now?: number }) {
   const sequelize = database();
-  const checkerAccount = await confirmPassword({ user: checker, password: input.password, act: 'Countersigning' });
+  const checkerAccount = await confirmPassword({ user: checker, password: input.password, act: 'Countersigning', now });
   const preview = await sequelize.transaction((transaction) => revisionForCheck(input.revisionId, checker, transaction));
   const check = checkFrozenRevision(preview.revision);
   if (check.blockers.length) throw new ConflictError(`Countersigning is blocked. ${check.blockers.join(' ')}`);

@@ -24,7 +24,7 @@ export interface RunningApp {
   stop(): Promise<void>;
 }
 
-/** The production build served by `next start` on a free loopback port, over its own migrated and seeded database. */
+/** The production build served by src/cli/serve.mjs on a free loopback port, over its own migrated and seeded database. */
 export async function startApp(): Promise<RunningApp> {
   const databasePath = path.join(mkdtempSync(path.join(tmpdir(), 'sillmark-e2e-')), 'sillmark.sqlite');
   const env = { ...process.env, DATABASE_PATH: databasePath, NEXT_TELEMETRY_DISABLED: '1' };
@@ -34,18 +34,19 @@ export async function startApp(): Promise<RunningApp> {
   }
   buildIfNeeded({ log: () => {} });
   const port = await freePort();
-  const server: ChildProcess = spawn('npx', ['next', 'start', '-H', '127.0.0.1', '-p', String(port)], { env, stdio: ['ignore', 'pipe', 'pipe'], detached: true });
+  const baseUrl = `http://127.0.0.1:${port}`;
+  // Served as `npm start` serves it; PUBLIC_URL is the fixture's own origin, so links and the Origin check match it.
+  const server: ChildProcess = spawn('node', ['src/cli/serve.mjs'], { env: { ...env, PORT: String(port), BIND_ADDRESS: '127.0.0.1', PUBLIC_URL: baseUrl }, stdio: ['ignore', 'pipe', 'pipe'], detached: true });
   let output = '';
   server.stdout?.on('data', (d) => (output += d));
   server.stderr?.on('data', (d) => (output += d));
-  const baseUrl = `http://127.0.0.1:${port}`;
   for (let i = 0; i < 120; i++) {
     try {
       if ((await fetch(`${baseUrl}/api/health`)).ok) break;
     } catch {
       /* not up yet */
     }
-    if (server.exitCode !== null) throw new Error(`next start exited: ${output}`);
+    if (server.exitCode !== null) throw new Error(`the portal server exited: ${output}`);
     await new Promise((r) => setTimeout(r, 250));
   }
   return {

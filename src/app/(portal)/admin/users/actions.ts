@@ -1,20 +1,14 @@
 'use server';
 
-import { headers } from 'next/headers';
 import { revalidatePath } from 'next/cache';
 import { authorizedAction } from '@/lib/actions/authorized-action';
+import { portalBaseUrl } from '@/lib/certificates/portal-base-url';
 import { changeUserRole } from '@/lib/users/change-user-role';
 import { inviteUser } from '@/lib/users/invite-user';
 import { changeRoleSchema, inviteUserSchema } from '@/lib/validation/auth-schemas';
 
-async function baseUrl(): Promise<string> {
-  if (process.env.PUBLIC_URL) return process.env.PUBLIC_URL.replace(/\/$/, '');
-  const h = await headers();
-  return `${h.get('x-forwarded-proto') ?? 'http'}://${h.get('host') ?? 'localhost:3000'}`;
-}
-
 export const inviteUserAction = authorizedAction({ roles: ['admin'], schema: inviteUserSchema }, async (input, admin) => {
-  const result = await inviteUser({ input, admin, baseUrl: await baseUrl() });
+  const result = await inviteUser({ input, admin, baseUrl: portalBaseUrl() });
   revalidatePath('/admin/users');
   return result;
 });

@@ -17,14 +17,14 @@ export const addReviewCommentAction = authorizedAction({ roles: ['checker'], sch
 });
 
 export const returnRevisionAction = authorizedAction({ roles: ['checker'], schema: returnRevisionSchema }, async (input, checker) => {
-  const result = await returnRevision({ input, checker, baseUrl: await portalBaseUrl() });
+  const result = await returnRevision({ input, checker, baseUrl: portalBaseUrl() });
   revalidatePath(`/checks/${input.revisionId}`);
   revalidatePath('/checks');
   return result;
 });
 
 export const countersignRevisionAction = authorizedAction({ roles: ['checker'], schema: countersignSchema }, async (input, checker) => {
-  const result = await countersignRevision({ input, checker, baseUrl: await portalBaseUrl() });
+  const result = await countersignRevision({ input, checker, baseUrl: portalBaseUrl() });
   revalidatePath(`/checks/${input.revisionId}`);
   revalidatePath('/checks');
   revalidatePath('/certificates');

@@ -1,3 +1,4 @@
+import { portalBaseUrl } from '@/lib/certificates/portal-base-url';
 import { authorizedRoute } from '@/lib/http/authorized-route';
 import { readJsonBody } from '@/lib/http/read-json-body';
 import { inviteUser } from '@/lib/users/invite-user';
@@ -8,6 +9,5 @@ export const GET = authorizedRoute(['admin'], async () => Response.json({ users:
 
 export const POST = authorizedRoute(['admin'], async (request, admin) => {
   const input = await readJsonBody(request, inviteUserSchema);
-  const origin = process.env.PUBLIC_URL ?? new URL(request.url).origin;
-  return Response.json(await inviteUser({ input, admin, baseUrl: origin }), { status: 201 });
+  return Response.json(await inviteUser({ input, admin, baseUrl: portalBaseUrl() }), { status: 201 });
 });
