@@ -6,11 +6,13 @@ import { requirePageRole } from '@/lib/auth/page-guard';
 import { NotFoundError } from '@/lib/http/app-errors';
 import { completedSteps, unitWords } from '@/lib/revisions/draft-inputs';
 import { evaluateDraft } from '@/lib/revisions/evaluate-draft';
+import { frozenIntegrity } from '@/lib/revisions/frozen-integrity';
 import { featuredEventIndex } from '@/lib/revisions/results-sheet';
 import { findSchemeRevision } from '@/lib/schemes/find-scheme-revision';
 import { isEditable } from '@/lib/schemes/scheme-access';
 import { WizardProgress } from '@/components/forms/wizard/wizard-progress';
 import { CautionNote } from '@/components/ui/caution-note';
+import { IntegrityAlarm } from '@/components/ui/integrity-alarm';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusLabel } from '@/components/ui/status-label';
 import { IncompleteNotice } from './incomplete-notice';
@@ -27,12 +29,14 @@ export default async function ResultsPage({ params, searchParams }: { params: Pr
   const evaluation = await evaluateDraft({ revisionId: revision.id, user });
   const editable = user.role === 'designer' && scheme.designerId === user.id && isEditable(revision);
   const draft = evaluation.draft;
+  const integrity = frozenIntegrity(revision);
   return (
     <>
       <PageHeader eyebrow={`Results sheet · ${scheme.reference} · revision ${revision.number}`} title={scheme.name}>
         <span className="flex flex-wrap items-center gap-2"><StatusLabel status={revision.status} /> {scheme.watercourse} at {scheme.site} · <Link className="text-accent underline" href={`/schemes/${scheme.id}`}>scheme page and history</Link></span>
       </PageHeader>
       {editable ? <WizardProgress schemeId={scheme.id} current="results" completed={completedSteps(draft)} /> : null}
+      {integrity ? <IntegrityAlarm className="mb-6" number={revision.number} problems={integrity.problems} /> : null}
       <CautionNote className="mb-8" />
       {evaluation.status === 'incomplete' ? <IncompleteNotice schemeId={scheme.id} title="The draft is not complete yet, so there are no results." issues={evaluation.issues} editable={editable} /> : null}
       {evaluation.status === 'unsolvable' ? <IncompleteNotice schemeId={scheme.id} title="The engine found no physical answer for these inputs." issues={evaluation.issues} editable={editable} /> : null}
