@@ -1,11 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { countersignRevisionAction } from '@/app/(portal)/checks/[id]/actions';
-import { Certificate, Revision, database } from '@/lib/db';
-import { migrator } from '@/lib/db/migrator';
+import { Certificate, Revision } from '@/lib/db';
 import { loadCheckView } from '@/lib/review/load-check-view';
 import { loadRevisionView } from '@/lib/review/load-revision-view';
 import { submitForCheck } from '@/lib/revisions/submit-for-check';
 import { loadWizard } from '@/lib/schemes/load-wizard';
+import { behindTheTriggers, revisionTriggers } from './support/behind-the-triggers';
 import { createTestScheme } from './support/scheme-factory';
 import { createReturnedScheme, revisionRow } from './support/returned-revision';
 import { signedInAs } from './support/session-double';
@@ -28,18 +28,9 @@ afterAll(async () => {
   await db.cleanup();
 });
 
-/**
- * Alters a frozen revision as only someone with the database file could: the trigger is dropped for the one statement,
- * then migration 0002 is run down and up again, which puts every trigger back as it ships.
- */
 async function tamper(revisionId: string, sql: string): Promise<void> {
-  const sequelize = database();
-  await sequelize.query('DROP TRIGGER revisions_frozen_fields');
-  await sequelize.query(sql, { replacements: [revisionId] });
-  await migrator().down({ to: '0002-frozen-revisions' });
-  await migrator().up();
-  const [triggers] = (await sequelize.query("SELECT name FROM sqlite_master WHERE type = 'trigger' AND tbl_name = 'revisions' ORDER BY name")) as [{ name: string }[], unknown];
-  expect(triggers.map((t) => t.name)).toEqual(['revisions_frozen_fields', 'revisions_frozen_no_delete', 'revisions_frozen_status']);
+  await behindTheTriggers(sql, [revisionId]);
+  expect(await revisionTriggers()).toEqual(['revisions_frozen_fields', 'revisions_frozen_no_delete', 'revisions_frozen_status']);
 }
 
 describe('a frozen revision altered behind the portal’s back', () => {
