@@ -2,7 +2,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Revision, closeSequelize } from '@/lib/db';
+import { AuditEvent, Revision, closeSequelize } from '@/lib/db';
 import { createTestScheme } from '../integration/support/scheme-factory';
 import { createTestUser } from '../integration/support/user-factory';
 import { ARTIFACTS, useServedPortal } from './support/served-portal';
@@ -79,6 +79,9 @@ describe('designer → checker → designer → checker → planning officer', (
     await designer.getByRole('button', { name: 'Start a new draft from revision 1' }).click();
     await designer.waitForURL(`${portal.app.baseUrl}/schemes/${scheme.id}/wizard/scheme`);
     await designer.goto(`${portal.app.baseUrl}/schemes/${scheme.id}/wizard/structure`);
+    const carried = designer.getByRole('complementary', { name: 'The checker’s comments on revision 1' });
+    await carried.getByText('The 10 m crest gives little margin').waitFor();
+    await shot(designer, '3-carried-comments');
     await designer.getByLabel('Crest length (m)').fill('12');
     await designer.getByRole('button', { name: 'Save and continue' }).click();
     await designer.waitForURL((url) => !url.pathname.endsWith('/wizard/structure'));
@@ -104,8 +107,14 @@ describe('designer → checker → designer → checker → planning officer', (
     expect(number).toMatch(/^SMC-\d{4}-\d{4}$/);
     await shot(checker, '5-certified');
 
-    // The planning officer finds the certificate in the register, downloads it and verifies it.
+    // The planning officer's home links to the certificate; visiting it downloads nothing, so it logs no download.
     const planning = await signedInPage(people.planning);
+    await planning.getByRole('link', { name: `Download ${number}` }).waitFor();
+    await planning.waitForLoadState('networkidle');
+    const downloads = () => AuditEvent.count({ where: { action: 'certificate.downloaded', actorId: people.planning.user.id } });
+    expect(await downloads()).toBe(0);
+
+    // The planning officer finds the certificate in the register, downloads it and verifies it.
     await planning.goto(`${portal.app.baseUrl}/certificates`);
     await planning.getByLabel('Scheme, site or number').fill(scheme.reference);
     await planning.getByRole('button', { name: 'Search' }).click();
@@ -115,6 +124,7 @@ describe('designer → checker → designer → checker → planning officer', (
     const saved = path.join(ARTIFACTS, `${number}.pdf`);
     await download.saveAs(saved);
     expect(readFileSync(saved).subarray(0, 5).toString()).toBe('%PDF-');
+    expect(await downloads()).toBe(1);
 
     await planning.goto(`${portal.app.baseUrl}/verify`);
     await planning.getByLabel('Certificate PDF').setInputFiles(saved);

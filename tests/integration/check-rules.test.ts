@@ -4,6 +4,7 @@ import { submitForCheckAction } from '@/app/(portal)/revisions/[id]/actions';
 import { Certificate, Revision, User, database } from '@/lib/db';
 import { checkFrozenRevision } from '@/lib/review/check-frozen-revision';
 import { resultsSha256, revisionSha256 } from '@/lib/revisions/revision-hashes';
+import { behindTheTriggers } from './support/behind-the-triggers';
 import { createTestScheme, demoCase } from './support/scheme-factory';
 import { signedInAs } from './support/session-double';
 import { tableSnapshot } from './support/table-snapshot';
@@ -40,8 +41,6 @@ async function refusedWithoutChange<T>(call: () => Promise<T>): Promise<T> {
   expect(await tableSnapshot()).toEqual(before);
   return result;
 }
-
-const FROZEN_TRIGGER = "CREATE TRIGGER revisions_frozen BEFORE UPDATE OF inputs_json, results_json, inputs_sha256, results_sha256, revision_sha256, author_id ON revisions WHEN OLD.status IN ('submitted','countersigned') BEGIN SELECT RAISE(ABORT, 'a submitted revision is frozen'); END";
 
 const sql = (text: string, replacements: Record<string, unknown> = {}) => database().query(text, { replacements }).then(() => 'accepted', (e: { parent?: Error; message: string }) => e.parent?.message ?? e.message);
 
@@ -94,16 +93,11 @@ describe('frozen-revision rule', () => {
     const { revision } = await submittedRevision();
     const changed = demoCase(undefined, (c) => ((c.control as { sillHeight: number }).sillHeight = 1.1));
     // Someone with direct access to the file drops the trigger and edits the inputs: the hashes still tell.
-    await database().query('DROP TRIGGER revisions_frozen');
-    await database().query('UPDATE revisions SET inputs_json = :json WHERE id = :id', { replacements: { json: JSON.stringify(changed), id: revision.id } });
-    try {
-      signedInAs(checker.sessionUser);
-      const result = await refusedWithoutChange(() => countersignRevisionAction({ revisionId: revision.id, password: checker.password, confirmed: true }));
-      expect(result).toMatchObject({ ok: false, status: 409, error: expect.stringMatching(/inputs changed after submission/) });
-      expect(await Certificate.count({ where: { revisionId: revision.id } })).toBe(0);
-    } finally {
-      await database().query(FROZEN_TRIGGER);
-    }
+    await behindTheTriggers('UPDATE revisions SET inputs_json = :json WHERE id = :id', { json: JSON.stringify(changed), id: revision.id });
+    signedInAs(checker.sessionUser);
+    const result = await refusedWithoutChange(() => countersignRevisionAction({ revisionId: revision.id, password: checker.password, confirmed: true }));
+    expect(result).toMatchObject({ ok: false, status: 409, error: expect.stringMatching(/inputs changed after submission/) });
+    expect(await Certificate.count({ where: { revisionId: revision.id } })).toBe(0);
   });
 
   it('blocks countersigning when the re-run does not reproduce the stored results, and shows each difference', async () => {
@@ -112,9 +106,7 @@ describe('frozen-revision rule', () => {
     stored.events[0].control.head += 0.05;
     const hashes = { results: resultsSha256(stored) };
     const whole = revisionSha256({ schemeId: revision.schemeId, number: revision.number, authorId: revision.authorId, engineVersion: revision.engineVersion!, inputsSha256: revision.inputsSha256!, resultsSha256: hashes.results, submittedAt: revision.submittedAt! });
-    await database().query('DROP TRIGGER revisions_frozen');
-    await database().query('UPDATE revisions SET results_json = :json, results_sha256 = :r, revision_sha256 = :w WHERE id = :id', { replacements: { json: JSON.stringify(stored), r: hashes.results, w: whole, id: revision.id } });
-    await database().query(FROZEN_TRIGGER);
+    await behindTheTriggers('UPDATE revisions SET results_json = :json, results_sha256 = :r, revision_sha256 = :w WHERE id = :id', { json: JSON.stringify(stored), r: hashes.results, w: whole, id: revision.id });
 
     const check = checkFrozenRevision((await Revision.findByPk(revision.id))!);
     expect(check).toMatchObject({ inputsIntact: true, resultsIntact: true, revisionIntact: true });

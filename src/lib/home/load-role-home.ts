@@ -10,6 +10,8 @@ export interface HomeItem {
   status: string;
   /** Where the item's work is done, if it has a page of its own. */
   href?: string;
+  /** The link serves a file (a signed PDF): a plain link, never prefetched, so that only a person's click downloads it. */
+  download?: boolean;
 }
 
 export interface RoleHome {
@@ -51,7 +53,7 @@ export async function loadRoleHome(user: SessionUser): Promise<RoleHome> {
     }
     case 'planning': {
       const certificates = await Certificate.findAll({ order: [['issuedAt', 'DESC']], limit: 20 });
-      return { sections: [{ heading: 'Certificates to download', empty: 'No certificate has been issued yet.', items: certificates.map((c) => ({ id: c.id, title: c.number, detail: `Issued ${c.issuedAt.slice(0, 10)}`, status: c.status, href: `/api/certificates/${c.id}/pdf` })) }] };
+      return { sections: [{ heading: 'Certificates to download', empty: 'No certificate has been issued yet.', items: certificates.map((c) => ({ id: c.id, title: c.number, detail: `Issued ${c.issuedAt.slice(0, 10)}`, status: c.status, href: `/api/certificates/${c.id}/pdf`, download: true })) }] };
     }
     case 'admin': {
       const invitations = await Invitation.findAll({ where: { acceptedAt: null }, order: [['createdAt', 'DESC']], limit: 20 });

@@ -3,7 +3,8 @@ import type { CaseResult } from '@/lib/hydraulics/case-result';
 import { evaluateCase } from '@/lib/hydraulics/evaluate-case';
 import { ENGINE_VERSION } from '@/lib/hydraulics/version';
 import type { Revision } from '@/lib/db';
-import { frozenCaseFile, inputsSha256, resultsSha256, revisionSha256 } from '@/lib/revisions/revision-hashes';
+import { frozenIntegrity } from '@/lib/revisions/frozen-integrity';
+import { frozenCaseFile, resultsSha256 } from '@/lib/revisions/revision-hashes';
 import { parseCase } from '@/lib/validation/parse-case';
 import { type FieldChange, resultChanges } from './revision-changes';
 
@@ -36,19 +37,11 @@ function rerun(inputs: unknown): FrozenRevisionCheck['rerun'] {
 export function checkFrozenRevision(revision: Revision): FrozenRevisionCheck {
   const inputs = frozenCaseFile(revision.inputsJson);
   const stored = revision.resultsJson ? (JSON.parse(revision.resultsJson) as CaseResult) : null;
-  const inputsIntact = revision.inputsSha256 !== null && inputsSha256(inputs) === revision.inputsSha256;
-  const resultsIntact = stored !== null && revision.resultsSha256 !== null && resultsSha256(stored) === revision.resultsSha256;
-  const revisionIntact =
-    revision.revisionSha256 !== null &&
-    revision.revisionSha256 ===
-      revisionSha256({ schemeId: revision.schemeId, number: revision.number, authorId: revision.authorId, engineVersion: revision.engineVersion ?? '', inputsSha256: revision.inputsSha256 ?? '', resultsSha256: revision.resultsSha256 ?? '', submittedAt: revision.submittedAt ?? '' });
+  const { inputsIntact, resultsIntact, revisionIntact, problems } = frozenIntegrity(revision) ?? { inputsIntact: false, resultsIntact: false, revisionIntact: false, problems: ['This revision is a draft: nothing has been frozen to check.'] };
   const again = rerun(inputs);
   again.matches = again.resultsSha256 !== null && again.resultsSha256 === revision.resultsSha256;
   const differences = stored && again.results ? resultChanges(stored, again.results) : [];
-  const blockers: string[] = [];
-  if (!inputsIntact) blockers.push('The inputs changed after submission: their SHA-256 no longer matches the one recorded when the revision was frozen.');
-  if (!resultsIntact) blockers.push('The stored results changed after submission: their SHA-256 no longer matches the one recorded when the revision was frozen.');
-  if (!revisionIntact) blockers.push('The frozen revision’s own SHA-256 does not match its recorded fields.');
+  const blockers = [...problems];
   if (again.error) blockers.push(again.error);
   else if (!again.matches) {
     const engine = revision.engineVersion !== ENGINE_VERSION ? ` The revision was computed by engine ${revision.engineVersion}; the server now runs ${ENGINE_VERSION}.` : '';

@@ -3,6 +3,7 @@ import { Op } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Review, Revision, User, database } from '@/lib/db';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
+import { frozenIntegrity } from '@/lib/revisions/frozen-integrity';
 import { frozenCaseFile } from '@/lib/revisions/revision-hashes';
 import { checkFrozenRevision } from './check-frozen-revision';
 import { findVisibleRevision } from './find-visible-revision';
@@ -37,6 +38,7 @@ export async function loadCheckView({ revisionId, checker }: { revisionId: strin
     inputs,
     results,
     check: revision.status === 'submitted' ? checkFrozenRevision(revision) : null,
+    integrity: frozenIntegrity(revision),
     previous: previous
       ? {
           id: previous.id,

@@ -2,6 +2,7 @@ import 'server-only';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Certificate, Revision, User, database } from '@/lib/db';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
+import { frozenIntegrity } from '@/lib/revisions/frozen-integrity';
 import { frozenCaseFile } from '@/lib/revisions/revision-hashes';
 import { findVisibleRevision } from './find-visible-revision';
 import { listAvailableCheckers } from './list-available-checkers';
@@ -32,6 +33,8 @@ export async function loadRevisionView({ revisionId, user }: { revisionId: strin
       revisionSha256: revision.revisionSha256,
     },
     scheme: { id: scheme.id, reference: scheme.reference, name: scheme.name, watercourse: scheme.watercourse, site: scheme.site },
+    /** Null for a draft; otherwise the hashes recomputed now, with what disagrees. */
+    integrity: frozenIntegrity(revision),
     inputs: frozenCaseFile(revision.inputsJson),
     results: revision.resultsJson ? (JSON.parse(revision.resultsJson) as CaseResult) : null,
     reviews: await listReviewComments(revision.id, { includeOpen: user.role === 'checker' || user.role === 'admin' }),

@@ -14,7 +14,7 @@ export async function loadScheme({ schemeId, user }: { schemeId: string; user: S
     scheme: { id: scheme.id, reference: scheme.reference, name: scheme.name, watercourse: scheme.watercourse, site: scheme.site, description: scheme.description, createdAt: scheme.createdAt },
     designer: { name: designer?.name ?? 'unknown', organisation: designer?.organisation ?? null },
     isOwner,
-    openDraft: revisions.find((r) => r.status === 'draft' || r.status === 'returned') ?? null,
+    openDraft: revisions.find((r) => r.status === 'draft') ?? null,
     revisions,
   };
 }

@@ -7,7 +7,6 @@ import { ConflictError, ForbiddenError, NotFoundError } from '@/lib/http/app-err
 // Who may see or change a scheme. Someone without the right to a scheme is told it does not exist (404),
 // so scheme ids cannot be probed; only the wrong role for the whole action is a 403.
 
-const EDITABLE_STATUSES = ['draft', 'returned'] as const;
 
 async function mayRead(user: SessionUser, scheme: Scheme, transaction?: Transaction): Promise<boolean> {
   if (user.role === 'designer') return scheme.designerId === user.id;
@@ -41,12 +40,13 @@ export async function findEditableRevision(user: SessionUser, revisionId: string
   return found;
 }
 
-export function isEditable(revision: Revision): boolean {
-  return (EDITABLE_STATUSES as readonly string[]).includes(revision.status);
+export function isEditable(revision: Pick<Revision, 'status'>): boolean {
+  return revision.status === 'draft';
 }
 
 export function assertEditable(revision: Revision): void {
   if (!isEditable(revision)) {
-    throw new ConflictError(`Revision ${revision.number} is ${revision.status} and read-only. Start a new draft from it to make changes.`);
+    const why = revision.status === 'returned' ? 'was returned by the checker and stays frozen as it was submitted' : `is ${revision.status} and read-only`;
+    throw new ConflictError(`Revision ${revision.number} ${why}. Start a new draft from revision ${revision.number} to make changes.`);
   }
 }

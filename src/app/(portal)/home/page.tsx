@@ -6,9 +6,17 @@ import { StatusLabel } from '@/components/ui/status-label';
 import { requirePageRole } from '@/lib/auth/page-guard';
 import { ANY_ROLE } from '@/lib/auth/authorize';
 import { ROLE_DUTIES, ROLE_LABELS } from '@/lib/auth/roles';
-import { loadRoleHome } from '@/lib/home/load-role-home';
+import { type HomeItem, loadRoleHome } from '@/lib/home/load-role-home';
 
 export const metadata: Metadata = { title: 'Home' };
+
+function ItemTitle({ item }: { item: HomeItem }) {
+  const className = 'text-accent underline hover:text-accent-strong';
+  if (!item.href) return item.title;
+  // A file is fetched only when clicked: a prefetched <Link> would download it (and log the download) on every visit.
+  if (item.download) return <a className={className} href={item.href} download>Download {item.title}</a>;
+  return <Link className={className} href={item.href}>{item.title}</Link>;
+}
 
 export default async function HomePage() {
   const user = await requirePageRole(ANY_ROLE, '/home');
@@ -29,7 +37,7 @@ export default async function HomePage() {
                 {section.items.map((item) => (
                   <li key={item.id} className="flex items-start justify-between gap-3 px-4 py-3">
                     <div>
-                      <p className="font-semibold">{item.href ? <Link className="text-accent underline hover:text-accent-strong" href={item.href}>{item.title}</Link> : item.title}</p>
+                      <p className="font-semibold"><ItemTitle item={item} /></p>
                       <p className="text-sm text-ink-soft">{item.detail}</p>
                     </div>
                     <StatusLabel status={item.status} />

@@ -2,7 +2,7 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 
 export type RevisionStatus = 'draft' | 'submitted' | 'returned' | 'countersigned' | 'withdrawn';
 
-/** One revision of a scheme's design check. Frozen (by a database trigger too) once submitted. */
+/** One revision of a scheme's design check. Frozen for ever (by database triggers too) once it leaves draft. */
 export class Revision extends Model<InferAttributes<Revision>, InferCreationAttributes<Revision>> {
   declare id: string;
   declare schemeId: string;

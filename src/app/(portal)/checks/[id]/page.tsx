@@ -4,6 +4,7 @@ import { forbidden, notFound } from 'next/navigation';
 import { requirePageRole } from '@/lib/auth/page-guard';
 import { ForbiddenError, NotFoundError } from '@/lib/http/app-errors';
 import { loadCheckView } from '@/lib/review/load-check-view';
+import { IntegrityAlarm } from '@/components/ui/integrity-alarm';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusLabel } from '@/components/ui/status-label';
 import { ChangesTable } from '../_components/changes-table';
@@ -44,6 +45,7 @@ export default async function CheckPage({ params }: { params: Promise<{ id: stri
           <Link className="text-accent underline" href={`/revisions/${revision.id}`}>Revision record and history</Link>
         </span>
       </PageHeader>
+      {view.integrity ? <IntegrityAlarm className="mb-6" number={revision.number} problems={view.integrity.problems} /> : null}
       {revision.assignedToOther ? <p role="note" className="mb-6 border-l-4 border-verdict-caution bg-paper-deep px-4 py-3 text-sm">This revision is assigned to {revision.checker}; you can read it but not decide on it.</p> : null}
 
       <section aria-labelledby="h-rerun" className="mb-10">

@@ -5,6 +5,7 @@ import { ANY_ROLE } from '@/lib/auth/authorize';
 import { requirePageRole } from '@/lib/auth/page-guard';
 import { NotFoundError } from '@/lib/http/app-errors';
 import { loadRevisionView } from '@/lib/review/load-revision-view';
+import { IntegrityAlarm } from '@/components/ui/integrity-alarm';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusLabel } from '@/components/ui/status-label';
 import { InputsTable } from '../../checks/_components/inputs-table';
@@ -32,6 +33,7 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
   const view = await load(id, user);
   const { revision, scheme } = view;
   const isDesigner = user.role === 'designer';
+  const openDraft = view.siblings.find((s) => s.status === 'draft');
   return (
     <>
       <PageHeader eyebrow={`${scheme.reference} · revision ${revision.number}`} title={scheme.name}>
@@ -42,6 +44,7 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
         </span>
       </PageHeader>
 
+      {view.integrity ? <IntegrityAlarm className="mb-6" number={revision.number} problems={view.integrity.problems} /> : null}
       <nav aria-label="Revisions of this scheme" className="mb-6 flex flex-wrap gap-2 text-sm">
         {view.siblings.map((s) => (
           <Link key={s.id} href={`/revisions/${s.id}`} aria-current={s.id === revision.id ? 'page' : undefined} className={`rounded border px-2 py-1 ${s.id === revision.id ? 'border-accent bg-accent-wash' : 'border-paper-edge hover:border-accent'}`}>
@@ -72,8 +75,14 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
           ) : null}
           {revision.status === 'returned' && isDesigner ? (
             <p role="note" className="mt-3 border-l-4 border-verdict-caution bg-paper-deep px-3 py-2">
-              <span aria-hidden="true">↩ </span>The checker returned this revision. Read the comments below, then revise the scheme in a new draft started from it.
-              <span className="mt-2 block"><StartDraftButton revisionId={revision.id} schemeId={scheme.id} number={revision.number} /></span>
+              <span aria-hidden="true">↩ </span>The checker returned this revision. It stays frozen as it was submitted: revise the scheme in a new draft started from it, which shows the checker’s comments beside the fields they concern.
+              <span className="mt-2 block">
+                {openDraft ? (
+                  <Link className="text-accent underline" href={`/schemes/${scheme.id}/wizard/scheme`}>Continue draft revision {openDraft.number}</Link>
+                ) : (
+                  <StartDraftButton revisionId={revision.id} schemeId={scheme.id} number={revision.number} />
+                )}
+              </span>
             </p>
           ) : null}
         </section>

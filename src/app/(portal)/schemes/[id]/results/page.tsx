@@ -7,11 +7,13 @@ import { revisionRevocation } from '@/lib/certificates/revision-revocation';
 import { NotFoundError } from '@/lib/http/app-errors';
 import { completedSteps, unitWords } from '@/lib/revisions/draft-inputs';
 import { evaluateDraft } from '@/lib/revisions/evaluate-draft';
+import { frozenIntegrity } from '@/lib/revisions/frozen-integrity';
 import { featuredEventIndex } from '@/lib/revisions/results-sheet';
 import { findSchemeRevision } from '@/lib/schemes/find-scheme-revision';
 import { isEditable } from '@/lib/schemes/scheme-access';
 import { WizardProgress } from '@/components/forms/wizard/wizard-progress';
 import { CautionNote } from '@/components/ui/caution-note';
+import { IntegrityAlarm } from '@/components/ui/integrity-alarm';
 import { PageHeader } from '@/components/ui/page-header';
 import { RevocationNotice } from '@/components/ui/revocation-notice';
 import { StatusLabel } from '@/components/ui/status-label';
@@ -30,6 +32,7 @@ export default async function ResultsPage({ params, searchParams }: { params: Pr
   const editable = user.role === 'designer' && scheme.designerId === user.id && isEditable(revision);
   const draft = evaluation.draft;
   const revocation = await revisionRevocation(revision);
+  const integrity = frozenIntegrity(revision);
   return (
     <>
       <PageHeader eyebrow={`Results sheet · ${scheme.reference} · revision ${revision.number}`} title={scheme.name}>
@@ -37,6 +40,7 @@ export default async function ResultsPage({ params, searchParams }: { params: Pr
       </PageHeader>
       {editable ? <WizardProgress schemeId={scheme.id} current="results" completed={completedSteps(draft)} /> : null}
       <RevocationNotice className="mb-6" revocations={revocation ? [revocation] : []} />
+      {integrity ? <IntegrityAlarm className="mb-6" number={revision.number} problems={integrity.problems} /> : null}
       <CautionNote className="mb-8" />
       {evaluation.status === 'incomplete' ? <IncompleteNotice schemeId={scheme.id} title="The draft is not complete yet, so there are no results." issues={evaluation.issues} editable={editable} /> : null}
       {evaluation.status === 'unsolvable' ? <IncompleteNotice schemeId={scheme.id} title="The engine found no physical answer for these inputs." issues={evaluation.issues} editable={editable} /> : null}
