@@ -9,7 +9,7 @@ export function CarriedCommentsAside({ carried, step }: { carried: CarriedCommen
   const elsewhere = carried.comments.filter((c) => c.part !== step);
   const { number, id } = carried.fromRevision;
   return (
-    <aside aria-labelledby="h-carried" className="rounded border border-verdict-caution bg-paper-deep p-4 text-sm">
+    <aside aria-labelledby="h-carried" className="self-start rounded border border-verdict-caution bg-paper-deep p-4 text-sm">
       <h2 id="h-carried" className="font-semibold">The checker’s comments on revision {number}</h2>
       <p className="mt-1 text-ink-soft">This draft answers them. <Link className="text-accent underline" href={`/revisions/${id}`}>Read revision {number}</Link>.</p>
       {carried.summaries.map((s) => (
