@@ -6,7 +6,7 @@ import { revokeCertificateAction } from '@/app/(portal)/admin/certificates/actio
 import { generateLettersAction } from '@/app/(portal)/liaison/[id]/letters/actions';
 import { certificateVerificationUrl } from '@/lib/certificates/certificate-urls';
 import { portalBaseUrl } from '@/lib/certificates/portal-base-url';
-import { Certificate, Letter, OutboxMessage, database } from '@/lib/db';
+import { AuditEvent, Certificate, Letter, OutboxMessage, database } from '@/lib/db';
 import { letterMessageId } from '@/lib/letters/letter-delivery';
 import { sendLetterBatch } from '@/lib/letters/send-letter-batch';
 import { type LocalSmtpServer, startLocalSmtpServer, stopLocalSmtpServer } from '@/lib/mail/local-smtp-server';
@@ -60,7 +60,7 @@ afterAll(async () => {
 });
 
 describe('revoking a certificate', () => {
-  it('refuses a wrong password or a missing confirmation, and changes nothing', async () => {
+  it('refuses a wrong password or a missing confirmation, and changes nothing but the counted attempt and its audit entry', async () => {
     const { certificate } = await certifiedWithParcels();
     const batchId = await generate(certificate.schemeId, certificate.revisionId);
     const before = await tableSnapshot();
@@ -68,7 +68,9 @@ describe('revoking a certificate', () => {
     signedInAs(people.admin.sessionUser);
     expect(await revokeCertificateAction({ certificateId: certificate.id, reason: REASON, password: people.admin.password })).toMatchObject({ ok: false, status: 400, issues: [{ path: 'confirmed' }] });
     expect(await revokeCertificateAction({ certificateId: certificate.id, reason: REASON, confirmed: true, password: '' })).toMatchObject({ ok: false, status: 400, issues: [{ path: 'password' }] });
-    expect(await tableSnapshot()).toEqual(before);
+    // The wrong password is counted against the admin's confirmation budget and audited; nothing else is stored.
+    expect(await tableSnapshot()).toEqual({ ...before, audit_events: before.audit_events + 1, sign_in_attempts: expect.any(Number) });
+    expect(await AuditEvent.count({ where: { action: 'user.revoke-password-failed', entityId: people.admin.user.id } })).toBe(1);
     expect((await certificate.reload()).status).toBe('issued');
     expect((await Letter.findAll({ where: { batchId } })).every((l) => l.status === 'queued')).toBe(true);
   });
