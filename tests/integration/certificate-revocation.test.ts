@@ -8,6 +8,8 @@ import { certificateVerificationUrl } from '@/lib/certificates/certificate-urls'
 import { portalBaseUrl } from '@/lib/certificates/portal-base-url';
 import { AuditEvent, Certificate, Letter, OutboxMessage, database } from '@/lib/db';
 import { letterMessageId } from '@/lib/letters/letter-delivery';
+import { listLiaisonSchemes } from '@/lib/parcels/list-liaison-schemes';
+import { selectRevision } from '@/lib/parcels/select-revision';
 import { sendLetterBatch } from '@/lib/letters/send-letter-batch';
 import { type LocalSmtpServer, startLocalSmtpServer, stopLocalSmtpServer } from '@/lib/mail/local-smtp-server';
 import { demoParcelsCsv } from './support/liaison-fixtures';
@@ -123,6 +125,15 @@ describe('letters and a revoked certificate', () => {
     expect(refused.ok ? '' : refused.error).toContain(REASON);
     expect(await tableSnapshot()).toEqual(before);
     expect(letterFiles()).toEqual(files);
+  });
+
+  it('no longer counts the revoked revision as the scheme’s certified one, but still opens it when it is the only one', async () => {
+    const { certificate, scheme } = await certifiedWithParcels();
+    const listed = async () => (await listLiaisonSchemes(people.liaison.sessionUser)).find((s) => s.id === scheme.id);
+    expect((await listed())?.certifiedRevision).toBe(1);
+    expect(await revoke(certificate.id)).toMatchObject({ ok: true });
+    expect((await listed())?.certifiedRevision).toBeNull();
+    expect((await selectRevision({ schemeId: scheme.id }))?.id).toBe(certificate.revisionId);
   });
 
   it('cites the certificate number and its public verification link in a letter from a certified revision', async () => {

@@ -1,6 +1,6 @@
 import 'server-only';
 import type { SessionUser } from '@/lib/auth/current-session';
-import { Letter, Parcel, ParcelRegister, Revision, Scheme, database } from '@/lib/db';
+import { Certificate, Letter, Parcel, ParcelRegister, Revision, Scheme, database } from '@/lib/db';
 import { schemeLiaisonAccess } from './scheme-liaison-access';
 
 /** The schemes whose landowners the user may see, with where their register and letters stand. */
@@ -15,11 +15,15 @@ export async function listLiaisonSchemes(user: SessionUser) {
     Revision.findAll({ where: { schemeId: ids }, attributes: ['id', 'schemeId', 'number', 'status'] }),
     Parcel.findAll({ where: { schemeId: ids }, attributes: ['registerId'] }),
   ]);
-  const letters = await Letter.findAll({ where: { revisionId: revisions.map((r) => r.id) }, attributes: ['revisionId', 'status'] });
+  const [letters, revokedCertificates] = await Promise.all([
+    Letter.findAll({ where: { revisionId: revisions.map((r) => r.id) }, attributes: ['revisionId', 'status'] }),
+    Certificate.findAll({ where: { schemeId: ids, status: 'revoked' }, attributes: ['revisionId'] }),
+  ]);
+  const revoked = new Set(revokedCertificates.map((c) => c.revisionId));
   return schemes.map((s) => {
     const latest = registers.filter((r) => r.schemeId === s.id).sort((a, b) => b.version - a.version)[0];
     const mine = revisions.filter((r) => r.schemeId === s.id);
-    const certified = mine.filter((r) => r.status === 'countersigned').sort((a, b) => b.number - a.number)[0];
+    const certified = mine.filter((r) => r.status === 'countersigned' && !revoked.has(r.id)).sort((a, b) => b.number - a.number)[0];
     const theirLetters = letters.filter((l) => mine.some((r) => r.id === l.revisionId));
     return {
       id: s.id,

@@ -4,8 +4,9 @@ import { Certificate, Revision, database } from '@/lib/db';
 import { NotFoundError } from '@/lib/http/app-errors';
 
 /**
- * The revision the liaison work reads: the one asked for (it must belong to the scheme), else the latest countersigned,
- * else the latest draft-like one. Null when the scheme has no revision at all.
+ * The revision the liaison work reads: the one asked for (it must belong to the scheme), else the latest countersigned
+ * whose certificate still stands, else the latest draft-like one. Null when the scheme has no revision at all.
+ * A revoked certificate no longer certifies anything, so its revision is never the default.
  */
 export async function selectRevision({ schemeId, revisionId, transaction }: { schemeId: string; revisionId?: string | null; transaction?: Transaction }): Promise<Revision | null> {
   database();
@@ -14,7 +15,8 @@ export async function selectRevision({ schemeId, revisionId, transaction }: { sc
     if (!revision) throw new NotFoundError('No such revision of this scheme.');
     return revision;
   }
-  const certified = await Revision.findOne({ where: { schemeId, status: 'countersigned' }, order: [['number', 'DESC']], transaction });
+  const revoked = (await Certificate.findAll({ where: { schemeId, status: 'revoked' }, attributes: ['revisionId'], transaction })).map((c) => c.revisionId);
+  const certified = await Revision.findOne({ where: { schemeId, status: 'countersigned', id: { [Op.notIn]: revoked } }, order: [['number', 'DESC']], transaction });
   if (certified) return certified;
   return Revision.findOne({ where: { schemeId, status: { [Op.ne]: 'withdrawn' } }, order: [['number', 'DESC']], transaction });
 }
