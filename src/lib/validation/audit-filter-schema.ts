@@ -3,12 +3,18 @@ import { AUDIT_ACTION_CODES } from '@/lib/audit/audit-actions';
 
 // The audit trail's filters, from the page's query or the CSV export's: one schema, two users.
 
+// Date.parse rolls 2026-02-30 over into March and rejects month 13: a real day reads back as itself.
+const isCalendarDay = (v: string) => {
+  const time = Date.parse(`${v}T00:00:00Z`);
+  return Number.isFinite(time) && new Date(time).toISOString().slice(0, 10) === v;
+};
+
 const calendarDate = (label: string) =>
   z
     .string()
     .trim()
     .regex(/^(\d{4}-\d{2}-\d{2})?$/, `Give the ${label} date as YYYY-MM-DD.`)
-    .refine((v) => v === '' || new Date(`${v}T00:00:00Z`).toISOString().slice(0, 10) === v, { message: `The ${label} date is not a day of the calendar.` })
+    .refine((v) => v === '' || isCalendarDay(v), { message: `The ${label} date is not a day of the calendar.` })
     .default('');
 
 const recordId = (what: string) => z.string().trim().max(64, `Choose the ${what} from the list.`).default('');
