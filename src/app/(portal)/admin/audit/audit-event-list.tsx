@@ -8,8 +8,8 @@ export function AuditEventList({ entries }: { entries: AuditTrailEntry[] }) {
   return (
     <ol aria-label="Audit events, newest first" className="divide-y divide-paper-edge border-y border-paper-edge text-sm">
       {entries.map((e) => (
-        <li key={e.number} className="grid gap-1 py-3 md:grid-cols-[5rem_10rem_12rem_1fr] md:gap-3">
-          <p className="num text-ink-faint"><span className="md:sr-only">Event </span>{e.number}</p>
+        <li key={e.number} className="grid gap-1 py-3 md:grid-cols-[6rem_13rem_12rem_1fr] md:gap-3">
+          <p className="num text-ink-faint">Event {e.number}</p>
           <p className="num"><time dateTime={e.at}>{e.at.replace('T', ' ').slice(0, 19)}</time><span className="text-ink-faint"> UTC</span></p>
           <p className="font-semibold">{e.who}</p>
           <div className="min-w-0">
