@@ -101,7 +101,7 @@ describe('each event in plain words', () => {
       const source = readFileSync(file, 'utf8');
       if (!source.includes('recordAuditEvent(')) continue;
       for (const line of source.split('\n').filter((l) => /\baction\b/.test(l))) {
-        for (const match of line.matchAll(/'((?:user|demo|scheme|revision|review|certificate|parcels|letters?)\.[a-z-]+)'/g)) recorded.add(match[1]);
+        for (const match of line.matchAll(/'((?:user|demo|scheme|revision|review|certificate|parcels|letters?|audit)\.[a-z-]+)'/g)) recorded.add(match[1]);
       }
     }
     expect(recorded.size).toBeGreaterThan(25);
@@ -212,11 +212,24 @@ describe('CSV export', () => {
     expect(rows).toHaveLength(1 + 231);
     expect(rows[1][3]).toBe('downloaded certificate SMC-2026-9999');
 
+    const exported = await AuditEvent.findOne({ where: { action: 'audit.exported' }, order: [['id', 'DESC']] });
+    expect(exported).toMatchObject({ actorId: admin.user.id, detailsJson: '{"events":231,"filters":{"action":"certificate.downloaded"}}' });
+    expect((await view({ action: 'audit.exported' })).entries.map((e) => `${e.who} ${e.what}`)).toEqual(['Ida Marchbank exported 231 events of the audit trail as CSV, filtered by kind of event']);
+
     const onScheme = parse(await (await csvOf(`scheme=${schemeId}`)).text()) as string[][];
     expect(onScheme).toHaveLength(2);
     expect(onScheme[1][2]).toBe('\'=HYPERLINK("http://evil.test","Quill")');
     expect(onScheme[1][4]).toBe("'@SM-EVIL +Wendle sluice");
     expect(onScheme[1][0]).toMatch(/^\d+$/);
+  });
+
+  it('answers a prefetch with nothing and records nothing', async () => {
+    const before = await databaseDigest();
+    signedInAs(admin.sessionUser);
+    const prefetch = await callRoute('admin/audit/csv', 'GET', { headers: { 'sec-purpose': 'prefetch' } });
+    expect(prefetch.status).toBe(204);
+    expect(await prefetch.text()).toBe('');
+    expect(await databaseDigest()).toBe(before);
   });
 
   it('refuses bad filters with 400 naming the field, and other roles with 403', async () => {

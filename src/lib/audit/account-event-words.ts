@@ -1,8 +1,14 @@
 import { ROLE_LABELS, isRole } from '@/lib/auth/roles';
-import { type Words, text } from './event-details';
+import { type Details, type Words, count, plural, text } from './event-details';
 
 const role = (value: string | null) => (value && isRole(value) ? ROLE_LABELS[value].toLowerCase() : 'an unknown role');
 const possessive = (name: string) => `${name}’s`;
+
+const FILTER_WORDS: Record<string, string> = { person: 'person', action: 'kind of event', scheme: 'scheme', from: 'first day', to: 'last day', q: 'search' };
+const filterNames = (d: Details) => {
+  const filters = d.filters && typeof d.filters === 'object' ? Object.keys(d.filters).filter((k) => Object.hasOwn(FILTER_WORDS, k)).map((k) => FILTER_WORDS[k]) : [];
+  return filters.join(', ');
+};
 
 const account: Words = (event, _details, names) => (event.entityId ? `${possessive(names.person(event.entityId))} account` : 'an account that does not exist');
 
@@ -18,7 +24,7 @@ const RESTRICTION: Record<string, Words> = {
   client: () => 'caused sign-ins from one network to be slowed down after repeated failures',
 };
 
-/** Signing in and out, invitations, roles and the password re-entered to countersign or revoke. */
+/** Signing in and out, invitations, roles, the password re-entered to countersign or revoke, and copies of the trail. */
 export const ACCOUNT_WORDS: Record<string, Words> = {
   'user.signed-in': () => 'signed in',
   'user.sign-in-failed': (e, d, n) => (FAILED_SIGN_IN[text(d, 'reason') ?? ''] ?? FAILED_SIGN_IN['wrong password'])(e, d, n),
@@ -31,4 +37,5 @@ export const ACCOUNT_WORDS: Record<string, Words> = {
   'user.countersign-locked-out': () => 'was locked out of countersigning after repeated wrong passwords',
   'user.revoke-password-failed': () => 'entered a wrong password when revoking a certificate',
   'user.revoke-locked-out': () => 'was locked out of revoking after repeated wrong passwords',
+  'audit.exported': (_e, d) => `exported ${plural(count(d, 'events') ?? 0, 'event')} of the audit trail as CSV${filterNames(d) ? `, filtered by ${filterNames(d)}` : ', unfiltered'}`,
 };

@@ -38,6 +38,7 @@ export const AUDIT_ACTIONS = {
   'letter.send-failed': 'A letter failed to send',
   'letter.requeued': 'Put a letter back in the queue',
   'letter.response-logged': 'Logged a reply to a letter',
+  'audit.exported': 'Exported the audit trail',
 } as const satisfies Record<string, string>;
 
 export type AuditAction = keyof typeof AUDIT_ACTIONS;

@@ -11,12 +11,12 @@ export const AUDIT_CSV_HEADER = ['Event', 'When (UTC)', 'Who', 'What', 'Scheme',
 export const AUDIT_CSV_MAX_ROWS = 50_000;
 
 /** Every event the filter matches (all pages, newest first), in the trail's words, as formula-safe CSV. */
-export async function auditTrailCsv({ filter }: { filter: AuditFilter }): Promise<string> {
+export async function auditTrailCsv({ filter }: { filter: AuditFilter }): Promise<{ csv: string; events: number }> {
   database();
   const directory = await loadAuditDirectory();
   const rows = await AuditEvent.findAll({ where: auditEventWhere(filter, directory), order: [['id', 'DESC']], limit: AUDIT_CSV_MAX_ROWS + 1 });
   const entries = rows.slice(0, AUDIT_CSV_MAX_ROWS).map((row) => toTrailEntry(row, directory));
   const cells = entries.map((e) => [e.number, e.at, e.who, e.what, e.scheme ?? '', e.hash]);
   if (rows.length > AUDIT_CSV_MAX_ROWS) cells.push(['', '', '', `Only the newest ${AUDIT_CSV_MAX_ROWS} matching events are listed: narrow the filter for older ones.`, '', '']);
-  return toSafeCsv(AUDIT_CSV_HEADER, cells);
+  return { csv: toSafeCsv(AUDIT_CSV_HEADER, cells), events: entries.length };
 }
