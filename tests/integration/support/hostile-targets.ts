@@ -56,6 +56,35 @@ export const RAW_BODY_TARGETS: Record<string, RawBodyTarget> = {
   'POST api/certificates/verification': { role: 'planning', contentType: 'multipart/form-data; boundary=----sillmark' },
 };
 
+export interface QueryTarget {
+  role: Person;
+  /** A valid query (without the "?"). */
+  valid: (world: PortalWorld) => string;
+  /** Hostile queries, each with the field its refusal must name. */
+  hostile: { query: string; field: string }[];
+}
+
+/** GET route handlers that read filters from their query, keyed "GET route": bad filters get 400 naming the field. */
+export const QUERY_TARGETS: Record<string, QueryTarget> = {
+  'GET api/admin/audit/csv': {
+    role: 'admin',
+    valid: (w) => `person=${w.people.designer.user.id}&action=user.signed-in&from=2026-01-01&to=2026-12-31&q=Harrowfield`,
+    hostile: [
+      { query: 'action=certificate.deleted', field: 'action' },
+      { query: 'action=%3DHYPERLINK(%22x%22)', field: 'action' },
+      { query: 'from=2026-02-30', field: 'from' },
+      { query: 'from=yesterday', field: 'from' },
+      { query: 'from=2026-05-02&to=2026-05-01', field: 'to' },
+      { query: `q=${'x'.repeat(201)}`, field: 'q' },
+      { query: 'person=no-such-person', field: 'person' },
+      { query: `scheme=${'s'.repeat(65)}`, field: 'scheme' },
+      { query: 'scheme=no-such-scheme', field: 'scheme' },
+      { query: 'person=a&person=b', field: 'person' },
+      { query: 'before=-1', field: 'before' },
+    ],
+  },
+};
+
 export interface ActionTarget {
   role: Person | 'anonymous';
   valid: (world: PortalWorld) => JsonValue;
