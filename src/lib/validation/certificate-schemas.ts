@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { multiLineText, singleLineText } from './plain-text';
 
 // Certificate numbers, the register's search, revocation and the uploaded PDF to verify.
 
@@ -27,7 +28,7 @@ const isoDate = z
 
 export const certificateRegisterQuerySchema = z
   .object({
-    q: z.string().trim().max(200, 'Search for at most 200 characters.').default(''),
+    q: singleLineText('the search').max(200, 'Search for at most 200 characters.').default(''),
     status: z.enum(['', ...CERTIFICATE_STATUSES], { message: 'Choose issued, superseded or revoked.' }).default(''),
     from: isoDate,
     to: isoDate,
@@ -40,7 +41,7 @@ export type CertificateRegisterQuery = z.infer<typeof certificateRegisterQuerySc
 
 export const revokeCertificateSchema = z.object({
   certificateId: z.string().trim().min(1, 'Choose the certificate to revoke.').max(64),
-  reason: z.string().trim().min(10, 'Give the reason for revoking (at least 10 characters): the verification page shows it.').max(1000, 'The reason has at most 1000 characters.'),
+  reason: multiLineText('the reason for revoking').min(10, 'Give the reason for revoking (at least 10 characters): the verification page shows it.').max(1000, 'The reason has at most 1000 characters.'),
   confirmed: z.literal(true, { message: 'Tick the statement to confirm that this certificate is to be revoked for good.' }),
   password: z.string().min(1, 'Enter your password: revoking a certificate needs it again.').max(200, 'A password has at most 200 characters.'),
 });
