@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isoDateText } from './iso-date';
 import { multiLineText } from './plain-text';
 
 // Letters to landowners: the template's free-text paragraphs, generating, sending and logging responses.
@@ -39,15 +40,9 @@ export const sendBatchSchema = z.object({
 });
 export type SendBatchInput = z.infer<typeof sendBatchSchema>;
 
-const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
 export const logResponseSchema = z.object({
   letterId: id,
-  receivedOn: z
-    .string()
-    .trim()
-    .regex(ISO_DATE, 'must be a date like 2026-03-14')
-    .refine((d) => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)), { error: 'is not a real date' })
-    .refine((d) => Date.parse(`${d}T00:00:00Z`) <= Date.now(), { error: 'must not be in the future' }),
+  receivedOn: isoDateText('the day the response arrived').refine((d) => Date.parse(`${d}T00:00:00Z`) <= Date.now(), { error: 'must not be in the future' }),
   summary: multiLineText('what the landowner said').min(3, 'is required (what the landowner said, at least 3 characters)').max(2000, 'must be at most 2000 characters'),
 });
 export type LogResponseInput = z.infer<typeof logResponseSchema>;
