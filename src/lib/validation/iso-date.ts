@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './zod-without-eval';
 
 const ISO_DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import './zod-without-eval';
 
 // Text a person typed is stored and later printed into letters, certificates, e-mails and CSV files. Control
 // characters (NUL, BEL, ESC …) and the invisible marks that reverse the direction of text make what is printed differ
