@@ -1,5 +1,6 @@
 import { NextResponse, type NextRequest } from 'next/server';
 import { trustedOrigins } from '@/lib/config/public-url';
+import { nextWithSecurityHeaders, withSecurityHeaders } from '@/lib/http/security-headers';
 
 const SESSION_COOKIE = 'sillmark_session';
 const PUBLIC_PAGES = ['/sign-in', '/invitation', '/verify', '/robots.txt'];
@@ -14,7 +15,7 @@ export function proxy(request: NextRequest) {
     // Compared with the configured origin, never with Host or X-Forwarded-Host, which the client controls.
     const origin = request.headers.get('origin');
     if (origin && !trustedOrigins().has(origin)) {
-      return NextResponse.json({ error: 'Cross-origin requests that change data are refused.' }, { status: 403 });
+      return withSecurityHeaders(request, NextResponse.json({ error: 'Cross-origin requests that change data are refused.' }, { status: 403 }));
     }
   }
   const { pathname } = request.nextUrl;
@@ -23,9 +24,9 @@ export function proxy(request: NextRequest) {
     const url = request.nextUrl.clone();
     url.pathname = '/sign-in';
     url.search = `?next=${encodeURIComponent(pathname)}`;
-    return NextResponse.redirect(url);
+    return withSecurityHeaders(request, NextResponse.redirect(url));
   }
-  return NextResponse.next();
+  return nextWithSecurityHeaders(request);
 }
 
 export const config = { matcher: ['/((?!_next/static|_next/image|favicon.ico).*)'] };

@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { headers } from 'next/headers';
 import type { ReactNode } from 'react';
 import { mono, sans } from './fonts';
 import './globals.css';
@@ -8,7 +9,9 @@ export const metadata: Metadata = {
   description: 'Checking and certifying the upstream flood impact of weirs and spillways.',
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+// Read so that every page renders per request: Next puts the request's nonce on its scripts only then (see src/proxy.ts).
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  await headers();
   return (
     <html lang="en-GB" className={`${sans.variable} ${mono.variable}`}>
       <body>{children}</body>

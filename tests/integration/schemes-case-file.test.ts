@@ -78,10 +78,10 @@ describe('the results sheet downloads', () => {
     const { schemeId } = await completedDraft();
     const csv = await callRoute('schemes/[id]/step-table', 'GET', { id: schemeId, query: 'revision=1&event=1' });
     expect(csv.status).toBe(200);
-    const lines = (await csv.text()).trim().split('\n');
-    expect(lines[0]).toBe('Distance upstream (m),Bed level (m),Depth (m),Water level (m),Energy level (m),Velocity (m/s),Froude number,Friction slope (m/m)');
+    const lines = (await csv.text()).trim().split('\r\n');
+    expect(lines[0]).toBe('Event,Distance upstream (m),Bed level (m),Depth (m),Water level (m),Energy level (m),Velocity (m/s),Froude number,Friction slope (m/m)');
     expect(lines.length).toBeGreaterThan(10);
-    expect(Number(lines[1].split(',')[0])).toBe(0);
+    expect(lines[1].split(',').slice(0, 2)).toEqual(['1% AEP', '0']);
 
     const pdf = await callRoute('schemes/[id]/calculation-sheet', 'GET', { id: schemeId });
     expect(pdf.status).toBe(200);

@@ -29,6 +29,16 @@ describe('sessions', () => {
     }
   });
 
+  it('set a cookie that lives as long as the session, not for 400 days', async () => {
+    const { user } = await createTestUser('liaison');
+    const session = await lucia().createSession(user.id, {});
+    const cookie = lucia().createSessionCookie(session.id);
+    const sessionSeconds = (session.expiresAt.getTime() - Date.now()) / 1000;
+    expect(cookie.attributes.maxAge).toBeDefined();
+    expect(Math.abs((cookie.attributes.maxAge ?? 0) - sessionSeconds)).toBeLessThan(60);
+    expect(cookie.serialize()).toMatch(/Max-Age=43200(;|$)/);
+  });
+
   it('expire after twelve hours and are renewed when used in their second half', async () => {
     const { user } = await createTestUser('checker');
     const session = await lucia().createSession(user.id, {});

@@ -20,10 +20,13 @@ export function cookiesAreSecure(): boolean {
   return process.env.NODE_ENV === 'production';
 }
 
+const SESSION_HOURS = 12;
+
 function createLucia() {
   return new Lucia(sessionAdapter(), {
-    sessionExpiresIn: new TimeSpan(12, 'h'),
-    sessionCookie: { name: 'sillmark_session', expires: false, attributes: { secure: cookiesAreSecure(), sameSite: 'lax' } },
+    sessionExpiresIn: new TimeSpan(SESSION_HOURS, 'h'),
+    // The cookie lives as long as the session (Lucia renews both together), not the browser's 400-day maximum.
+    sessionCookie: { name: 'sillmark_session', expires: true, attributes: { secure: cookiesAreSecure(), sameSite: 'lax' } },
     getUserAttributes: (row) => ({ email: row.email, name: row.name, role: row.role, status: row.status }),
   });
 }

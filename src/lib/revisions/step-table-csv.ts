@@ -1,3 +1,4 @@
+import { toSafeCsv } from '@/lib/csv/to-safe-csv';
 import type { EventResult } from '@/lib/hydraulics/case-result';
 import type { CaseUnits } from '@/lib/validation/case-schema';
 import { unitWords } from './draft-inputs';
@@ -17,14 +18,11 @@ export function stepTableColumns(units: CaseUnits) {
   ] as const;
 }
 
-function csvCell(text: string): string {
-  return /[",\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
-
-/** The with-scheme profile of one event as CSV, full precision, one row per computed point. */
+/**
+ * The with-scheme profile of one event as CSV, full precision, one row per computed point. Each row names its event,
+ * so a table pasted beside another stays readable; the name is the designer's own text, hence the safe writer.
+ */
 export function stepTableCsv(event: EventResult, units: CaseUnits): string {
   const columns = stepTableColumns(units);
-  const lines = [columns.map((c) => csvCell(c.label)).join(',')];
-  for (const point of event.profile) lines.push(columns.map((c) => String(point[c.key])).join(','));
-  return `${lines.join('\n')}\n`;
+  return toSafeCsv(['Event', ...columns.map((c) => c.label)], event.profile.map((point) => [event.name, ...columns.map((c) => point[c.key])]));
 }

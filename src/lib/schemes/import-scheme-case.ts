@@ -5,26 +5,41 @@ import { recordAuditEvent } from '@/lib/audit/record-audit-event';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Scheme } from '@/lib/db';
 import { ForbiddenError, InvalidRequestError } from '@/lib/http/app-errors';
+import { dottedPath } from '@/lib/http/zod-issues';
 import { createDraft } from '@/lib/revisions/create-draft';
 import type { DraftInputs } from '@/lib/revisions/draft-inputs';
 import { withStoredUpload } from '@/lib/uploads/store-upload';
 import { textOfUpload } from '@/lib/uploads/sniff-upload';
 import { parseCaseText } from '@/lib/validation/parse-case';
+import { multiLineText, singleLineText } from '@/lib/validation/plain-text';
 import { EDITABLE_STEPS, governingSchema } from '@/lib/validation/scheme-schemas';
 import { nextSchemeReference } from './create-scheme';
 
 // The scheme block Sillmark writes beside the case when it exports one; optional, and ignored by the engine.
-const schemeBlockSchema = z
-  .object({
-    name: z.string().trim().min(1).max(200).optional(),
-    watercourse: z.string().trim().min(1).max(200).optional(),
-    site: z.string().trim().min(1).max(200).optional(),
-    description: z.string().trim().max(2000).optional(),
-    datum: z.string().trim().max(120).optional(),
+// When present it must be right: a block dropped in silence would start a scheme under the wrong name or site.
+const schemeBlockSchema = z.object(
+  {
+    name: singleLineText('the scheme’s name').min(1, 'must not be empty (the scheme’s name)').max(200, 'must be at most 200 characters').optional(),
+    watercourse: singleLineText('the river or stream').min(1, 'must not be empty (the river or stream)').max(200, 'must be at most 200 characters').optional(),
+    site: singleLineText('where the structure is').min(1, 'must not be empty (where the structure is)').max(200, 'must be at most 200 characters').optional(),
+    description: multiLineText('the description').max(2000, 'must be at most 2000 characters').optional(),
+    datum: singleLineText('the level datum').max(120, 'must be at most 120 characters').optional(),
     governing: governingSchema.optional(),
-  })
-  .catch({});
+  },
+  { error: 'must be an object with the scheme’s name, watercourse, site, description, datum and governing event' },
+);
 
+const BLOCK_PROBLEM = 'The case file’s scheme block has problems; nothing was stored.';
+
+function parseSchemeBlock(block: unknown, eventCount: number) {
+  const parsed = schemeBlockSchema.safeParse(block ?? {});
+  if (!parsed.success) throw new InvalidRequestError(parsed.error.issues.map((issue) => ({ path: dottedPath(['scheme', ...issue.path]), message: issue.message })), BLOCK_PROBLEM);
+  const { governing } = parsed.data;
+  if (typeof governing === 'number' && governing >= eventCount) {
+    throw new InvalidRequestError([{ path: 'scheme.governing', message: `must be "all" or the number of one of the ${eventCount} events, from 0` }], BLOCK_PROBLEM);
+  }
+  return parsed.data;
+}
 
 /** Starts a scheme from an uploaded case file: checked whole first, so a bad file stores nothing. */
 export async function importSchemeCase({ bytes, originalName, designer }: { bytes: Buffer; originalName: string; designer: SessionUser }) {
@@ -33,8 +48,8 @@ export async function importSchemeCase({ bytes, originalName, designer }: { byte
   const parsed = parseCaseText(text);
   if (!parsed.ok) throw new InvalidRequestError(parsed.issues, 'The case file has problems; nothing was stored.');
   const raw = JSON.parse(text) as { scheme?: unknown };
-  const block = schemeBlockSchema.parse(raw.scheme ?? {});
   const value = parsed.value;
+  const block = parseSchemeBlock(raw.scheme, value.events.length);
   const name = block.name ?? value.title?.slice(0, 200) ?? originalName.replace(/\.json$/i, '');
   const reach = value.reach;
   const inputs: DraftInputs = {
@@ -43,7 +58,7 @@ export async function importSchemeCase({ bytes, originalName, designer }: { byte
     wizard: {
       datum: block.datum,
       site: reach.kind === 'prismatic' ? { bedLevelAtControl: reach.bedLevelAtControl, reachLength: reach.length } : {},
-      governing: block.governing !== undefined && (block.governing === 'all' || block.governing < value.events.length) ? block.governing : 'all',
+      governing: block.governing ?? 'all',
       completed: [...EDITABLE_STEPS],
     },
   };

@@ -1,9 +1,10 @@
 import { z } from 'zod';
 import { ROLES } from '@/lib/auth/roles';
+import { singleLineText } from './plain-text';
 
 // One schema per form, used by react-hook-form in the browser and by the server action on the server.
 
-const email = z.string().trim().toLowerCase().min(1, 'Enter an e-mail address.').max(254, 'An e-mail address has at most 254 characters.').email('Enter an e-mail address like name@example.org.');
+const email = singleLineText('your e-mail address', { missing: 'Enter an e-mail address.' }).toLowerCase().min(1, 'Enter an e-mail address.').max(254, 'An e-mail address has at most 254 characters.').email('Enter an e-mail address like name@example.org.');
 
 export const signInSchema = z.object({
   email,
@@ -16,7 +17,7 @@ export const roleSchema = z.enum(ROLES, { message: 'Choose one of the five roles
 
 export const inviteUserSchema = z.object({
   email,
-  name: z.string().trim().min(2, 'Enter the person’s name (at least 2 characters).').max(120, 'A name has at most 120 characters.'),
+  name: singleLineText('the person’s name').min(2, 'Enter the person’s name (at least 2 characters).').max(120, 'A name has at most 120 characters.'),
   role: roleSchema,
 });
 export type InviteUserInput = z.infer<typeof inviteUserSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { multiLineText, singleLineText } from './plain-text';
 
 // Building blocks of the case-file schema: one schema per part of the file, with messages in the case's units.
 
@@ -19,7 +20,7 @@ export const missingOr = (kind: string) => (issue: { input: unknown }) => (issue
 export const finite = (unit?: string) => z.number({ error: missingOr(unit ? `a number (${unit})` : 'a number') });
 export const positive = (unit?: string) => finite(unit).positive({ error: `must be greater than 0${unit ? ` ${unit}` : ''}` });
 export const nonNegative = (unit?: string) => finite(unit).nonnegative({ error: `must be 0${unit ? ` ${unit}` : ''} or more` });
-export const text = (what: string) => z.string({ error: missingOr('text') }).trim().min(1, { error: `must not be empty (${what})` });
+export const text = (what: string) => singleLineText(what, { missing: 'is required' }).min(1, { error: `must not be empty (${what})` });
 
 function sectionSchema(u: UnitLabels) {
   const slope = nonNegative().optional();
@@ -117,7 +118,7 @@ export function weirControlSchema(u: UnitLabels) {
       crestLength: positive(u.length).optional(),
       sillHeight: nonNegative(u.length),
       coefficient: positive().optional(),
-      coefficientReason: z.string().max(500).optional(),
+      coefficientReason: multiLineText('where the coefficient comes from').max(500).optional(),
       approachVelocity: z.boolean({ error: 'must be true or false' }).optional(),
       crestBreadth: positive(u.length).optional(),
       noseShape: z.enum(['square-edged', 'round-nosed'], { error: 'must be square-edged or round-nosed' }).optional(),

@@ -13,6 +13,7 @@ import {
   UNIT_LABELS,
   weirControlSchema,
 } from './case-schema-parts';
+import { singleLineText } from './plain-text';
 
 // The Sillmark case file, version 1. Shared by the CLI, the API and the web forms, so every message
 // is written for a practitioner and carries its unit. Unknown keys are ignored.
@@ -27,7 +28,7 @@ function caseObject(units: CaseUnits) {
   return z.object({
     format: z.literal(CASE_FORMAT, { error: `must be "${CASE_FORMAT}"` }),
     version: z.literal(CASE_VERSION, { error: `must be ${CASE_VERSION}` }),
-    title: z.string().max(300, { error: 'must be at most 300 characters' }).optional(),
+    title: singleLineText('the case title').max(300, { error: 'must be at most 300 characters' }).optional(),
     units: z.literal(units),
     reach: z.discriminatedUnion('kind', [prismaticReachSchema(u), surveyedReachSchema(u)], { error: missingOr('"prismatic" or "surveyed"') }),
     events: z.array(eventSchema(u), { error: missingOr('a list of flood events') }).min(1, { error: 'must list at least one flood event' }),

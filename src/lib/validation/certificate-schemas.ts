@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { optionalIsoDateText } from './iso-date';
+import { multiLineText, singleLineText } from './plain-text';
 
 // Certificate numbers, the register's search, revocation and the uploaded PDF to verify.
 
@@ -19,18 +21,14 @@ export const CERTIFICATE_STATUSES = ['issued', 'superseded', 'revoked'] as const
 export const REGISTER_SORTS = ['number', 'scheme', 'site', 'issued', 'status'] as const;
 export const REGISTER_PAGE_SIZE = 20;
 
-const isoDate = z
-  .string()
-  .trim()
-  .regex(/^(\d{4}-\d{2}-\d{2})?$/, 'Give the date as YYYY-MM-DD.')
-  .default('');
+const registerDate = (what: string) => optionalIsoDateText(what).default('');
 
 export const certificateRegisterQuerySchema = z
   .object({
-    q: z.string().trim().max(200, 'Search for at most 200 characters.').default(''),
+    q: singleLineText('the search').max(200, 'Search for at most 200 characters.').default(''),
     status: z.enum(['', ...CERTIFICATE_STATUSES], { message: 'Choose issued, superseded or revoked.' }).default(''),
-    from: isoDate,
-    to: isoDate,
+    from: registerDate('issued on or after'),
+    to: registerDate('issued on or before'),
     sort: z.enum(REGISTER_SORTS, { message: 'Sort by number, scheme, site, issued or status.' }).default('issued'),
     direction: z.enum(['asc', 'desc'], { message: 'Sort ascending or descending.' }).default('desc'),
     page: z.coerce.number({ message: 'The page must be a whole number.' }).int('The page must be a whole number.').min(1, 'Pages start at 1.').max(100000).default(1),
@@ -40,7 +38,7 @@ export type CertificateRegisterQuery = z.infer<typeof certificateRegisterQuerySc
 
 export const revokeCertificateSchema = z.object({
   certificateId: z.string().trim().min(1, 'Choose the certificate to revoke.').max(64),
-  reason: z.string().trim().min(10, 'Give the reason for revoking (at least 10 characters): the verification page shows it.').max(1000, 'The reason has at most 1000 characters.'),
+  reason: multiLineText('the reason for revoking').min(10, 'Give the reason for revoking (at least 10 characters): the verification page shows it.').max(1000, 'The reason has at most 1000 characters.'),
   confirmed: z.literal(true, { message: 'Tick the statement to confirm that this certificate is to be revoked for good.' }),
   password: z.string().min(1, 'Enter your password: revoking a certificate needs it again.').max(200, 'A password has at most 200 characters.'),
 });

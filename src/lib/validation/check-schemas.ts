@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { multiLineText } from './plain-text';
 
 // One schema per check form (submit, comment, return, countersign): the form's resolver and the server action share it.
 
@@ -25,13 +26,13 @@ export const REVIEW_PART_LABELS: Record<ReviewPartName, string> = {
 export const reviewCommentSchema = z.object({
   revisionId,
   part: z.enum(REVIEW_PARTS, { message: 'Choose the part of the revision the comment is about.' }),
-  body: z.string().trim().min(3, 'Write the comment (at least 3 characters).').max(4000, 'A comment has at most 4000 characters.'),
+  body: multiLineText('the comment').min(3, 'Write the comment (at least 3 characters).').max(4000, 'A comment has at most 4000 characters.'),
 });
 export type ReviewCommentInput = z.infer<typeof reviewCommentSchema>;
 
 export const returnRevisionSchema = z.object({
   revisionId,
-  summary: z.string().trim().min(10, 'Say what the designer should change before resubmitting (at least 10 characters).').max(4000, 'The summary has at most 4000 characters.'),
+  summary: multiLineText('what the designer should change').min(10, 'Say what the designer should change before resubmitting (at least 10 characters).').max(4000, 'The summary has at most 4000 characters.'),
 });
 export type ReturnRevisionInput = z.infer<typeof returnRevisionSchema>;
 

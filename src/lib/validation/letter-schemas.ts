@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { isoDateText } from './iso-date';
+import { multiLineText } from './plain-text';
 
 // Letters to landowners: the template's free-text paragraphs, generating, sending and logging responses.
 
@@ -7,9 +9,7 @@ const id = z.string().trim().min(1, 'is required').max(64, 'is not a valid id');
 const QUANTITY = /\d\s*(mm|cm|km|m|metres?|meters?|millimetres?|m³\/s|m3\/s|cumecs|ft|feet)\b/i;
 
 const paragraph = (what: string, max: number) =>
-  z
-    .string()
-    .trim()
+  multiLineText(what)
     .min(1, `is required (${what})`)
     .max(max, `must be at most ${max} characters`)
     .refine((t) => !QUANTITY.test(t), { error: 'must not quote levels, depths, distances or flows: the letter puts in the engine’s numbers itself' });
@@ -21,8 +21,8 @@ export const letterParagraphsSchema = z.object({
   scheme: paragraph('what the scheme is', 1500),
   response: paragraph('how to respond', 1500),
   // Contact details carry telephone numbers and postcodes, so only their length is checked.
-  contact: z.string().trim().min(1, 'is required (how to reach the liaison officer)').max(600, 'must be at most 600 characters'),
-  signOff: z.string().trim().min(1, 'is required (name and position of the signatory)').max(200, 'must be at most 200 characters'),
+  contact: multiLineText('how to reach the liaison officer').min(1, 'is required (how to reach the liaison officer)').max(600, 'must be at most 600 characters'),
+  signOff: multiLineText('name and position of the signatory').min(1, 'is required (name and position of the signatory)').max(200, 'must be at most 200 characters'),
 });
 export type LetterParagraphs = z.infer<typeof letterParagraphsSchema>;
 
@@ -40,15 +40,9 @@ export const sendBatchSchema = z.object({
 });
 export type SendBatchInput = z.infer<typeof sendBatchSchema>;
 
-const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
 export const logResponseSchema = z.object({
   letterId: id,
-  receivedOn: z
-    .string()
-    .trim()
-    .regex(ISO_DATE, 'must be a date like 2026-03-14')
-    .refine((d) => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)), { error: 'is not a real date' })
-    .refine((d) => Date.parse(`${d}T00:00:00Z`) <= Date.now(), { error: 'must not be in the future' }),
-  summary: z.string().trim().min(3, 'is required (what the landowner said, at least 3 characters)').max(2000, 'must be at most 2000 characters'),
+  receivedOn: isoDateText('the day the response arrived').refine((d) => Date.parse(`${d}T00:00:00Z`) <= Date.now(), { error: 'must not be in the future' }),
+  summary: multiLineText('what the landowner said').min(3, 'is required (what the landowner said, at least 3 characters)').max(2000, 'must be at most 2000 characters'),
 });
 export type LogResponseInput = z.infer<typeof logResponseSchema>;

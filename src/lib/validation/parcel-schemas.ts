@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { multiLineText, singleLineText } from './plain-text';
 
 // Parcels register: one schema for a parcel, used by the CSV import (row by row), the table editor's form and the server.
 
@@ -16,17 +17,17 @@ const metres = (what: string) =>
 
 export const parcelSchema = z
   .object({
-    reference: z.string().trim().min(1, 'is required (the parcel reference, e.g. HM-07)').max(40, 'must be at most 40 characters'),
-    ownerName: z.string().trim().min(1, 'is required (owner or occupier name)').max(200, 'must be at most 200 characters'),
-    postalAddress: z.string().trim().min(1, 'is required (postal address for the letter)').max(500, 'must be at most 500 characters'),
+    reference: singleLineText('the parcel reference').min(1, 'is required (the parcel reference, e.g. HM-07)').max(40, 'must be at most 40 characters'),
+    ownerName: singleLineText('owner or occupier name').min(1, 'is required (owner or occupier name)').max(200, 'must be at most 200 characters'),
+    postalAddress: multiLineText('postal address for the letter').min(1, 'is required (postal address for the letter)').max(500, 'must be at most 500 characters'),
     /** Empty when the owner has no e-mail: the letter is then printed and posted. */
-    email: z.string().trim().max(254, 'must be at most 254 characters').refine((v) => v === '' || EMAIL.test(v), { error: 'must be an e-mail address like name@example.org, or empty' }),
+    email: singleLineText('the owner’s e-mail address').max(254, 'must be at most 254 characters').refine((v) => v === '' || EMAIL.test(v), { error: 'must be an e-mail address like name@example.org, or empty' }),
     distanceFromM: metres('distance upstream where the parcel starts').min(0, { error: 'must be 0 m or more (distance upstream of the control)' }).max(MAX_DISTANCE_M, { error: `must be at most ${MAX_DISTANCE_M} m` }),
     distanceToM: metres('distance upstream where the parcel ends').min(0, { error: 'must be 0 m or more (distance upstream of the control)' }).max(MAX_DISTANCE_M, { error: `must be at most ${MAX_DISTANCE_M} m` }),
     bankSide: z.enum(BANK_SIDES, { error: 'must be left, right or both (looking downstream)' }),
     /** Lowest ground level of the parcel, m above datum; empty to judge flooding by the bank level of the case. */
     groundLevelM: metres('lowest ground level of the parcel').min(-500, { error: 'must be at least -500 m' }).max(9000, { error: 'must be at most 9000 m' }).nullable(),
-    landUse: z.string().trim().max(120, 'must be at most 120 characters'),
+    landUse: singleLineText('land use').max(120, 'must be at most 120 characters'),
   })
   .refine((p) => p.distanceToM > p.distanceFromM, {
     path: ['distanceToM'],
@@ -54,7 +55,7 @@ export const saveParcelsSchema = z
     schemeId: id,
     /** The register version the edits start from; a newer one saved meanwhile makes this a conflict. */
     baseRegisterId: id,
-    note: z.string().trim().max(300, 'must be at most 300 characters'),
+    note: multiLineText('the note on this version').max(300, 'must be at most 300 characters'),
     parcels: z.array(parcelSchema).min(1, 'must keep at least one parcel').max(MAX_PARCELS, `must have at most ${MAX_PARCELS} parcels`),
   })
   .superRefine((v, ctx) => uniqueReferences(v.parcels, ctx));

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { type CaseUnits, caseSchema } from './case-schema';
+import { multiLineText, singleLineText } from './plain-text';
 
 // The wizard's forms, one schema per step. Every case field is taken from the engine's own case schema
 // (a .pick() or a part of it), so the form in the browser and the server refuse exactly the same input.
@@ -27,9 +28,7 @@ export type EditableStep = (typeof EDITABLE_STEPS)[number];
 export const unitsSchema = z.enum(['SI', 'US'], { error: 'must be SI (m, m³/s) or US customary (ft, ft³/s)' });
 
 const words = (what: string, max: number) =>
-  z
-    .string({ error: 'is required' })
-    .trim()
+  singleLineText(what)
     .min(1, { error: `is required (${what})` })
     .max(max, { error: `must be at most ${max} characters` });
 
@@ -40,7 +39,7 @@ export function schemeStepSchema(units: CaseUnits) {
     name: words('the scheme’s name', 200),
     watercourse: words('the river or stream', 200),
     site: words('where the structure is', 200),
-    description: z.string().trim().max(2000, { error: 'must be at most 2000 characters' }).optional(),
+    description: multiLineText('the description').max(2000, { error: 'must be at most 2000 characters' }).optional(),
     datum: words('the level datum, e.g. Ordnance Datum Newlyn', 120),
     units: z.literal(units, { error: 'must be SI (m, m³/s) or US customary (ft, ft³/s)' }),
     bedLevelAtControl: reach.bedLevelAtControl.optional(),

@@ -2,18 +2,23 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { requirePageRole } from '@/lib/auth/page-guard';
 import { listCertificates } from '@/lib/certificates/list-certificates';
+import { readQuery } from '@/lib/http/query-params';
 import { certificateRegisterQuerySchema } from '@/lib/validation/certificate-schemas';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusLabel } from '@/components/ui/status-label';
+import { UnreadableAddress } from '@/components/ui/unreadable-address';
 import { utc } from '../../checks/_components/quantities';
 import { RevokeForm } from './revoke-form';
 
 export const metadata: Metadata = { title: 'Revoke certificates' };
 
-export default async function AdminCertificatesPage({ searchParams }: { searchParams: Promise<{ page?: string }> }) {
+export default async function AdminCertificatesPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   await requirePageRole(['admin'], '/admin/certificates');
-  const query = certificateRegisterQuerySchema.parse({ page: (await searchParams).page ?? '1' });
+  const { page } = await searchParams;
+  const read = readQuery(certificateRegisterQuerySchema, { page });
+  if (!read.ok) return <UnreadableAddress issues={read.issues} plainHref="/admin/certificates" plainLabel="Open the first page" />;
+  const query = read.data;
   const register = await listCertificates(query);
   return (
     <>

@@ -1,11 +1,14 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { z } from 'zod';
 import { revisionStanding } from '@/lib/certificates/revision-standing';
+import { idQuery, readQuery } from '@/lib/http/query-params';
 import { computeParcelImpact } from '@/lib/parcels/compute-parcel-impact';
 import { listSchemeRevisions } from '@/lib/parcels/select-revision';
 import { CautionNote } from '@/components/ui/caution-note';
 import { EmptyState } from '@/components/ui/empty-state';
 import { buttonClassName, inputClassName } from '@/components/ui/form-field';
+import { UnreadableAddress } from '@/components/ui/unreadable-address';
 import { CATEGORY_WORDS } from '../../_components/category-label';
 import { StripLegend } from '../../_components/parcel-strip-svg';
 import { orNotFound, requireLiaisonPage } from '../../_components/scheme-page-access';
@@ -14,11 +17,14 @@ import { ReachImpactChart } from './reach-impact-chart';
 
 export const metadata: Metadata = { title: 'Impact on parcels' };
 
-export default async function ImpactPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ revision?: string }> }) {
+const impactQuery = z.object({ revision: idQuery('the revision').optional() });
+
+export default async function ImpactPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const { id } = await params;
-  const { revision: revisionId } = await searchParams;
   const { user } = await requireLiaisonPage(id, `/liaison/${id}/impact`);
-  const table = await orNotFound(() => computeParcelImpact({ user, schemeId: id, revisionId: revisionId ?? null }));
+  const read = readQuery(impactQuery, await searchParams);
+  if (!read.ok) return <UnreadableAddress issues={read.issues} plainHref={`/liaison/${id}/impact`} plainLabel="Open the impact of the latest revision" />;
+  const table = await orNotFound(() => computeParcelImpact({ user, schemeId: id, revisionId: read.data.revision ?? null }));
   const revisions = (await listSchemeRevisions(id)).filter((r) => r.status !== 'withdrawn');
   if (!table.revision) return <EmptyState title="This scheme has no revision to read yet." />;
   const counts = Object.entries(CATEGORY_WORDS).map(([c, words]) => ({ words, n: table.rows.filter((r) => r.category === c).length })).filter((c) => c.n > 0);

@@ -1,20 +1,25 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { z } from 'zod';
+import { numberFromOneQuery, readQuery } from '@/lib/http/query-params';
 import { loadParcelRegister } from '@/lib/parcels/load-parcel-register';
 import { parcelInputOf } from '@/lib/parcels/parcel-record';
 import { EmptyState } from '@/components/ui/empty-state';
+import { UnreadableAddress } from '@/components/ui/unreadable-address';
 import { orNotFound, requireLiaisonPage } from '../../_components/scheme-page-access';
 import { ParcelTable } from './parcel-table';
 import { RegisterForm } from './register-form';
 
 export const metadata: Metadata = { title: 'Parcels register' };
 
-export default async function RegisterPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ version?: string }> }) {
+const registerQuery = z.object({ version: numberFromOneQuery('the register version').optional() });
+
+export default async function RegisterPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const { id } = await params;
-  const { version } = await searchParams;
   const { user, access } = await requireLiaisonPage(id, `/liaison/${id}/register`);
-  const asked = version && /^\d{1,6}$/.test(version) ? Number(version) : undefined;
-  const loaded = await orNotFound(() => loadParcelRegister({ user, schemeId: id, version: asked }));
+  const read = readQuery(registerQuery, await searchParams);
+  if (!read.ok) return <UnreadableAddress issues={read.issues} plainHref={`/liaison/${id}/register`} plainLabel="Open the current register" />;
+  const loaded = await orNotFound(() => loadParcelRegister({ user, schemeId: id, version: read.data.version }));
   if (!loaded.register) {
     return <EmptyState title="This scheme has no parcels register yet.">{access === 'manage' ? <Link className="text-accent underline" href={`/liaison/${id}/upload`}>Upload the parcels CSV</Link> : 'A landowner liaison officer uploads it.'}</EmptyState>;
   }

@@ -1,10 +1,12 @@
 import type { Metadata } from 'next';
+import { z } from 'zod';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { ANY_ROLE } from '@/lib/auth/authorize';
 import { requirePageRole } from '@/lib/auth/page-guard';
 import { revisionRevocation } from '@/lib/certificates/revision-revocation';
 import { NotFoundError } from '@/lib/http/app-errors';
+import { indexQuery, numberFromOneQuery, readQuery } from '@/lib/http/query-params';
 import { completedSteps, unitWords } from '@/lib/revisions/draft-inputs';
 import { evaluateDraft } from '@/lib/revisions/evaluate-draft';
 import { frozenIntegrity } from '@/lib/revisions/frozen-integrity';
@@ -17,16 +19,21 @@ import { IntegrityAlarm } from '@/components/ui/integrity-alarm';
 import { PageHeader } from '@/components/ui/page-header';
 import { RevocationNotice } from '@/components/ui/revocation-notice';
 import { StatusLabel } from '@/components/ui/status-label';
+import { UnreadableAddress } from '@/components/ui/unreadable-address';
 import { IncompleteNotice } from './incomplete-notice';
 import { ResultsSheet } from './results-sheet';
 
 export const metadata: Metadata = { title: 'Results sheet' };
 
-export default async function ResultsPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ revision?: string; event?: string }> }) {
+const resultsQuery = z.object({ revision: numberFromOneQuery('the revision number').optional(), event: indexQuery('the event, counted from 0').optional() });
+
+export default async function ResultsPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const { id } = await params;
-  const query = await searchParams;
   const user = await requirePageRole(ANY_ROLE, `/schemes/${id}/results`);
-  const number = query.revision && /^\d+$/.test(query.revision) ? Number(query.revision) : null;
+  const read = readQuery(resultsQuery, await searchParams);
+  if (!read.ok) return <UnreadableAddress issues={read.issues} plainHref={`/schemes/${id}/results`} plainLabel="Open the results sheet of the latest revision" />;
+  const query = read.data;
+  const number = query.revision ?? null;
   const { scheme, revision } = await findSchemeRevision({ schemeId: id, number, user }).catch((error: unknown) => (error instanceof NotFoundError ? notFound() : Promise.reject(error)));
   const evaluation = await evaluateDraft({ revisionId: revision.id, user });
   const editable = user.role === 'designer' && scheme.designerId === user.id && isEditable(revision);
@@ -50,7 +57,7 @@ export default async function ResultsPage({ params, searchParams }: { params: Pr
           revision={{ id: revision.id, number: revision.number }}
           input={evaluation.input}
           result={evaluation.result}
-          eventIndex={query.event && /^\d+$/.test(query.event) && Number(query.event) < evaluation.result.events.length ? Number(query.event) : featuredEventIndex(evaluation.result, draft.wizard?.governing)}
+          eventIndex={query.event !== undefined && query.event < evaluation.result.events.length ? query.event : featuredEventIndex(evaluation.result, draft.wizard?.governing)}
           governing={draft.wizard?.governing ?? 'all'}
           datum={draft.wizard?.datum ?? null}
           units={unitWords(evaluation.input.units)}
