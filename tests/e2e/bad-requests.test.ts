@@ -34,11 +34,11 @@ describe('server action requests with bodies Next cannot decode', () => {
   });
 
   it.each([
-    ['not JSON', 'this is not json', 400, /not JSON/],
-    ['empty', '', 400, /empty/],
-    ['nested brackets a hundred thousand deep', `${'['.repeat(100_000)}${']'.repeat(100_000)}`, 400, /nests brackets/],
-    ['over the 2 MiB limit', JSON.stringify(['a'.repeat(3 * 1024 * 1024)]), 413, /larger than 2 MiB/],
-  ])('answers a body that is %s with %i and says why', async (_what, body, status, reason) => {
+    { what: 'not JSON', body: 'this is not json', status: 400, reason: /not JSON/ },
+    { what: 'empty', body: '', status: 400, reason: /empty/ },
+    { what: 'nested brackets a hundred thousand deep', body: `${'['.repeat(100_000)}${']'.repeat(100_000)}`, status: 400, reason: /nests brackets/ },
+    { what: 'over the 2 MiB limit', body: JSON.stringify(['a'.repeat(3 * 1024 * 1024)]), status: 413, reason: /larger than 2 MiB/ },
+  ])('answers a body that is $what with $status and says why', async ({ body, status, reason }) => {
     const response = await callAction(body);
     expect(response.status).toBe(status);
     expect(((await response.json()) as { error: string }).error).toMatch(reason);

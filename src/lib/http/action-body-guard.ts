@@ -37,7 +37,8 @@ async function boundedText(request: NextRequest): Promise<string | null> {
     if (done) break;
     total += value.byteLength;
     if (total > ACTION_BODY_LIMIT) {
-      await reader.cancel().catch(() => undefined);
+      // Not awaited: the cancel of one branch of a cloned body settles only when the other branch is cancelled too.
+      reader.cancel().catch(() => undefined);
       return null;
     }
     chunks.push(value);
