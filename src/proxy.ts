@@ -1,6 +1,7 @@
 import { NextResponse, type NextRequest } from 'next/server';
 import { trustedOrigins } from '@/lib/config/public-url';
 import { nextWithSecurityHeaders, withSecurityHeaders } from '@/lib/http/security-headers';
+import { refuseBadActionBody } from '@/lib/http/action-body-guard';
 
 const SESSION_COOKIE = 'sillmark_session';
 const PUBLIC_PAGES = ['/sign-in', '/invitation', '/verify', '/robots.txt'];
@@ -10,7 +11,7 @@ const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
  * Cheap checks only: cross-origin writes are refused, anonymous page visits go to sign-in.
  * Every page, handler and action still checks the session and role itself on the server.
  */
-export function proxy(request: NextRequest) {
+export async function proxy(request: NextRequest) {
   if (!SAFE_METHODS.has(request.method)) {
     // Compared with the configured origin, never with Host or X-Forwarded-Host, which the client controls.
     const origin = request.headers.get('origin');
@@ -18,6 +19,8 @@ export function proxy(request: NextRequest) {
       return withSecurityHeaders(request, NextResponse.json({ error: 'Cross-origin requests that change data are refused.' }, { status: 403 }));
     }
   }
+  const refusedBody = await refuseBadActionBody(request);
+  if (refusedBody) return withSecurityHeaders(request, refusedBody);
   const { pathname } = request.nextUrl;
   const isPage = !pathname.startsWith('/api/') && !pathname.startsWith('/_next/');
   if (isPage && request.method === 'GET' && !request.cookies.has(SESSION_COOKIE) && pathname !== '/' && !PUBLIC_PAGES.some((p) => pathname.startsWith(p))) {

@@ -4,15 +4,16 @@ import { confirmPassword } from '@/lib/auth/confirm-password';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Certificate, Letter, Revision, Scheme, database } from '@/lib/db';
 import { ConflictError, NotFoundError } from '@/lib/http/app-errors';
-import { notifyAfterCommit } from '@/lib/review/notify';
+import { deliverOutboundMail } from '@/lib/mail/deliver-outbound-mail';
+import { queueMail } from '@/lib/mail/queue-mail';
 import type { RevokeCertificateInput } from '@/lib/validation/certificate-schemas';
 import { heldReason } from './held-reason';
 import { revocationNotices } from './revocation-notices';
 
 /**
  * An administrator, password re-entered, withdraws a certificate for a stated reason. In one transaction: the
- * certificate is revoked, the revision's queued letters are held and the audit event is written. The designer, the
- * checker and the liaison officers are then told by e-mail; the verification page shows the revocation from then on.
+ * certificate is revoked, the revision's queued letters are held and the audit event is written. The e-mails to the
+ * designer, the checker and the liaison officers are queued in it too and sent once it commits; the verification page shows the revocation from then on.
  */
 export async function revokeCertificate({ input, admin, baseUrl }: { input: RevokeCertificateInput; admin: SessionUser; baseUrl: string }) {
   await confirmPassword({ user: admin, password: input.password, act: 'Revoking a certificate' });
@@ -32,9 +33,9 @@ export async function revokeCertificate({ input, admin, baseUrl }: { input: Revo
       { actorId: admin.id, action: 'certificate.revoked', entityType: 'certificate', entityId: certificate.id, schemeId: certificate.schemeId, details: { number: certificate.number, previousStatus, reason: input.reason, pdfSha256: certificate.pdfSha256, revisionNumber: revision.number, heldLetters } },
       transaction,
     );
-    const notices = await revocationNotices({ certificate, revision, scheme, admin, heldLetters, baseUrl }, transaction);
-    return { certificate, heldLetters, notices };
+    const mail = await queueMail({ purpose: 'certificate.revoked', messages: await revocationNotices({ certificate, revision, scheme, admin, heldLetters, baseUrl }, transaction) }, transaction);
+    return { certificate, heldLetters, mail };
   });
-  const notified = await notifyAfterCommit(revoked.notices);
-  return { certificateId: revoked.certificate.id, number: revoked.certificate.number, status: 'revoked' as const, heldLetters: revoked.heldLetters, notified: notified.sent };
+  const notified = await deliverOutboundMail({ ids: revoked.mail });
+  return { certificateId: revoked.certificate.id, number: revoked.certificate.number, status: 'revoked' as const, heldLetters: revoked.heldLetters, notified: notified.delivered };
 }

@@ -4,6 +4,7 @@ import { initAuditEvent } from './models/audit-event';
 import { initCertificate } from './models/certificate';
 import { initInvitation } from './models/invitation';
 import { initLetter } from './models/letter';
+import { initOutboundMessage } from './models/outbound-message';
 import { initOutboxMessage } from './models/outbox-message';
 import { initParcel } from './models/parcel';
 import { initReview } from './models/review';
@@ -20,7 +21,7 @@ const initialised = new WeakSet<Sequelize>();
 export function database(): Sequelize {
   const sequelize = getSequelize();
   if (!initialised.has(sequelize)) {
-    for (const init of [initUser, initInvitation, initScheme, initRevision, initReview, initCertificate, initUpload, initParcel, initLetter, initOutboxMessage, initAuditEvent, initSignInAttempt]) {
+    for (const init of [initUser, initInvitation, initScheme, initRevision, initReview, initCertificate, initUpload, initParcel, initLetter, initOutboxMessage, initOutboundMessage, initAuditEvent, initSignInAttempt]) {
       init(sequelize);
     }
     initialised.add(sequelize);
@@ -33,6 +34,7 @@ export { AuditEvent } from './models/audit-event';
 export { Certificate } from './models/certificate';
 export { Invitation } from './models/invitation';
 export { Letter, LetterBatch, LetterResponse, LetterTemplate } from './models/letter';
+export { OutboundMessage } from './models/outbound-message';
 export { OutboxMessage } from './models/outbox-message';
 export { Parcel, ParcelRegister } from './models/parcel';
 export { Review, ReviewComment } from './models/review';

@@ -1,8 +1,9 @@
 import 'server-only';
 import { randomUUID } from 'node:crypto';
-import { mkdir, writeFile } from 'node:fs/promises';
+import { mkdir, open, rename, rm } from 'node:fs/promises';
 import path from 'node:path';
 import { simpleParser } from 'mailparser';
+import { UniqueConstraintError } from 'sequelize';
 import { OutboxMessage, database } from '@/lib/db';
 import { dataDirectory } from '@/lib/db/database-path';
 
@@ -12,24 +13,45 @@ export interface ReceivedMessage {
   envelopeTo: string[];
 }
 
-/** Keeps one message the local SMTP server received: the raw RFC 5322 text on disk, its envelope and headers in a row. */
+/**
+ * Written under a temporary name, flushed to disk and then renamed: a crash mid-write leaves a `.tmp` file that the
+ * file sweep removes, never a truncated `.eml` that looks whole.
+ */
+async function writeDurably(finalPath: string, raw: Buffer): Promise<void> {
+  const temporary = `${finalPath}.${process.pid}.tmp`;
+  const file = await open(temporary, 'w');
+  try {
+    await file.writeFile(raw);
+    await file.sync();
+  } finally {
+    await file.close();
+  }
+  await rename(temporary, finalPath);
+}
+
+/**
+ * Keeps one message the local SMTP server received: the raw RFC 5322 text on disk, its envelope and headers in a row.
+ * A message whose Message-ID is kept already is not kept twice: a sender that died after our "accepted" and before
+ * recording it sends it again under the same Message-ID, and the outbox shows it once, as a mailbox would.
+ */
 export async function storeOutboxMessage({ raw, envelopeFrom, envelopeTo }: ReceivedMessage): Promise<OutboxMessage> {
+  const parsed = await simpleParser(raw, { skipHtmlToText: true, skipTextToHtml: true, skipImageLinks: true });
+  const messageId = parsed.messageId ?? null;
+  database();
+  const kept = messageId ? await OutboxMessage.findOne({ where: { messageId } }) : null;
+  if (kept) return kept;
   const id = randomUUID();
   const folder = dataDirectory('outbox');
   await mkdir(folder, { recursive: true });
   // The stored name is ours; nothing the sender wrote becomes part of a path.
   const rawPath = path.join(folder, `${id}.eml`);
-  await writeFile(rawPath, raw);
-  const parsed = await simpleParser(raw, { skipHtmlToText: true, skipTextToHtml: true, skipImageLinks: true });
-  database();
-  return OutboxMessage.create({
-    id,
-    messageId: parsed.messageId ?? null,
-    envelopeFrom,
-    envelopeTo: envelopeTo.join(', '),
-    subject: parsed.subject ?? null,
-    rawPath,
-    sizeBytes: raw.length,
-    receivedAt: new Date().toISOString(),
-  });
+  await writeDurably(rawPath, raw);
+  try {
+    return await OutboxMessage.create({ id, messageId, envelopeFrom, envelopeTo: envelopeTo.join(', '), subject: parsed.subject ?? null, rawPath, sizeBytes: raw.length, receivedAt: new Date().toISOString() });
+  } catch (error) {
+    await rm(rawPath, { force: true });
+    const twin = error instanceof UniqueConstraintError && messageId ? await OutboxMessage.findOne({ where: { messageId } }) : null;
+    if (twin) return twin;
+    throw error;
+  }
 }

@@ -7,16 +7,17 @@ import { issueCertificate } from '@/lib/certificates/issue-certificate';
 import { removeCertificateFile } from '@/lib/certificates/certificate-files';
 import { Revision, User, database } from '@/lib/db';
 import { ConflictError, NotFoundError } from '@/lib/http/app-errors';
+import { deliverOutboundMail } from '@/lib/mail/deliver-outbound-mail';
+import { queueMail } from '@/lib/mail/queue-mail';
 import { signingIdentity } from '@/lib/signing/signing-identity';
 import type { CountersignInput } from '@/lib/validation/check-schemas';
 import { checkFrozenRevision } from './check-frozen-revision';
-import { notifyAfterCommit } from './notify';
 import { openReview, revisionForCheck } from './revision-for-check';
 
 /**
  * The checker countersigns: password re-entered, four-eyes rule, frozen hashes intact, and an independent re-run of
  * the frozen inputs that reproduces the stored results. Then, in one transaction: the review's decision, the
- * revision's status, the signed certificate, the supersession of the scheme's earlier certificate and the audit events.
+ * revision's status, the signed certificate, the supersession of the scheme's earlier certificate, the audit events and the designer's e-mail (sent once it commits).
  */
 export async function countersignRevision({ input, checker, baseUrl, now = Date.now() }: { input: CountersignInput; checker: SessionUser; baseUrl: string; now?: number }) {
   const sequelize = database();
@@ -45,17 +46,24 @@ export async function countersignRevision({ input, checker, baseUrl, now = Date.
         transaction,
       );
       const { certificate, superseded } = await issueCertificate({ revision, scheme, designer, checker: checkerAccount, issuedAt, baseUrl, transaction, onFileWritten: (file) => (writtenFile = file) });
-      return { revision, scheme, designer, certificate, superseded };
+      const mail = await queueMail(
+        {
+          purpose: 'revision.countersigned',
+          messages: [
+            {
+              to: designer.email,
+              subject: `Sillmark: certificate ${certificate.number} issued for ${scheme.reference} revision ${revision.number}`,
+              text: `Hello ${designer.name},\n\n${checker.name} has countersigned revision ${revision.number} of ${scheme.reference} ${scheme.name}. Certificate ${certificate.number} is issued${superseded.length ? ` and supersedes ${superseded.map((c) => c.number).join(', ')}` : ''}.\n\nThe revision and its certificate:\n${baseUrl}/revisions/${revision.id}\n`,
+            },
+          ],
+        },
+        transaction,
+      );
+      return { revision, certificate, superseded, mail };
     });
-    const { revision, scheme, designer, certificate } = issued;
-    const notified = await notifyAfterCommit([
-      {
-        to: designer.email,
-        subject: `Sillmark: certificate ${certificate.number} issued for ${scheme.reference} revision ${revision.number}`,
-        text: `Hello ${designer.name},\n\n${checker.name} has countersigned revision ${revision.number} of ${scheme.reference} ${scheme.name}. Certificate ${certificate.number} is issued${issued.superseded.length ? ` and supersedes ${issued.superseded.map((c) => c.number).join(', ')}` : ''}.\n\nThe revision and its certificate:\n${baseUrl}/revisions/${revision.id}\n`,
-      },
-    ]);
-    return { revisionId: revision.id, status: 'countersigned' as const, certificateId: certificate.id, certificateNumber: certificate.number, superseded: issued.superseded.map((c) => c.number), notified: notified.sent };
+    const { revision, certificate } = issued;
+    const notified = await deliverOutboundMail({ ids: issued.mail });
+    return { revisionId: revision.id, status: 'countersigned' as const, certificateId: certificate.id, certificateNumber: certificate.number, superseded: issued.superseded.map((c) => c.number), notified: notified.delivered };
   } catch (error) {
     if (writtenFile) await removeCertificateFile(writtenFile);
     throw error;

@@ -1,5 +1,6 @@
 import 'server-only';
-import { AuditEvent, User, database } from '@/lib/db';
+import { Op, type WhereOptions } from 'sequelize';
+import { AuditEvent, Certificate, Review, User, database } from '@/lib/db';
 
 const ACTIONS: Record<string, string> = {
   'revision.submitted': 'Submitted for check',
@@ -30,10 +31,27 @@ function detailOf(details: Record<string, unknown>): { what: string; hash: strin
   return { what: parts.join(' '), hash };
 }
 
-/** The scheme's audit events (who, when, what, hash), newest first, with the actions in words. */
-export async function listSchemeHistory(schemeId: string, limit = 200) {
+/** Events about these revisions only: their own, their reviews' and their certificates'. */
+async function aboutRevisions(revisionIds: string[]): Promise<WhereOptions<AuditEvent>> {
+  const reviews = await Review.findAll({ where: { revisionId: revisionIds }, attributes: ['id'] });
+  const certificates = await Certificate.findAll({ where: { revisionId: revisionIds }, attributes: ['id'] });
+  return {
+    [Op.or]: [
+      { entityType: 'revision', entityId: revisionIds },
+      { entityType: 'review', entityId: reviews.map((r) => r.id) },
+      { entityType: 'certificate', entityId: certificates.map((c) => c.id) },
+    ],
+  };
+}
+
+/**
+ * The scheme's audit events (who, when, what, hash), newest first, with the actions in words. With `onlyRevisionIds`
+ * (what a planning officer may read), nothing about any other revision, nor about the scheme's other work, is listed.
+ */
+export async function listSchemeHistory(schemeId: string, { limit = 200, onlyRevisionIds = null }: { limit?: number; onlyRevisionIds?: string[] | null } = {}) {
   database();
-  const events = await AuditEvent.findAll({ where: { schemeId }, order: [['id', 'DESC']], limit });
+  const only = onlyRevisionIds ? await aboutRevisions(onlyRevisionIds) : {};
+  const events = await AuditEvent.findAll({ where: { schemeId, ...only }, order: [['id', 'DESC']], limit });
   const actors = new Map((await User.findAll({ where: { id: events.flatMap((e) => (e.actorId ? [e.actorId] : [])) }, attributes: ['id', 'name', 'role'] })).map((u) => [u.id, u]));
   return events.map((e) => {
     const actor = e.actorId ? actors.get(e.actorId) : undefined;

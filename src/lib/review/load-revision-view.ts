@@ -4,6 +4,7 @@ import { Certificate, Revision, User, database } from '@/lib/db';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import { frozenIntegrity } from '@/lib/revisions/frozen-integrity';
 import { frozenCaseFile } from '@/lib/revisions/revision-hashes';
+import { readableRevisionWhere } from '@/lib/schemes/revision-visibility';
 import { findVisibleRevision } from './find-visible-revision';
 import { listAvailableCheckers } from './list-available-checkers';
 import { listReviewComments } from './list-review-comments';
@@ -16,7 +17,7 @@ export async function loadRevisionView({ revisionId, user }: { revisionId: strin
   const people = new Map((await User.findAll({ where: { id: [revision.authorId, revision.checkerId].filter((id): id is string => !!id) }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
   const ownScheme = user.role === 'designer' && scheme.designerId === user.id;
   const canSubmit = ownScheme && revision.status === 'draft';
-  const siblings = await Revision.findAll({ where: { schemeId: scheme.id }, attributes: ['id', 'number', 'status'], order: [['number', 'ASC']] });
+  const siblings = await Revision.findAll({ where: { schemeId: scheme.id, ...readableRevisionWhere(user) }, attributes: ['id', 'number', 'status'], order: [['number', 'ASC']] });
   const certificate = await Certificate.findOne({ where: { revisionId: revision.id } });
   return {
     revision: {
@@ -39,7 +40,7 @@ export async function loadRevisionView({ revisionId, user }: { revisionId: strin
     results: revision.resultsJson ? (JSON.parse(revision.resultsJson) as CaseResult) : null,
     reviews: await listReviewComments(revision.id, { includeOpen: user.role === 'checker' || user.role === 'admin' }),
     certificate: certificate ? { id: certificate.id, number: certificate.number, status: certificate.status, issuedAt: certificate.issuedAt } : null,
-    history: await listSchemeHistory(scheme.id),
+    history: await listSchemeHistory(scheme.id, { onlyRevisionIds: user.role === 'planning' ? siblings.map((s) => s.id) : null }),
     siblings: siblings.map((s) => ({ id: s.id, number: s.number, status: s.status })),
     canSubmit,
     checkers: canSubmit ? await listAvailableCheckers(revision.authorId) : [],

@@ -2,8 +2,9 @@ import 'server-only';
 import { recordAuditEvent } from '@/lib/audit/record-audit-event';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { ReviewComment, User, database } from '@/lib/db';
+import { deliverOutboundMail } from '@/lib/mail/deliver-outbound-mail';
+import { queueMail } from '@/lib/mail/queue-mail';
 import type { ReturnRevisionInput } from '@/lib/validation/check-schemas';
-import { notifyAfterCommit } from './notify';
 import { openReview, revisionForCheck } from './revision-for-check';
 
 /** The checker returns the revision to its designer with the review's comments; the designer revises in a new draft. */
@@ -21,17 +22,24 @@ export async function returnRevision({ input, checker, baseUrl }: { input: Retur
       transaction,
     );
     const author = await User.findByPk(revision.authorId, { transaction });
-    return { revision, scheme, review, comments, author };
+    const mail = author
+      ? await queueMail(
+          {
+            purpose: 'revision.returned',
+            messages: [
+              {
+                to: author.email,
+                subject: `Sillmark: ${scheme.reference} revision ${revision.number} was returned by the checker`,
+                text: `Hello ${author.name},\n\n${checker.name} has returned revision ${revision.number} of ${scheme.reference} ${scheme.name} with ${comments} comment(s):\n\n${input.summary}\n\nRead the comments and start a new draft from the revision here:\n${baseUrl}/revisions/${revision.id}\n`,
+              },
+            ],
+          },
+          transaction,
+        )
+      : [];
+    return { revision, review, comments, mail };
   });
-  const { revision, scheme, comments, author } = returned;
-  const notified = author
-    ? await notifyAfterCommit([
-        {
-          to: author.email,
-          subject: `Sillmark: ${scheme.reference} revision ${revision.number} was returned by the checker`,
-          text: `Hello ${author.name},\n\n${checker.name} has returned revision ${revision.number} of ${scheme.reference} ${scheme.name} with ${comments} comment(s):\n\n${input.summary}\n\nRead the comments and start a new draft from the revision here:\n${baseUrl}/revisions/${revision.id}\n`,
-        },
-      ])
-    : { sent: 0 };
-  return { revisionId: revision.id, status: 'returned' as const, reviewId: returned.review.id, comments, notified: notified.sent };
+  const { revision, comments } = returned;
+  const notified = await deliverOutboundMail({ ids: returned.mail });
+  return { revisionId: revision.id, status: 'returned' as const, reviewId: returned.review.id, comments, notified: notified.delivered };
 }

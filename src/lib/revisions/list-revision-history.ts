@@ -1,5 +1,7 @@
 import 'server-only';
+import type { SessionUser } from '@/lib/auth/current-session';
 import { AuditEvent, Revision, User, database } from '@/lib/db';
+import { readableRevisionWhere } from '@/lib/schemes/revision-visibility';
 
 export interface HistoryEntry {
   at: string;
@@ -41,11 +43,11 @@ function summary(event: AuditEvent): string {
   }
 }
 
-/** Every revision of a scheme, newest first, each with who did what and when. */
-export async function listRevisionHistory(schemeId: string): Promise<RevisionHistory[]> {
+/** Every revision of a scheme this user may read, newest first, each with who did what and when. */
+export async function listRevisionHistory(schemeId: string, user: Pick<SessionUser, 'role'>): Promise<RevisionHistory[]> {
   database();
-  const revisions = await Revision.findAll({ where: { schemeId }, order: [['number', 'DESC']] });
-  const events = await AuditEvent.findAll({ where: { schemeId, entityType: 'revision' }, order: [['id', 'ASC']] });
+  const revisions = await Revision.findAll({ where: { schemeId, ...readableRevisionWhere(user) }, order: [['number', 'DESC']] });
+  const events = await AuditEvent.findAll({ where: { schemeId, entityType: 'revision', entityId: revisions.map((r) => r.id) }, order: [['id', 'ASC']] });
   const people = new Map((await User.findAll({ where: { id: [...new Set([...revisions.map((r) => r.authorId), ...events.map((e) => e.actorId ?? '')])] }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
   const numbers = new Map(revisions.map((r) => [r.id, r.number]));
   return revisions.map((r) => ({

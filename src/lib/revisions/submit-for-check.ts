@@ -6,7 +6,8 @@ import { Revision, Scheme, User, database } from '@/lib/db';
 import { ConflictError, InvalidRequestError, NotFoundError, UnprocessableError } from '@/lib/http/app-errors';
 import { evaluateCase } from '@/lib/hydraulics/evaluate-case';
 import { ENGINE_VERSION } from '@/lib/hydraulics/version';
-import { notifyAfterCommit } from '@/lib/review/notify';
+import { deliverOutboundMail } from '@/lib/mail/deliver-outbound-mail';
+import { queueMail } from '@/lib/mail/queue-mail';
 import { parseCase } from '@/lib/validation/parse-case';
 import { frozenCaseFile, inputsSha256, resultsSha256, revisionSha256 } from './revision-hashes';
 
@@ -52,16 +53,21 @@ export async function submitForCheck({ revisionId, checkerId, designer, baseUrl 
       transaction,
     );
     const recipients = checker ? [checker] : await User.findAll({ where: { role: 'checker', status: 'active', id: { [Op.ne]: revision.authorId } }, transaction });
-    return { revision, scheme, checker, recipients, revisionHash };
+    const link = `${baseUrl}/checks/${revision.id}`;
+    const mail = await queueMail(
+      {
+        purpose: 'revision.submitted',
+        messages: recipients.map((r) => ({
+          to: r.email,
+          subject: `Sillmark: ${scheme.reference} revision ${revision.number} is waiting for check`,
+          text: `Hello ${r.name},\n\n${designer.name} has submitted revision ${revision.number} of ${scheme.reference} ${scheme.name} (${scheme.watercourse} at ${scheme.site}) for independent check${checker ? ' and chosen you as its checker' : '. It is in the checkers’ queue'}.\n\nOpen the check here:\n${link}\n\nSHA-256 of the frozen revision: ${revisionHash}\n`,
+        })),
+      },
+      transaction,
+    );
+    return { revision, checker, revisionHash, mail };
   });
-  const { revision, scheme, checker, recipients } = submitted;
-  const link = `${baseUrl}/checks/${revision.id}`;
-  const notified = await notifyAfterCommit(
-    recipients.map((r) => ({
-      to: r.email,
-      subject: `Sillmark: ${scheme.reference} revision ${revision.number} is waiting for check`,
-      text: `Hello ${r.name},\n\n${designer.name} has submitted revision ${revision.number} of ${scheme.reference} ${scheme.name} (${scheme.watercourse} at ${scheme.site}) for independent check${checker ? ' and chosen you as its checker' : '. It is in the checkers’ queue'}.\n\nOpen the check here:\n${link}\n\nSHA-256 of the frozen revision: ${submitted.revisionHash}\n`,
-    })),
-  );
-  return { revisionId: revision.id, status: revision.status, checkerId: checker?.id ?? null, queue: !checker, revisionSha256: submitted.revisionHash, notified: notified.sent };
+  const { revision, checker } = submitted;
+  const notified = await deliverOutboundMail({ ids: submitted.mail });
+  return { revisionId: revision.id, status: revision.status, checkerId: checker?.id ?? null, queue: !checker, revisionSha256: submitted.revisionHash, notified: notified.delivered };
 }

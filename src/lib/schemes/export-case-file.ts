@@ -3,6 +3,7 @@ import type { SessionUser } from '@/lib/auth/current-session';
 import { Revision } from '@/lib/db';
 import { NotFoundError } from '@/lib/http/app-errors';
 import { caseFileOf, decodeDraft } from '@/lib/revisions/draft-inputs';
+import { readableRevisionWhere } from './revision-visibility';
 import { findReadableScheme } from './scheme-access';
 
 /**
@@ -11,7 +12,7 @@ import { findReadableScheme } from './scheme-access';
  */
 export async function exportCaseFile({ schemeId, revisionNumber, user }: { schemeId: string; revisionNumber: number | null; user: SessionUser }) {
   const scheme = await findReadableScheme(user, schemeId);
-  const certifiedOnly = user.role === 'planning' ? { status: 'countersigned' as const } : {};
+  const certifiedOnly = readableRevisionWhere(user);
   const revision = revisionNumber === null
     ? await Revision.findOne({ where: { schemeId, ...certifiedOnly }, order: [['number', 'DESC']] })
     : await Revision.findOne({ where: { schemeId, number: revisionNumber, ...certifiedOnly } });

@@ -8,7 +8,7 @@ import { findReadableScheme } from './scheme-access';
 export async function loadScheme({ schemeId, user }: { schemeId: string; user: SessionUser }) {
   const scheme = await findReadableScheme(user, schemeId);
   const designer = await User.findByPk(scheme.designerId, { attributes: ['name', 'organisation'] });
-  const revisions = await listRevisionHistory(scheme.id);
+  const revisions = await listRevisionHistory(scheme.id, user);
   const isOwner = user.role === 'designer' && scheme.designerId === user.id;
   return {
     scheme: { id: scheme.id, reference: scheme.reference, name: scheme.name, watercourse: scheme.watercourse, site: scheme.site, description: scheme.description, createdAt: scheme.createdAt },

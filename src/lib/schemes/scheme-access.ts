@@ -3,6 +3,7 @@ import type { Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Certificate, Revision, Scheme, database } from '@/lib/db';
 import { ConflictError, ForbiddenError, NotFoundError } from '@/lib/http/app-errors';
+import { mayReadRevision } from './revision-visibility';
 
 // Who may see or change a scheme. Someone without the right to a scheme is told it does not exist (404),
 // so scheme ids cannot be probed; only the wrong role for the whole action is a 403.
@@ -25,7 +26,7 @@ export async function findReadableRevision(user: SessionUser, revisionId: string
   database();
   const revision = await Revision.findByPk(revisionId, { transaction });
   // A planning officer reads certified work only: a later draft of a certified scheme stays hidden, as on the pages.
-  if (!revision || (user.role === 'planning' && revision.status !== 'countersigned')) throw new NotFoundError('There is no such revision, or it is not yours to see.');
+  if (!revision || !mayReadRevision(user, revision)) throw new NotFoundError('There is no such revision, or it is not yours to see.');
   const scheme = await findReadableScheme(user, revision.schemeId, transaction).catch((error: unknown) => {
     throw error instanceof NotFoundError ? new NotFoundError('There is no such revision, or it is not yours to see.') : error;
   });

@@ -5,7 +5,8 @@ import type { SessionUser } from '@/lib/auth/current-session';
 import { ROLE_LABELS } from '@/lib/auth/roles';
 import { Invitation, User, database } from '@/lib/db';
 import { ConflictError } from '@/lib/http/app-errors';
-import { sendMail } from '@/lib/mail/send-mail';
+import { deliverOutboundMail } from '@/lib/mail/deliver-outbound-mail';
+import { queueMail } from '@/lib/mail/queue-mail';
 import type { InviteUserInput } from '@/lib/validation/auth-schemas';
 
 const INVITATION_DAYS = 7;
@@ -27,13 +28,11 @@ export async function inviteUser({ input, admin, baseUrl }: { input: InviteUserI
       { transaction },
     );
     await recordAuditEvent({ actorId: admin.id, action: 'user.invited', entityType: 'user', entityId: userId, details: { email: input.email, role: input.role } }, transaction);
-    return created;
+    const link = `${baseUrl}/invitation/${token}`;
+    const text = `Hello ${input.name},\n\n${admin.name} has invited you to Sillmark as ${ROLE_LABELS[input.role]}.\nSet your password within ${INVITATION_DAYS} days here:\n\n${link}\n\nIf you did not expect this, ignore this message.\n`;
+    const mail = await queueMail({ purpose: 'user.invited', messages: [{ to: input.email, subject: 'Your Sillmark account', text }] }, transaction);
+    return { created, mail };
   });
-  const link = `${baseUrl}/invitation/${token}`;
-  await sendMail({
-    to: input.email,
-    subject: 'Your Sillmark account',
-    text: `Hello ${input.name},\n\n${admin.name} has invited you to Sillmark as ${ROLE_LABELS[input.role]}.\nSet your password within ${INVITATION_DAYS} days here:\n\n${link}\n\nIf you did not expect this, ignore this message.\n`,
-  });
-  return { invitationId: invitation.id, email: input.email };
+  await deliverOutboundMail({ ids: invitation.mail });
+  return { invitationId: invitation.created.id, email: input.email };
 }

@@ -7,6 +7,7 @@ import type { SessionUser } from '@/lib/auth/current-session';
 import { Certificate, LetterBatch, Revision, database } from '@/lib/db';
 import { generateLetters } from '@/lib/letters/generate-letters';
 import { sendLetterBatch } from '@/lib/letters/send-letter-batch';
+import { deliverOutboundMail } from '@/lib/mail/deliver-outbound-mail';
 import { sendMail } from '@/lib/mail/send-mail';
 import { countersignRevision } from '@/lib/review/countersign-revision';
 import type { FaultJob } from './fault-job';
@@ -32,6 +33,19 @@ async function run(job: FaultJob): Promise<unknown> {
   if (job.use === 'countersign') {
     countersignStops(job.stopAt);
     return countersignRevision({ input: { revisionId: job.revisionId, password: job.password, confirmed: true }, checker: job.checker as SessionUser, baseUrl: 'http://localhost:3000' });
+  }
+  if (job.use === 'deliver-mail') {
+    // What a restarted server's deliverer does at start-up; `clockAheadMs` stands for the time that has passed since.
+    const ahead = job.clockAheadMs ?? 0;
+    return deliverOutboundMail({
+      now: () => Date.now() + ahead,
+      send: async (message) => {
+        const sent = await sendMail(message);
+        // The mail server has accepted (and stored) the message; its "delivered" is not yet recorded.
+        if (job.stopAt === 'after-send') await stop('after-send');
+        return sent;
+      },
+    });
   }
   if (job.use === 'generate-letters') {
     // Inside the recording transaction, after every letter's PDF has been written.

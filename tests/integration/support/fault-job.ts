@@ -13,4 +13,5 @@ export type CountersignStop = 'revision-updated' | 'certificate-stored' | 'commi
 export type FaultJob =
   | { use: 'countersign'; revisionId: string; checker: JobUser; password: string; stopAt?: CountersignStop }
   | { use: 'generate-letters'; user: JobUser; schemeId: string; revisionId: string; stopAt?: 'batch-recorded' }
+  | { use: 'deliver-mail'; clockAheadMs?: number; stopAt?: 'after-send' }
   | { use: 'send-batch'; user: JobUser; batchId: string; max: number; stopAt?: { point: 'before-delivery' | 'after-delivery'; letter: number } };
