@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import {
+  atMost,
   type CaseUnits,
   depthControlSchema,
   eventSchema,
@@ -13,6 +14,7 @@ import {
   UNIT_LABELS,
   weirControlSchema,
 } from './case-schema-parts';
+import { MAX_EVENTS, MAX_LIMITS } from './input-limits';
 
 // The Sillmark case file, version 1. Shared by the CLI, the API and the web forms, so every message
 // is written for a practitioner and carries its unit. Unknown keys are ignored.
@@ -30,7 +32,8 @@ function caseObject(units: CaseUnits) {
     title: z.string().max(300, { error: 'must be at most 300 characters' }).optional(),
     units: z.literal(units),
     reach: z.discriminatedUnion('kind', [prismaticReachSchema(u), surveyedReachSchema(u)], { error: missingOr('"prismatic" or "surveyed"') }),
-    events: z.array(eventSchema(u), { error: missingOr('a list of flood events') }).min(1, { error: 'must list at least one flood event' }),
+    events: z.array(eventSchema(u), { error: missingOr('a list of flood events') }).min(1, { error: 'must list at least one flood event' })
+      .max(MAX_EVENTS, { error: atMost(MAX_EVENTS, 'flood events per case') }),
     control: z.discriminatedUnion('type', [depthControlSchema(u), weirControlSchema(u)], { error: missingOr('"depth" or "weir"') }),
     existingControl: depthControlSchema(u).optional(),
     profile: z
@@ -55,6 +58,7 @@ function caseObject(units: CaseUnits) {
           freeboard: nonNegative(u.length).default(0),
         }),
       )
+      .max(MAX_LIMITS, { error: atMost(MAX_LIMITS, 'limits per case') })
       .default([]),
     sizing: z
       .object({
