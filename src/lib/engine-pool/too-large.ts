@@ -3,7 +3,8 @@ import type { CaseInput } from '@/lib/validation/case-schema';
 
 // What to reduce when a case is beyond the engine, from the parts of this case that make it large.
 function reductions(input: CaseInput): FieldIssue[] {
-  const issues: FieldIssue[] = [{ path: 'events', message: `reduce the number of flood events (this case has ${input.events.length})` }];
+  const issues: FieldIssue[] = [];
+  if (input.events.length > 1) issues.push({ path: 'events', message: `reduce the number of flood events (this case has ${input.events.length})` });
   if (input.reach.kind === 'surveyed') {
     const points = Math.max(...input.reach.sections.map((s) => s.points.length));
     issues.push({ path: 'reach.sections', message: `reduce the number of surveyed cross-sections (this case has ${input.reach.sections.length})` });
