@@ -27,38 +27,41 @@ function workerFile(): string {
   return process.env.SILLMARK_ENGINE_WORKER || path.join(/* turbopackIgnore: true */ process.cwd(), process.env.NEXT_DIST_DIR ?? '.next', 'engine-worker.mjs');
 }
 
+interface EnginePool {
+  piscina: Piscina<EngineTask, EngineOutcome>;
+  /** Jobs running or waiting. Counted here: piscina's own maxQueue does not count tasks that carry an AbortSignal. */
+  jobs: number;
+}
+
 const POOL_KEY = Symbol.for('sillmark.enginePool');
-type PoolHolder = { [POOL_KEY]?: Piscina<EngineTask, EngineOutcome> };
+type PoolHolder = { [POOL_KEY]?: EnginePool };
 
 // Next may load this module once per route bundle; one pool per process keeps the thread count at THREADS.
-function enginePool(): Piscina<EngineTask, EngineOutcome> {
+function enginePool(): EnginePool {
   const holder = globalThis as PoolHolder;
-  holder[POOL_KEY] ??= new Piscina<EngineTask, EngineOutcome>({
-    filename: workerFile(),
-    minThreads: 1,
-    maxThreads: THREADS,
-    maxQueue: QUEUE_LIMIT,
-    idleTimeout: 60_000,
-    resourceLimits: { maxOldGenerationSizeMb: 512 },
-  });
+  holder[POOL_KEY] ??= {
+    piscina: new Piscina<EngineTask, EngineOutcome>({ filename: workerFile(), minThreads: 1, maxThreads: THREADS, idleTimeout: 60_000, resourceLimits: { maxOldGenerationSizeMb: 512 } }),
+    jobs: 0,
+  };
   return holder[POOL_KEY];
 }
 
 async function runOffThread(caseInput: CaseInput): Promise<EngineOutcome> {
+  const pool = enginePool();
+  if (pool.jobs >= THREADS + QUEUE_LIMIT) throw new ThrottledError('The engine is busy with other cases: try again in a few seconds.', RETRY_AFTER_SECONDS);
+  pool.jobs += 1;
   const { port1, port2 } = new MessageChannel();
   const deadline = new AbortController();
   let timer: NodeJS.Timeout | undefined;
   port1.once('message', () => (timer = setTimeout(() => deadline.abort(), ENGINE_TIME_LIMIT_MS)));
   try {
-    return await enginePool().run({ caseInput, started: port2 }, { transferList: [port2], signal: deadline.signal });
+    return await pool.piscina.run({ caseInput, started: port2 }, { transferList: [port2], signal: deadline.signal });
   } catch (error) {
     if (deadline.signal.aborted) throw caseTooSlow(caseInput, ENGINE_TIME_LIMIT_MS);
-    if (error instanceof Error && error.message === 'Task queue is at limit') {
-      throw new ThrottledError('The engine is busy with other cases: try again in a few seconds.', RETRY_AFTER_SECONDS);
-    }
     if (error instanceof Error && 'code' in error && error.code === 'ERR_WORKER_OUT_OF_MEMORY') throw caseTooLarge(caseInput);
     throw error;
   } finally {
+    pool.jobs -= 1;
     clearTimeout(timer);
     port1.close();
   }
