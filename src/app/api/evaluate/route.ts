@@ -21,7 +21,7 @@ export const POST = authorizedRoute(ANY_ROLE, async (request, user) => {
     const parsed = parseCase(body);
     if (!parsed.ok) throw new InvalidRequestError(parsed.issues);
     // The worker's JSON text is sent as it is: parsing and re-serialising it would put the work back on this thread.
-    const resultJson = await evaluateCaseJsonOffThread(parsed.value);
+    const resultJson = await evaluateCaseJsonOffThread(parsed.value, request.signal);
     return new Response(`{"status":"evaluated","result":${resultJson}}`, { headers: { 'content-type': 'application/json' } });
   }
   const draftRequest = evaluateRequestSchema.safeParse(body);
