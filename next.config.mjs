@@ -3,7 +3,7 @@ const nextConfig = {
   // Parallel test runs (several developers on one machine) may build into their own folder.
   distDir: process.env.NEXT_DIST_DIR ?? '.next',
   // Native and Node-only modules stay outside the server bundle and are required at run time.
-  serverExternalPackages: ['sequelize', 'sqlite3', 'better-sqlite3', 'pdfkit', 'fontkit', '@node-rs/argon2', 'nodemailer', 'smtp-server', 'node-forge', '@signpdf/signpdf', '@signpdf/placeholder-plain', '@signpdf/signer-p12'],
+  serverExternalPackages: ['sequelize', 'sqlite3', 'better-sqlite3', 'pdfkit', 'fontkit', '@node-rs/argon2', 'nodemailer', 'smtp-server', 'node-forge', '@signpdf/signpdf', '@signpdf/placeholder-plain', '@signpdf/signer-p12', 'piscina'],
   poweredByHeader: false,
   // `npm test` runs tsc over the whole project first; the build need not repeat it.
   typescript: { ignoreBuildErrors: true },

@@ -3,6 +3,7 @@ import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { existsSync, readFileSync, readdirSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
+import { buildEngineWorker, engineWorkerPath } from './build-engine-worker.mjs';
 
 const INPUTS = ['src', 'fonts', 'public', 'next.config.mjs', 'tailwind.config.ts', 'tsconfig.json', 'package-lock.json', '.postcssrc.json'];
 const DIST = process.env.NEXT_DIST_DIR ?? '.next';
@@ -23,9 +24,13 @@ export function sourceHash() {
 export function buildIfNeeded({ log = console.log } = {}) {
   const wanted = sourceHash();
   const built = existsSync(STAMP) && existsSync(path.join(DIST, 'BUILD_ID')) ? readFileSync(STAMP, 'utf8') : '';
-  if (built === wanted) return log('Production build is up to date.');
+  if (built === wanted) {
+    if (!existsSync(engineWorkerPath())) buildEngineWorker();
+    return log('Production build is up to date.');
+  }
   log('Building the production bundle (next build)…');
   const result = spawnSync('npx', ['next', 'build'], { stdio: 'inherit', env: { ...process.env, NEXT_TELEMETRY_DISABLED: '1' } });
   if (result.status !== 0) throw new Error('next build failed');
+  buildEngineWorker();
   writeFileSync(STAMP, wanted);
 }

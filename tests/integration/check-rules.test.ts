@@ -108,7 +108,7 @@ describe('frozen-revision rule', () => {
     const whole = revisionSha256({ schemeId: revision.schemeId, number: revision.number, authorId: revision.authorId, engineVersion: revision.engineVersion!, inputsSha256: revision.inputsSha256!, resultsSha256: hashes.results, submittedAt: revision.submittedAt! });
     await behindTheTriggers('UPDATE revisions SET results_json = :json, results_sha256 = :r, revision_sha256 = :w WHERE id = :id', { json: JSON.stringify(stored), r: hashes.results, w: whole, id: revision.id });
 
-    const check = checkFrozenRevision((await Revision.findByPk(revision.id))!);
+    const check = await checkFrozenRevision((await Revision.findByPk(revision.id))!);
     expect(check).toMatchObject({ inputsIntact: true, resultsIntact: true, revisionIntact: true });
     expect(check.rerun.matches).toBe(false);
     expect(check.differences.map((d) => d.field)).toContain(`${stored.events[0].name}: head over the crest`);

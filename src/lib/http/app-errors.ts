@@ -40,7 +40,11 @@ export class ConflictError extends AppError {
 }
 
 export class ThrottledError extends AppError {
-  constructor(message: string) {
+  constructor(
+    message: string,
+    /** Sent as Retry-After when set. */
+    readonly retryAfterSeconds?: number,
+  ) {
     super(message, 429);
   }
 }

@@ -2,10 +2,11 @@ import 'server-only';
 import type { z } from 'zod';
 import { AppError, InvalidRequestError } from './app-errors';
 import { readBoundedBody } from './read-bounded-body';
+import { MAX_JSON_BYTES } from '@/lib/validation/input-limits';
 import { safeParseUntrusted } from '@/lib/validation/safe-parse-untrusted';
 import { fieldIssuesFromZod } from './zod-issues';
 
-export const MAX_JSON_BYTES = 1024 * 1024;
+export { MAX_JSON_BYTES };
 
 const tooLarge = (maxBytes: number) => new AppError(`The request body is larger than ${Math.round(maxBytes / 1024)} KiB.`, 413);
 

@@ -1,11 +1,14 @@
 import 'server-only';
 import { EngineError } from '@/lib/hydraulics/errors';
-import { AppError, InvalidRequestError, UnprocessableError } from './app-errors';
+import { AppError, InvalidRequestError, ThrottledError, UnprocessableError } from './app-errors';
 
 /** The one place domain and engine errors become JSON responses; anything unexpected is a logged 500 with no detail. */
 export function toHttpResponse(error: unknown): Response {
   if (error instanceof InvalidRequestError || error instanceof UnprocessableError) {
     return Response.json({ error: error.message, issues: error.issues }, { status: error.status });
+  }
+  if (error instanceof ThrottledError && error.retryAfterSeconds !== undefined) {
+    return Response.json({ error: error.message }, { status: 429, headers: { 'Retry-After': String(error.retryAfterSeconds) } });
   }
   if (error instanceof AppError) return Response.json({ error: error.message }, { status: error.status });
   if (error instanceof EngineError) {

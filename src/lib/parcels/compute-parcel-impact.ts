@@ -50,7 +50,7 @@ export async function impactForRevision({ schemeId, revision, transaction }: { s
   database();
   const register = await ParcelRegister.findOne({ where: { schemeId }, order: [['version', 'DESC']], transaction });
   const parcels = register ? (await Parcel.findAll({ where: { registerId: register.id }, order: [['distanceFromM', 'ASC'], ['reference', 'ASC']], transaction })).map(parcelRecord) : [];
-  const results = revisionResults(revision);
+  const results = await revisionResults(revision);
   return { register, results, rows: parcelImpactRows(results, parcels) };
 }
 

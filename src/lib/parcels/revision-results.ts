@@ -2,11 +2,11 @@ import 'server-only';
 import { reachModel } from '@/lib/hydraulics/case-reach';
 import type { CaseResult, EventResult } from '@/lib/hydraulics/case-result';
 import { caseToSI } from '@/lib/hydraulics/case-units';
-import { evaluateCase } from '@/lib/hydraulics/evaluate-case';
 import { DEFAULT_IMPACT_THRESHOLD } from '@/lib/hydraulics/event-impact';
 import type { ProfilePoint } from '@/lib/hydraulics/profiles/profile-point';
 import { METRES_PER_FOOT, type Metres } from '@/lib/hydraulics/units';
 import type { Revision } from '@/lib/db';
+import { evaluateCaseOffThread } from '@/lib/engine-pool/engine-pool';
 import { UnprocessableError } from '@/lib/http/app-errors';
 import type { CaseInput } from '@/lib/validation/case-schema';
 import { parseCase } from '@/lib/validation/parse-case';
@@ -44,12 +44,12 @@ function eventProfiles(e: EventResult, units: CaseResult['units']): RevisionEven
  * The revision's with- and without-scheme profiles. A countersigned revision's stored (frozen) results are used as
  * they are; a draft without stored results is evaluated by the engine now, on the server.
  */
-export function revisionResults(revision: Revision): RevisionResults {
+export async function revisionResults(revision: Revision): Promise<RevisionResults> {
   const parsed = parseCase(JSON.parse(revision.inputsJson));
   if (!parsed.ok) throw new UnprocessableError(`Revision ${revision.number} has case inputs the engine cannot read: ${parsed.issues[0]?.path} ${parsed.issues[0]?.message}`);
   if (revision.status === 'countersigned' && !revision.resultsJson) throw new UnprocessableError(`Revision ${revision.number} is countersigned but has no stored results.`);
   const stored = revision.resultsJson !== null;
-  const result: CaseResult = stored ? (JSON.parse(revision.resultsJson as string) as CaseResult) : evaluateCase(parsed.value);
+  const result: CaseResult = stored ? (JSON.parse(revision.resultsJson as string) as CaseResult) : await evaluateCaseOffThread(parsed.value);
   const si = caseToSI(parsed.value);
   const model = reachModel(si.reach);
   return {

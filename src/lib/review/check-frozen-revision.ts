@@ -1,8 +1,9 @@
 import 'server-only';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
-import { evaluateCase } from '@/lib/hydraulics/evaluate-case';
 import { ENGINE_VERSION } from '@/lib/hydraulics/version';
 import type { Revision } from '@/lib/db';
+import { evaluateCaseOffThread } from '@/lib/engine-pool/engine-pool';
+import { ThrottledError } from '@/lib/http/app-errors';
 import { frozenIntegrity } from '@/lib/revisions/frozen-integrity';
 import { frozenCaseFile, resultsSha256 } from '@/lib/revisions/revision-hashes';
 import { parseCase } from '@/lib/validation/parse-case';
@@ -19,13 +20,14 @@ export interface FrozenRevisionCheck {
   blockers: string[];
 }
 
-function rerun(inputs: unknown): FrozenRevisionCheck['rerun'] {
+async function rerun(inputs: unknown): Promise<FrozenRevisionCheck['rerun']> {
   const parsed = parseCase(inputs);
   if (!parsed.ok) return { engineVersion: ENGINE_VERSION, resultsSha256: null, matches: false, error: `The frozen inputs no longer read as a case file: ${parsed.issues.map((i) => `${i.path} ${i.message}`).join('; ')}`, results: null };
   try {
-    const results = evaluateCase(parsed.value);
+    const results = await evaluateCaseOffThread(parsed.value);
     return { engineVersion: ENGINE_VERSION, resultsSha256: resultsSha256(results), matches: false, error: null, results };
   } catch (error) {
+    if (error instanceof ThrottledError) throw error;
     return { engineVersion: ENGINE_VERSION, resultsSha256: null, matches: false, error: `The engine could not evaluate the frozen inputs: ${error instanceof Error ? error.message : String(error)}`, results: null };
   }
 }
@@ -34,11 +36,11 @@ function rerun(inputs: unknown): FrozenRevisionCheck['rerun'] {
  * The checker's independent re-run: the frozen inputs evaluated again on the server by the engine, and the hashes of
  * the stored inputs, results and revision recomputed. Any difference blocks countersigning and is explained.
  */
-export function checkFrozenRevision(revision: Revision): FrozenRevisionCheck {
+export async function checkFrozenRevision(revision: Revision): Promise<FrozenRevisionCheck> {
   const inputs = frozenCaseFile(revision.inputsJson);
   const stored = revision.resultsJson ? (JSON.parse(revision.resultsJson) as CaseResult) : null;
   const { inputsIntact, resultsIntact, revisionIntact, problems } = frozenIntegrity(revision) ?? { inputsIntact: false, resultsIntact: false, revisionIntact: false, problems: ['This revision is a draft: nothing has been frozen to check.'] };
-  const again = rerun(inputs);
+  const again = await rerun(inputs);
   again.matches = again.resultsSha256 !== null && again.resultsSha256 === revision.resultsSha256;
   const differences = stored && again.results ? resultChanges(stored, again.results) : [];
   const blockers = [...problems];

@@ -23,7 +23,7 @@ export async function countersignRevision({ input, checker, baseUrl, now = Date.
   const sequelize = database();
   const checkerAccount = await confirmPassword({ user: checker, password: input.password, act: 'Countersigning', now });
   const preview = await sequelize.transaction((transaction) => revisionForCheck(input.revisionId, checker, transaction));
-  const check = checkFrozenRevision(preview.revision);
+  const check = await checkFrozenRevision(preview.revision);
   if (check.blockers.length) throw new ConflictError(`Countersigning is blocked. ${check.blockers.join(' ')}`);
   await signingIdentity();
 

@@ -37,7 +37,7 @@ export async function loadCheckView({ revisionId, checker }: { revisionId: strin
     scheme: { id: scheme.id, reference: scheme.reference, name: scheme.name, watercourse: scheme.watercourse, site: scheme.site },
     inputs,
     results,
-    check: revision.status === 'submitted' ? checkFrozenRevision(revision) : null,
+    check: revision.status === 'submitted' ? await checkFrozenRevision(revision) : null,
     integrity: frozenIntegrity(revision),
     previous: previous
       ? {

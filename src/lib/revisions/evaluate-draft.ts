@@ -2,9 +2,10 @@ import 'server-only';
 import { recordAuditEvent } from '@/lib/audit/record-audit-event';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Revision, database } from '@/lib/db';
+import { evaluateCaseOffThread } from '@/lib/engine-pool/engine-pool';
+import { UnprocessableError } from '@/lib/http/app-errors';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import { EngineError } from '@/lib/hydraulics/errors';
-import { evaluateCase } from '@/lib/hydraulics/evaluate-case';
 import { ENGINE_VERSION } from '@/lib/hydraulics/version';
 import { findReadableRevision, isEditable } from '@/lib/schemes/scheme-access';
 import type { CaseInput } from '@/lib/validation/case-schema';
@@ -30,8 +31,10 @@ export async function evaluateDraft({ revisionId, user }: { revisionId: string; 
   }
   let result: CaseResult;
   try {
-    result = evaluateCase(parsed.value);
+    result = await evaluateCaseOffThread(parsed.value);
   } catch (error) {
+    // Too large or too slow for the engine: the same answer as no solution, with what to reduce.
+    if (error instanceof UnprocessableError) return { ...where, status: 'unsolvable', draft, error: error.message, issues: withSteps(error.issues) };
     if (!(error instanceof EngineError)) throw error;
     return { ...where, status: 'unsolvable', draft, error: error.message, issues: withSteps([{ path: error.field, message: error.message }]) };
   }

@@ -1,6 +1,6 @@
 import 'server-only';
 import type { SessionUser } from '@/lib/auth/current-session';
-import { evaluateCase } from '@/lib/hydraulics/evaluate-case';
+import { evaluateCaseOffThread } from '@/lib/engine-pool/engine-pool';
 import { InvalidRequestError, UnprocessableError } from '@/lib/http/app-errors';
 import { fieldIssuesFromZod } from '@/lib/http/zod-issues';
 import { findEditableRevision } from '@/lib/schemes/scheme-access';
@@ -22,7 +22,7 @@ export async function previewHead({ request, user }: { request: HeadPreviewReque
   const { sizing: _sizing, sensitivity: _sensitivity, existingControl: _existing, ...rest } = caseFileOf(draft);
   const parsed = parseCase({ ...rest, ...structure.data, limits: [] });
   if (!parsed.ok) throw new UnprocessableError('Save the channel and the design flows first: the head over the crest needs them.', withSteps(parsed.issues));
-  const result = evaluateCase(parsed.value);
+  const result = await evaluateCaseOffThread(parsed.value);
   return {
     units: result.units,
     events: result.events.map((e) => ({

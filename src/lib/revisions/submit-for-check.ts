@@ -1,10 +1,10 @@
 import 'server-only';
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { recordAuditEvent } from '@/lib/audit/record-audit-event';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Revision, Scheme, User, database } from '@/lib/db';
+import { evaluateCaseOffThread } from '@/lib/engine-pool/engine-pool';
 import { ConflictError, InvalidRequestError, NotFoundError, UnprocessableError } from '@/lib/http/app-errors';
-import { evaluateCase } from '@/lib/hydraulics/evaluate-case';
 import { ENGINE_VERSION } from '@/lib/hydraulics/version';
 import { deliverOutboundMail } from '@/lib/mail/deliver-outbound-mail';
 import { queueMail } from '@/lib/mail/queue-mail';
@@ -19,12 +19,25 @@ export interface SubmitForCheckOptions {
   baseUrl: string;
 }
 
-async function chosenChecker(checkerId: string | null, authorId: string) {
+async function chosenChecker(checkerId: string | null, authorId: string, transaction?: Transaction) {
   if (!checkerId) return null;
-  const checker = await User.findByPk(checkerId);
+  const checker = await User.findByPk(checkerId, { transaction });
   if (!checker || checker.role !== 'checker' || checker.status !== 'active') throw new InvalidRequestError([{ path: 'checkerId', message: 'Choose an active checker from the list, or leave the revision to the queue.' }]);
   if (checker.id === authorId) throw new InvalidRequestError([{ path: 'checkerId', message: 'The checker must be someone other than the designer of the revision.' }]);
   return checker;
+}
+
+/** The draft as it stands, checked for submission: the designer's, still a draft, with a valid checker and complete inputs. */
+async function submittableDraft(revisionId: string, designer: SessionUser, checkerId: string | null, transaction?: Transaction) {
+  const revision = await Revision.findByPk(revisionId, { transaction });
+  const scheme = revision ? await Scheme.findByPk(revision.schemeId, { transaction }) : null;
+  if (!revision || !scheme || scheme.designerId !== designer.id) throw new NotFoundError('There is no such revision among your schemes.');
+  if (revision.status !== 'draft') throw new ConflictError(`Revision ${revision.number} is ${revision.status}; only a draft can be submitted for check.`);
+  const checker = await chosenChecker(checkerId, revision.authorId, transaction);
+  const caseFile = frozenCaseFile(revision.inputsJson);
+  const parsed = parseCase(caseFile);
+  if (!parsed.ok) throw new UnprocessableError('The draft is not complete enough to check: finish these fields in the scheme’s wizard first.', parsed.issues);
+  return { revision, scheme, checker, caseFile, caseInput: parsed.value };
 }
 
 /**
@@ -33,16 +46,12 @@ async function chosenChecker(checkerId: string | null, authorId: string) {
  */
 export async function submitForCheck({ revisionId, checkerId, designer, baseUrl }: SubmitForCheckOptions) {
   const sequelize = database();
+  // The engine runs before the write transaction, so a long evaluation holds no database lock.
+  const draft = await submittableDraft(revisionId, designer, checkerId);
+  const results = await evaluateCaseOffThread(draft.caseInput);
   const submitted = await sequelize.transaction(async (transaction) => {
-    const revision = await Revision.findByPk(revisionId, { transaction });
-    const scheme = revision ? await Scheme.findByPk(revision.schemeId, { transaction }) : null;
-    if (!revision || !scheme || scheme.designerId !== designer.id) throw new NotFoundError('There is no such revision among your schemes.');
-    if (revision.status !== 'draft') throw new ConflictError(`Revision ${revision.number} is ${revision.status}; only a draft can be submitted for check.`);
-    const checker = await chosenChecker(checkerId, revision.authorId);
-    const caseFile = frozenCaseFile(revision.inputsJson);
-    const parsed = parseCase(caseFile);
-    if (!parsed.ok) throw new UnprocessableError('The draft is not complete enough to check: finish these fields in the scheme’s wizard first.', parsed.issues);
-    const results = evaluateCase(parsed.value);
+    const { revision, scheme, checker, caseFile } = await submittableDraft(revisionId, designer, checkerId, transaction);
+    if (revision.inputsJson !== draft.revision.inputsJson) throw new ConflictError('The draft changed while it was being evaluated: submit it again.');
     const submittedAt = new Date().toISOString();
     const hashes = { inputsSha256: inputsSha256(caseFile), resultsSha256: resultsSha256(results) };
     const frozen = { schemeId: scheme.id, number: revision.number, authorId: revision.authorId, engineVersion: ENGINE_VERSION, submittedAt, ...hashes };

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import {
+  atMost,
   type CaseUnits,
   depthControlSchema,
   eventSchema,
@@ -14,6 +15,7 @@ import {
   weirControlSchema,
 } from './case-schema-parts';
 import { singleLineText } from './plain-text';
+import { MAX_EVENTS, MAX_LIMITS } from './input-limits';
 
 // The Sillmark case file, version 1. Shared by the CLI, the API and the web forms, so every message
 // is written for a practitioner and carries its unit. Unknown keys are ignored.
@@ -31,7 +33,8 @@ function caseObject(units: CaseUnits) {
     title: singleLineText('the case title').max(300, { error: 'must be at most 300 characters' }).optional(),
     units: z.literal(units),
     reach: z.discriminatedUnion('kind', [prismaticReachSchema(u), surveyedReachSchema(u)], { error: missingOr('"prismatic" or "surveyed"') }),
-    events: z.array(eventSchema(u), { error: missingOr('a list of flood events') }).min(1, { error: 'must list at least one flood event' }),
+    events: z.array(eventSchema(u), { error: missingOr('a list of flood events') }).min(1, { error: 'must list at least one flood event' })
+      .max(MAX_EVENTS, { error: atMost(MAX_EVENTS, 'flood events per case') }),
     control: z.discriminatedUnion('type', [depthControlSchema(u), weirControlSchema(u)], { error: missingOr('"depth" or "weir"') }),
     existingControl: depthControlSchema(u).optional(),
     profile: z
@@ -56,6 +59,7 @@ function caseObject(units: CaseUnits) {
           freeboard: nonNegative(u.length).default(0),
         }),
       )
+      .max(MAX_LIMITS, { error: atMost(MAX_LIMITS, 'limits per case') })
       .default([]),
     sizing: z
       .object({

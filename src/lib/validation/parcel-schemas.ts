@@ -1,10 +1,11 @@
 import { z } from 'zod';
 import { multiLineText, singleLineText } from './plain-text';
+import { MAX_PARCELS } from './input-limits';
 
 // Parcels register: one schema for a parcel, used by the CSV import (row by row), the table editor's form and the server.
 
 export const BANK_SIDES = ['left', 'right', 'both'] as const;
-export const MAX_PARCELS = 2000;
+export { MAX_PARCELS };
 /** Longest reach a parcel may lie along, 100 km upstream of the control: beyond it a distance is a typing error. */
 export const MAX_DISTANCE_M = 100_000;
 

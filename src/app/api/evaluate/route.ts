@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { ANY_ROLE } from '@/lib/auth/authorize';
-import { evaluateCase } from '@/lib/hydraulics/evaluate-case';
+import { evaluateCaseJsonOffThread } from '@/lib/engine-pool/engine-pool';
 import { InvalidRequestError } from '@/lib/http/app-errors';
 import { authorizedRoute } from '@/lib/http/authorized-route';
 import { readJsonBody } from '@/lib/http/read-json-body';
@@ -20,7 +20,9 @@ export const POST = authorizedRoute(ANY_ROLE, async (request, user) => {
   if ('format' in body) {
     const parsed = parseCase(body);
     if (!parsed.ok) throw new InvalidRequestError(parsed.issues);
-    return Response.json({ status: 'evaluated', result: evaluateCase(parsed.value) });
+    // The worker's JSON text is sent as it is: parsing and re-serialising it would put the work back on this thread.
+    const resultJson = await evaluateCaseJsonOffThread(parsed.value, request.signal);
+    return new Response(`{"status":"evaluated","result":${resultJson}}`, { headers: { 'content-type': 'application/json' } });
   }
   const draftRequest = evaluateRequestSchema.safeParse(body);
   if (!draftRequest.success) throw new InvalidRequestError(fieldIssuesFromZod(draftRequest.error));

@@ -1,0 +1,92 @@
+import 'server-only';
+import os from 'node:os';
+import path from 'node:path';
+import { MessageChannel } from 'node:worker_threads';
+import Piscina from 'piscina';
+import { AppError, ThrottledError } from '@/lib/http/app-errors';
+import type { CaseResult } from '@/lib/hydraulics/case-result';
+import { ENGINE_VERSION } from '@/lib/hydraulics/version';
+import type { CaseInput } from '@/lib/validation/case-schema';
+import { engineErrorOf, type EngineOutcome } from './engine-outcome';
+import type { EngineTask } from './engine-worker';
+import { caseTooLarge, caseTooSlow } from './too-large';
+
+// The engine is CPU-bound and synchronous: on the request thread one large case would hold every other request.
+// So it runs on worker threads, one per core by default, with a bounded queue and a time limit per job. The workers run
+// at a lower scheduling priority (nice), so that with every core busy the request thread still gets the CPU first.
+
+const positiveInteger = (text: string | undefined) => (text && /^\d+$/.test(text) && Number(text) > 0 ? Number(text) : undefined);
+
+const THREADS = positiveInteger(process.env.ENGINE_THREADS) ?? os.availableParallelism();
+/** Counted from the moment a worker starts the job, not from when it joined the queue. */
+export const ENGINE_TIME_LIMIT_MS = positiveInteger(process.env.ENGINE_TIME_LIMIT_MS) ?? 30_000;
+const QUEUE_LIMIT = positiveInteger(process.env.ENGINE_QUEUE_LIMIT) ?? THREADS * 32;
+const RETRY_AFTER_SECONDS = 5;
+const WORKER_NICE_INCREMENT = 10;
+
+/** Built by src/cli/build-engine-worker.mjs; the same rule for where it lives is there. */
+function workerFile(): string {
+  return process.env.SILLMARK_ENGINE_WORKER || path.join(/* turbopackIgnore: true */ process.cwd(), process.env.NEXT_DIST_DIR ?? '.next', 'engine-worker.mjs');
+}
+
+interface EnginePool {
+  piscina: Piscina<EngineTask, EngineOutcome>;
+  /** Jobs running or waiting. Counted here: piscina's own maxQueue does not count tasks that carry an AbortSignal. */
+  jobs: number;
+}
+
+const POOL_KEY = Symbol.for('sillmark.enginePool');
+type PoolHolder = { [POOL_KEY]?: EnginePool };
+
+// Next may load this module once per route bundle; one pool per process keeps the thread count at THREADS.
+function enginePool(): EnginePool {
+  const holder = globalThis as PoolHolder;
+  holder[POOL_KEY] ??= {
+    piscina: new Piscina<EngineTask, EngineOutcome>({ filename: workerFile(), minThreads: 1, maxThreads: THREADS, idleTimeout: 60_000, niceIncrement: WORKER_NICE_INCREMENT, resourceLimits: { maxOldGenerationSizeMb: 512 } }),
+    jobs: 0,
+  };
+  return holder[POOL_KEY];
+}
+
+async function runOffThread(caseInput: CaseInput, cancelled?: AbortSignal): Promise<EngineOutcome> {
+  const pool = enginePool();
+  if (pool.jobs >= THREADS + QUEUE_LIMIT) throw new ThrottledError('The engine is busy with other cases: try again in a few seconds.', RETRY_AFTER_SECONDS);
+  pool.jobs += 1;
+  const { port1, port2 } = new MessageChannel();
+  const deadline = new AbortController();
+  let timer: NodeJS.Timeout | undefined;
+  port1.once('message', () => (timer = setTimeout(() => deadline.abort(), ENGINE_TIME_LIMIT_MS)));
+  try {
+    // A client that has gone away (cancelled) needs no answer: its job leaves the queue or stops.
+    const signal = cancelled ? AbortSignal.any([deadline.signal, cancelled]) : deadline.signal;
+    return await pool.piscina.run({ caseInput, started: port2 }, { transferList: [port2], signal });
+  } catch (error) {
+    if (deadline.signal.aborted) throw caseTooSlow(caseInput, ENGINE_TIME_LIMIT_MS);
+    if (cancelled?.aborted) throw new AppError('The request was cancelled before the case was evaluated.', 400);
+    if (error instanceof Error && 'code' in error && error.code === 'ERR_WORKER_OUT_OF_MEMORY') throw caseTooLarge(caseInput);
+    throw error;
+  } finally {
+    pool.jobs -= 1;
+    clearTimeout(timer);
+    port1.close();
+  }
+}
+
+/**
+ * The engine's result for a parsed case, as JSON text, computed on a worker thread. Throws the engine's own errors
+ * (InvalidInputError, NoPhysicalSolutionError), a 422 when the case is too large or too slow, and a 429 when busy.
+ */
+export async function evaluateCaseJsonOffThread(caseInput: CaseInput, cancelled?: AbortSignal): Promise<string> {
+  const outcome = await runOffThread(caseInput, cancelled);
+  if (outcome.ok) return outcome.resultJson;
+  if (outcome.kind === 'too-deep') throw caseTooLarge(caseInput);
+  throw engineErrorOf(outcome);
+}
+
+/** As evaluateCase, but on a worker thread: the request thread stays free for other requests. */
+export async function evaluateCaseOffThread(caseInput: CaseInput): Promise<CaseResult> {
+  const result = JSON.parse(await evaluateCaseJsonOffThread(caseInput)) as CaseResult;
+  // Results are frozen with the server's engine version, so a worker bundled from older sources must not supply them.
+  if (result.engineVersion !== ENGINE_VERSION) throw new Error(`The engine worker runs ${result.engineVersion}, the server ${ENGINE_VERSION}: rebuild it (npm run build).`);
+  return result;
+}

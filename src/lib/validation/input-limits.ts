@@ -1,0 +1,17 @@
+// The largest inputs the portal accepts: one place, documented in the README under "Limits". Each keeps a case within
+// what the engine evaluates in seconds on one core, and a request within what the server reads without strain.
+
+/** Flood events in one case (a design check rarely needs more than a dozen return periods). */
+export const MAX_EVENTS = 50;
+/** Flood-level limits (places checked against a level) in one case. */
+export const MAX_LIMITS = 200;
+/** Surveyed cross-sections in one reach. */
+export const MAX_SURVEYED_SECTIONS = 500;
+/** [station, elevation] points in one surveyed cross-section. */
+export const MAX_POINTS_PER_SECTION = 500;
+/** Rows of a weir's rating table. */
+export const MAX_RATING_TABLE_ROWS = 200;
+/** Parcels in one scheme's register. */
+export const MAX_PARCELS = 2000;
+/** A JSON request body, in bytes (1 MiB). */
+export const MAX_JSON_BYTES = 1024 * 1024;
