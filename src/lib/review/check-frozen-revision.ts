@@ -5,6 +5,7 @@ import { ENGINE_VERSION } from '@/lib/hydraulics/version';
 import type { Revision } from '@/lib/db';
 import { frozenIntegrity } from '@/lib/revisions/frozen-integrity';
 import { frozenCaseFile, resultsSha256 } from '@/lib/revisions/revision-hashes';
+import { caseIssuesInWords, engineTextInWords } from '@/lib/case-words/case-issue-words';
 import { parseCase } from '@/lib/validation/parse-case';
 import { type FieldChange, resultChanges } from './revision-changes';
 
@@ -21,12 +22,12 @@ export interface FrozenRevisionCheck {
 
 function rerun(inputs: unknown): FrozenRevisionCheck['rerun'] {
   const parsed = parseCase(inputs);
-  if (!parsed.ok) return { engineVersion: ENGINE_VERSION, resultsSha256: null, matches: false, error: `The frozen inputs no longer read as a case file: ${parsed.issues.map((i) => `${i.path} ${i.message}`).join('; ')}`, results: null };
+  if (!parsed.ok) return { engineVersion: ENGINE_VERSION, resultsSha256: null, matches: false, error: `The frozen inputs no longer read as a case file: ${caseIssuesInWords(parsed.issues, inputs).map((i) => i.message).join('; ')}`, results: null };
   try {
     const results = evaluateCase(parsed.value);
     return { engineVersion: ENGINE_VERSION, resultsSha256: resultsSha256(results), matches: false, error: null, results };
   } catch (error) {
-    return { engineVersion: ENGINE_VERSION, resultsSha256: null, matches: false, error: `The engine could not evaluate the frozen inputs: ${error instanceof Error ? error.message : String(error)}`, results: null };
+    return { engineVersion: ENGINE_VERSION, resultsSha256: null, matches: false, error: `The engine could not evaluate the frozen inputs: ${error instanceof Error ? engineTextInWords(error.message, inputs) : String(error)}`, results: null };
   }
 }
 

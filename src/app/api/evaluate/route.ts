@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { ANY_ROLE } from '@/lib/auth/authorize';
+import { caseIssuesInWords } from '@/lib/case-words/case-issue-words';
 import { evaluateCase } from '@/lib/hydraulics/evaluate-case';
 import { InvalidRequestError } from '@/lib/http/app-errors';
 import { authorizedRoute } from '@/lib/http/authorized-route';
@@ -19,7 +20,7 @@ export const POST = authorizedRoute(ANY_ROLE, async (request, user) => {
   const body = await readJsonBody(request, objectBody);
   if ('format' in body) {
     const parsed = parseCase(body);
-    if (!parsed.ok) throw new InvalidRequestError(parsed.issues);
+    if (!parsed.ok) throw new InvalidRequestError(caseIssuesInWords(parsed.issues, body));
     return Response.json({ status: 'evaluated', result: evaluateCase(parsed.value) });
   }
   const draftRequest = evaluateRequestSchema.safeParse(body);
