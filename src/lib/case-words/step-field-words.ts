@@ -29,6 +29,13 @@ export function casePathOfStepField(step: EditableStep, path: string): string {
   return [prefix, ...tail].reduce<string>((acc, s) => (typeof s === 'number' ? `${acc}[${s}]` : `${acc}.${s}`), '').replace(/^\./, '');
 }
 
+/** A field named in a saved step's history: the register's `scheme.name`, a case-file path, or "… and 3 more". */
+export function changedFieldLabel(path: string, caseFile?: unknown): string {
+  if (path.startsWith('…')) return path;
+  if (path.startsWith('scheme.')) return WIZARD_ONLY[path.slice('scheme.'.length)] ?? path.slice('scheme.'.length);
+  return describeCaseField(path, caseFile).label;
+}
+
 /** A step form's field in words, list items by their own name when the draft is given. */
 export function stepFieldLabel(step: EditableStep, path: string, draft?: unknown): string {
   const wizardOnly = WIZARD_ONLY[path];
