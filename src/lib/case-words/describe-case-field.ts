@@ -1,5 +1,5 @@
 import type { EditableStep } from '@/lib/validation/scheme-schemas';
-import { CASE_FIELDS, ENGINE_ALIASES, type FieldEntry, type UnitKind } from './case-field-dictionary';
+import { CASE_FIELDS, type CaseFieldPattern, ENGINE_ALIASES, type FieldEntry, type UnitKind } from './case-field-dictionary';
 import { excerpt } from './excerpt';
 
 export type Segment = string | number;
@@ -83,4 +83,10 @@ export function describeCaseField(path: string | readonly PropertyKey[], caseFil
   });
   const unit = entry?.unit ? UNITS[units][entry.unit] : null;
   return { label: [...(topHeading ? [topHeading] : []), ...heads, leaf].join(': '), unit, step };
+}
+
+/** A field's own name, as a row heading ("Crest length"), without the part or list item it belongs to. */
+export function caseFieldName(pattern: CaseFieldPattern): string {
+  const label = CASE_FIELDS[pattern].label;
+  return label.charAt(0).toUpperCase() + label.slice(1);
 }
