@@ -1,4 +1,6 @@
+import { CASE_VERSION } from '@/lib/validation/case-schema';
 import { describeCaseField, segmentsOf } from './describe-case-field';
+import { excerpt } from './excerpt';
 
 export interface PathIssue {
   path: string;
@@ -7,9 +9,28 @@ export interface PathIssue {
 
 const sentence = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
 
+const HELP = 'A case file can be downloaded from any scheme’s results sheet to see how one begins.';
+
+function said(value: unknown): string {
+  return typeof value === 'string' ? `“${excerpt(value)}”` : typeof value === 'number' ? String(value) : 'something else';
+}
+
+/** A file that is not a case file, or not this version, is told so plainly, before any field is named. */
+function headerInWords(path: string, caseFile: unknown): string | null {
+  const header = caseFile !== null && typeof caseFile === 'object' ? (caseFile as { format?: unknown; version?: unknown }) : {};
+  if (path === 'format') return header.format === undefined ? `This is not a Sillmark case file: it does not say that it is one. ${HELP}` : `This is not a Sillmark case file: it says it is ${said(header.format)}. ${HELP}`;
+  if (path === 'version') return header.version === undefined ? `The case file does not say which version it is; this Sillmark reads version ${CASE_VERSION} case files.` : `The case file is version ${said(header.version)}; this Sillmark reads version ${CASE_VERSION} case files.`;
+  return null;
+}
+
 /** "events[0].discharge" + "must be greater than 0 m³/s" → "Flood event “1 in 100 year”: peak discharge must be greater than 0 m³/s". */
 export function caseIssueInWords(issue: PathIssue, caseFile?: unknown): PathIssue {
-  if (segmentsOf(issue.path).length === 0) return { path: issue.path, message: sentence(`the case file ${issue.message}`) };
+  const header = headerInWords(issue.path, caseFile);
+  if (header) return { path: issue.path, message: header };
+  if (segmentsOf(issue.path).length === 0) {
+    const message = issue.message.startsWith('must be a JSON object') ? `This is not a Sillmark case file: it must be a JSON object. ${HELP}` : sentence(`the case file ${issue.message}`);
+    return { path: issue.path, message };
+  }
   return { path: issue.path, message: sentence(`${describeCaseField(issue.path, caseFile).label} ${issue.message}`) };
 }
 
