@@ -71,7 +71,7 @@ describe('the checker sees what the designer saw', () => {
     expect(await stepRows.count()).toBeGreaterThan(3);
 
     // The stored results table is not squeezed into half the page: every column is on screen.
-    const storedTable = page.locator('table', { has: page.locator('caption', { hasText: 'Stored at submission' }) });
+    const storedTable = page.locator('table', { has: page.locator('caption', { hasText: /^Stored at submission: each design event/ }) });
     const headings = storedTable.locator('thead th');
     expect(await headings.count()).toBe(8);
     for (let i = 0; i < 8; i++) {

@@ -37,7 +37,7 @@ describe('the wizard saves each step into a draft revision', () => {
     expect(scheme.scheme.reference).toMatch(/^SM-\d{4}$/);
     const history = scheme.revisions[0].entries.map((e: { summary: string }) => e.summary);
     expect(history[0]).toContain('Draft started (new scheme)');
-    expect(history.some((s: string) => s.includes('Saved the structure') && s.includes('control.sillHeight'))).toBe(true);
+    expect(history.some((s: string) => s.includes('Saved the structure') && s.includes('proposed structure: sill height above the bed'))).toBe(true);
   });
 
   it('refuses a limit beyond the reach on the limits step, naming the limit and both distances, and stores nothing', async () => {
