@@ -3,8 +3,10 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Revision } from '@/lib/db';
 import { frozenCaseFile } from '@/lib/revisions/revision-hashes';
 import { listRevisionHistory } from '@/lib/revisions/list-revision-history';
+import { submitForCheck } from '@/lib/revisions/submit-for-check';
 import { InputsTable } from '@/app/(portal)/checks/_components/inputs-table';
 import { rawFieldPaths } from '../support/raw-field-paths';
+import { createTestScheme, demoCase } from './support/scheme-factory';
 import { LIMITS_STEP, callRoute, completedDraft } from './support/scheme-requests';
 import { signedInAs } from './support/session-double';
 import { tableSnapshot } from './support/table-snapshot';
@@ -85,6 +87,20 @@ describe('fields named in words, never by their paths', () => {
     const { issues } = (await response.json()) as { issues: Issue[] };
     expect(issues.map((i) => i.message)).toContain('Proposed structure: sill height above the bed must be 0 m or more');
     for (const i of issues) expect(rawFieldPaths(i.message), i.message).toEqual([]);
+  });
+
+  it('names what is missing in words when an unfinished draft is submitted for check', async () => {
+    const checker = await createTestUser('checker');
+    const { revision } = await createTestScheme(designer.id, demoCase(undefined, (c) => {
+      delete c.control;
+      (c.limits as { distanceUpstream: unknown }[])[0].distanceUpstream = 'far';
+    }));
+    const refusal = await submitForCheck({ revisionId: revision.id, checkerId: checker.user.id, designer, baseUrl: 'http://localhost:3000' }).then(
+      () => null,
+      (error: { issues: Issue[] }) => error.issues,
+    );
+    expect(refusal?.map((i) => i.message)).toEqual(expect.arrayContaining(['Proposed structure is required', expect.stringMatching(/^Flood-level limit “[^”]+”: distance upstream must be a number \(m\)$/)]));
+    for (const i of refusal ?? []) expect(rawFieldPaths(i.message), i.message).toEqual([]);
   });
 
   it('shows the inputs table and the history of a draft in words', async () => {

@@ -3,6 +3,7 @@ import { Op } from 'sequelize';
 import { recordAuditEvent } from '@/lib/audit/record-audit-event';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Revision, Scheme, User, database } from '@/lib/db';
+import { caseIssuesInWords } from '@/lib/case-words/case-issue-words';
 import { ConflictError, InvalidRequestError, NotFoundError, UnprocessableError } from '@/lib/http/app-errors';
 import { evaluateCase } from '@/lib/hydraulics/evaluate-case';
 import { ENGINE_VERSION } from '@/lib/hydraulics/version';
@@ -40,7 +41,7 @@ export async function submitForCheck({ revisionId, checkerId, designer, baseUrl 
     const checker = await chosenChecker(checkerId, revision.authorId);
     const caseFile = frozenCaseFile(revision.inputsJson);
     const parsed = parseCase(caseFile);
-    if (!parsed.ok) throw new UnprocessableError('The draft is not complete enough to check: finish these fields in the scheme’s wizard first.', parsed.issues);
+    if (!parsed.ok) throw new UnprocessableError('The draft is not complete enough to check: finish these fields in the scheme’s wizard first.', caseIssuesInWords(parsed.issues, caseFile));
     const results = evaluateCase(parsed.value);
     const submittedAt = new Date().toISOString();
     const hashes = { inputsSha256: inputsSha256(caseFile), resultsSha256: resultsSha256(results) };
