@@ -34,7 +34,7 @@ function prismaticRows(reach: Prismatic, L: string, datum: string | null): Field
     [caseFieldName('reach.bedSlope'), slopeText(reach.bedSlope)],
     [caseFieldName('reach.length'), withUnit(reach.length, L, 0)],
     [caseFieldName('reach.bedLevelAtControl'), levelText(reach.bedLevelAtControl, L, datum)],
-    [caseFieldName('reach.bankHeight'), reach.bankHeight !== undefined ? heightText(reach.bankHeight, L) : 'not given (inundation not checked)'],
+    ['Bank height', reach.bankHeight !== undefined ? heightText(reach.bankHeight, L) : 'not given (inundation not checked)'],
   ];
 }
 

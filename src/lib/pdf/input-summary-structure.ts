@@ -49,7 +49,7 @@ function weirRows(control: WeirControl, inputs: CaseInput, results: CaseResult, 
   const bedLevel = bedLevelAtStructure(inputs, results);
   const rows: FieldRow[] = [['Type', KIND_WORDS[control.kind]]];
   rows.push(['Crest level', bedLevel === null ? 'not known (no bed level at the structure)' : levelText(bedLevel + control.sillHeight, L, datum)]);
-  rows.push([caseFieldName('control.sillHeight'), heightText(control.sillHeight, L)]);
+  rows.push(['Sill height', heightText(control.sillHeight, L)]);
   if (control.crestLength !== undefined) rows.push([caseFieldName('control.crestLength'), withUnit(control.crestLength, L)]);
   if (control.crestBreadth !== undefined) rows.push([caseFieldName('control.crestBreadth'), withUnit(control.crestBreadth, L)]);
   if (control.noseShape !== undefined) rows.push([caseFieldName('control.noseShape'), valueInWords(control.noseShape)]);
