@@ -37,7 +37,7 @@ describe('the wizard saves each step into a draft revision', () => {
     expect(scheme.scheme.reference).toMatch(/^SM-\d{4}$/);
     const history = scheme.revisions[0].entries.map((e: { summary: string }) => e.summary);
     expect(history[0]).toContain('Draft started (new scheme)');
-    expect(history.some((s: string) => s.includes('Saved the structure') && s.includes('control.sillHeight'))).toBe(true);
+    expect(history.some((s: string) => s.includes('Saved the structure') && s.includes('proposed structure: sill height above the bed'))).toBe(true);
   });
 
   it('refuses a limit beyond the reach on the limits step, naming the limit and both distances, and stores nothing', async () => {
@@ -62,9 +62,9 @@ describe('the wizard saves each step into a draft revision', () => {
     const { issues } = (await response.json()) as { issues: { path: string; message: string }[] };
     expect(issues).toEqual(
       expect.arrayContaining([
-        { path: 'section.width', message: 'must be greater than 0 m' },
-        { path: 'manningN', message: expect.stringContaining('at most 0.5') },
-        { path: 'bedSlope', message: expect.stringContaining('must be a number (m/m') },
+        { path: 'section.width', label: 'channel: width', message: 'must be greater than 0 m' },
+        { path: 'manningN', label: "channel: Manning's n", message: expect.stringContaining('at most 0.5') },
+        { path: 'bedSlope', label: 'channel: bed slope', message: expect.stringContaining('must be a number (m/m') },
       ]),
     );
     expect(await tableSnapshot()).toEqual(before);
@@ -84,7 +84,7 @@ describe('the wizard saves each step into a draft revision', () => {
     expect(low.events[0].weir.coefficientSource).toMatch(/\w/);
     const bad = await callRoute('head-preview', 'POST', { json: { revisionId, control: { ...STRUCTURE_STEP.control, crestLength: 0 } } });
     expect(bad.status).toBe(400);
-    expect((await bad.json()).issues).toContainEqual({ path: 'control.crestLength', message: 'must be greater than 0 m' });
+    expect((await bad.json()).issues).toContainEqual({ path: 'control.crestLength', message: 'Proposed structure: crest length must be greater than 0 m' });
     expect(await tableSnapshot()).toEqual(before);
   });
 

@@ -65,7 +65,13 @@ describe('a scheme as a case file', () => {
     const response = await importCase(JSON.stringify(bad));
     expect(response.status).toBe(400);
     const { issues } = await response.json();
-    expect(issues).toEqual(expect.arrayContaining([{ path: 'reach.section.width', message: 'must be greater than 0 m' }, { path: 'events', message: 'must list at least one flood event' }, { path: 'control.crestLength', message: 'is required' }]));
+    expect(issues).toEqual(
+      expect.arrayContaining([
+        { path: 'reach.section.width', message: 'Channel: width must be greater than 0 m' },
+        { path: 'events', message: 'Flood events must list at least one flood event' },
+        { path: 'control.crestLength', message: 'Proposed structure: crest length is required' },
+      ]),
+    );
     expect((await importCase('{"format": "something-else"}')).status).toBe(400);
     expect((await importCase('not json at all')).status).toBe(400);
     expect(await tableSnapshot()).toEqual(before);

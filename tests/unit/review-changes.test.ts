@@ -47,9 +47,9 @@ describe('changes between two revisions', () => {
     next.events.push({ name: '0.1% AEP', discharge: 60 });
     delete next.sizing;
     const changes = inputChanges(base, next);
-    expect(changes).toContainEqual({ part: 'structure', field: 'control.crestLength', before: 10, after: 12, change: 'changed', kind: 'none' });
-    expect(changes).toContainEqual(expect.objectContaining({ field: 'events[2].discharge', before: null, after: 60, change: 'added' }));
-    expect(changes).toContainEqual(expect.objectContaining({ field: 'sizing.vary', before: 'crestLength', after: null, change: 'removed' }));
+    expect(changes).toContainEqual({ part: 'structure', field: 'control.crestLength', label: 'proposed structure: crest length (m)', before: 10, after: 12, change: 'changed', kind: 'none' });
+    expect(changes).toContainEqual(expect.objectContaining({ field: 'events[2].discharge', label: 'flood event “0.1% AEP”: peak discharge (m³/s)', before: null, after: 60, change: 'added' }));
+    expect(changes).toContainEqual(expect.objectContaining({ field: 'sizing.vary', label: 'crest sizing: dimension to size (sill height or crest length)', before: 'crestLength', after: null, change: 'removed' }));
     expect(inputChanges(base, copy())).toEqual([]);
   });
 

@@ -18,7 +18,7 @@ const server = setupServer(
     const body = (await request.json()) as PreviewBody;
     asked.push(body);
     const { sillHeight, crestLength } = body.control;
-    if (crestLength === undefined) return HttpResponse.json({ error: 'Some fields need attention.', issues: [{ path: 'control.crestLength', message: 'is required' }] }, { status: 400 });
+    if (crestLength === undefined) return HttpResponse.json({ error: 'Some fields need attention.', issues: [{ path: 'control.crestLength', message: 'Proposed structure: crest length is required' }] }, { status: 400 });
     const head = 10 / crestLength;
     const weir = { kind: 'broad-crested', sillHeight, head, energyHead: head, approachVelocity: 0.4, coefficient: 0.95, coefficientSource: 'Published source (test)', coefficientIsDefault: true, coefficientForm: { symbol: 'Cd', equation: 'Q = Cd·(2/3)·√((2/3)·g)·b·H^1.5', unit: 'dimensionless' }, tailwaterDepth: null, submergence: null, validity: [], designHead: null };
     return HttpResponse.json({ units: 'SI', events: [{ name: '1% AEP', discharge: 38, head, controlDepth: (sillHeight ?? 0) + head, controlLevel: 31.2 + (sillHeight ?? 0) + head, structureDepth: (sillHeight ?? 0) + head, criticalDepth: 1.1, normalDepth: 2.7, causesBackwater: true, explanation: null, weir }] });
@@ -44,7 +44,8 @@ describe('the live head over the crest and control depth', () => {
   it('says what is missing, then follows the values as they are typed, asking the server once typing pauses', async () => {
     renderForm();
     expect((await screen.findByText(/Not worked out yet/)).textContent).toContain('Some fields need attention');
-    expect(screen.getByTestId('head-preview').textContent).toMatch(/control\.crestLength\s*is required/);
+    expect(screen.getByTestId('head-preview').textContent).toMatch(/Proposed structure: crest length is required/);
+    expect(screen.getByTestId('head-preview').textContent).not.toContain('control.crestLength');
 
     const user = userEvent.setup();
     await user.type(screen.getByLabelText('Crest length (m)'), '10');

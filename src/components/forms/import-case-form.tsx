@@ -35,7 +35,7 @@ export function ImportCaseForm() {
         {problem ? (
           <div role="alert" className="mt-3 text-sm text-verdict-fail">
             <p><span aria-hidden="true">✖ </span>{problem.error}</p>
-            <ul className="ml-5 list-disc">{problem.issues.map((i) => <li key={`${i.path}${i.message}`}><span className="num">{i.path}</span> {i.message}</li>)}</ul>
+            <ul className="ml-5 list-disc">{problem.issues.map((i) => <li key={`${i.path}${i.message}`}>{i.message}</li>)}</ul>
           </div>
         ) : null}
       </div>

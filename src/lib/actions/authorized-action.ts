@@ -4,6 +4,7 @@ import type { z } from 'zod';
 import { requireRole } from '@/lib/auth/authorize';
 import type { SessionUser } from '@/lib/auth/current-session';
 import type { Role } from '@/lib/auth/roles';
+import { engineIssueInWords } from '@/lib/case-words/case-issue-words';
 import { EngineError } from '@/lib/hydraulics/errors';
 import { AppError, InvalidRequestError, UnprocessableError } from '@/lib/http/app-errors';
 import { fieldIssuesFromZod } from '@/lib/http/zod-issues';
@@ -49,7 +50,10 @@ function actionFailure(error: unknown): ActionResult<never> {
   unstable_rethrow(error);
   if (error instanceof InvalidRequestError || error instanceof UnprocessableError) return { ok: false, status: error.status, error: error.message, issues: error.issues };
   if (error instanceof AppError) return { ok: false, status: error.status, error: error.message, issues: [] };
-  if (error instanceof EngineError) return { ok: false, status: error.code === 'invalid-input' ? 400 : 422, error: error.message, issues: [{ path: error.field, message: error.message }] };
+  if (error instanceof EngineError) {
+    const issue = engineIssueInWords(error);
+    return { ok: false, status: error.code === 'invalid-input' ? 400 : 422, error: issue.message, issues: [issue] };
+  }
   console.error('Unexpected error in a server action', error);
   return { ok: false, status: 500, error: 'Something went wrong on the server. The problem has been logged.', issues: [] };
 }

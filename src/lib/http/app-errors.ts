@@ -1,7 +1,9 @@
 // Domain failures of the portal, each mapped once to an HTTP status (see to-http-response.ts).
 
+/** One refused field: its machine path (for programs), optionally its name in words, and what is wrong, in words. */
 export interface FieldIssue {
   path: string;
+  label?: string;
   message: string;
 }
 

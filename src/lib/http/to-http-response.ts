@@ -1,4 +1,5 @@
 import 'server-only';
+import { engineIssueInWords } from '@/lib/case-words/case-issue-words';
 import { EngineError } from '@/lib/hydraulics/errors';
 import { AppError, InvalidRequestError, ThrottledError, UnprocessableError } from './app-errors';
 
@@ -13,7 +14,8 @@ export function toHttpResponse(error: unknown): Response {
   if (error instanceof AppError) return Response.json({ error: error.message }, { status: error.status });
   if (error instanceof EngineError) {
     const status = error.code === 'invalid-input' ? 400 : 422;
-    return Response.json({ error: error.message, code: error.code, issues: [{ path: error.field, message: error.message }] }, { status });
+    const issue = engineIssueInWords(error);
+    return Response.json({ error: issue.message, code: error.code, issues: [issue] }, { status });
   }
   console.error('Unexpected error in a route handler', error);
   return Response.json({ error: 'Something went wrong on the server. The problem has been logged.' }, { status: 500 });

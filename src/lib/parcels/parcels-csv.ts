@@ -1,6 +1,7 @@
 import { parse } from 'csv-parse/sync';
 import { MAX_PARCELS, type ParcelInput, parcelSchema } from '@/lib/validation/parcel-schemas';
 import { type CsvIssue, OPTIONAL_COLUMNS, PARCEL_COLUMNS, type ParcelColumn } from './parcel-columns';
+import { excerpt } from '@/lib/case-words/excerpt';
 
 // The parcels CSV: a header line naming the columns (parcel-columns.ts; any order, any case), then one line per parcel.
 // Pure: no database, so the same parser checks a preview and an import.
@@ -48,7 +49,7 @@ function rowIssues(line: number, values: Record<ParcelColumn, string>): { parcel
   if (parsed.success) return { parcel: parsed.data, issues: [] };
   const issues = parsed.error.issues.map((issue) => {
     const column = COLUMN_OF[issue.path[0] as keyof ParcelInput] ?? null;
-    const found = column && values[column] !== '' && issue.code !== 'custom' ? ` (found "${values[column]}")` : '';
+    const found = column && values[column] !== '' && issue.code !== 'custom' ? ` (found "${excerpt(values[column])}")` : '';
     return { line, column, message: `${issue.message}${found}` };
   });
   return { parcel: null, issues };
@@ -59,7 +60,7 @@ function headerIssues(header: string[]): { columns: (ParcelColumn | null)[]; iss
   const known = Object.keys(PARCEL_COLUMNS) as ParcelColumn[];
   const issues: CsvIssue[] = [];
   names.forEach((name, i) => {
-    if (!known.includes(name as ParcelColumn)) issues.push({ line: 1, column: null, message: `column ${i + 1} "${header[i]}" is not a parcels column; the columns are ${known.join(', ')}` });
+    if (!known.includes(name as ParcelColumn)) issues.push({ line: 1, column: null, message: `column ${i + 1} "${excerpt(header[i])}" is not a parcels column; the columns are ${known.join(', ')}` });
     else if (names.indexOf(name) !== i) issues.push({ line: 1, column: name as ParcelColumn, message: `the column ${name} appears twice` });
   });
   for (const column of known) {
@@ -97,7 +98,7 @@ export function parseParcelsCsv(text: string): ParsedParcelsCsv {
     const checked = rowIssues(line, values);
     issues.push(...checked.issues);
     const key = values.parcel_reference.toLowerCase();
-    if (key && seen.has(key)) issues.push({ line, column: 'parcel_reference', message: `repeats the reference "${values.parcel_reference}" of line ${seen.get(key)}` });
+    if (key && seen.has(key)) issues.push({ line, column: 'parcel_reference', message: `repeats the reference "${excerpt(values.parcel_reference)}" of line ${seen.get(key)}` });
     else if (key) seen.set(key, line);
     rows.push({ line, values, parcel: checked.parcel });
   }

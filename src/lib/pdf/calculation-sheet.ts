@@ -1,5 +1,6 @@
 import 'server-only';
 import PDFDocument from 'pdfkit';
+import { engineTextInWords } from '@/lib/case-words/case-issue-words';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import type { CaseInput } from '@/lib/validation/case-schema';
 import { drawEventResults, drawStepTable } from './calculation-sheet-events';
@@ -53,7 +54,7 @@ export function renderCalculationSheet(o: CalculationSheetOptions): Promise<Buff
   drawLongSections(doc, o.input, r, o.datum);
   if (r.warnings.length > 0) {
     heading(doc, 'Warnings from the calculation');
-    bullets(doc, r.warnings);
+    bullets(doc, r.warnings.map((w) => engineTextInWords(w, o.input)));
   }
   for (const e of r.events) drawStepTable(doc, e, o.input.units, o.datum);
   watermarkEveryPage(doc, status.watermark);

@@ -1,5 +1,6 @@
 import 'server-only';
 import PDFDocument from 'pdfkit';
+import { engineTextInWords } from '@/lib/case-words/case-issue-words';
 import { registerPdfFonts } from './fonts';
 import type { CertificateContent } from './certificate-content';
 import { certificateAssumptions, certificateMethods } from './certificate-methods';
@@ -94,7 +95,7 @@ export function renderCertificatePdf(c: CertificateContent): Promise<Buffer> {
   bullets(doc, certificateMethods(c.inputs, c.results));
   if (c.results.warnings.length) {
     heading(doc, 'Warnings from the calculation');
-    bullets(doc, c.results.warnings);
+    bullets(doc, c.results.warnings.map((w) => engineTextInWords(w, c.inputs)));
   }
   people(doc, c);
   heading(doc, 'Caution');

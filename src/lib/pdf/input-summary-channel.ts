@@ -1,3 +1,4 @@
+import { caseFieldName } from '@/lib/case-words/describe-case-field';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import type { CaseInput } from '@/lib/validation/case-schema';
 import { datumName, fixed, heightText, lengthUnit, levelText, slopeText, withUnit } from './certificate-text';
@@ -29,10 +30,10 @@ function sectionWords(section: Prismatic['section'], L: string): string {
 function prismaticRows(reach: Prismatic, L: string, datum: string | null): FieldRow[] {
   return [
     ['Channel', `Prismatic, one cross-section along the reach: ${sectionWords(reach.section, L)}`],
-    ["Manning's n", String(reach.manningN)],
-    ['Bed slope', slopeText(reach.bedSlope)],
-    ['Reach length', withUnit(reach.length, L, 0)],
-    ['Bed level at the structure', levelText(reach.bedLevelAtControl, L, datum)],
+    [caseFieldName('reach.manningN'), String(reach.manningN)],
+    [caseFieldName('reach.bedSlope'), slopeText(reach.bedSlope)],
+    [caseFieldName('reach.length'), withUnit(reach.length, L, 0)],
+    [caseFieldName('reach.bedLevelAtControl'), levelText(reach.bedLevelAtControl, L, datum)],
     ['Bank height', reach.bankHeight !== undefined ? heightText(reach.bankHeight, L) : 'not given (inundation not checked)'],
   ];
 }
@@ -57,7 +58,7 @@ function surveyedRows(reach: Surveyed, inputs: CaseInput, results: CaseResult, L
     ["Manning's n", `${range(roughness, 3)}${split ? ' (left bank, channel and right bank given separately on some sections)' : ''}`],
     ['Bed slope', meanSlope === undefined ? 'not computed' : `${slopeText(meanSlope)}, mean over the survey`],
     ['Reach length', withUnit(distances[distances.length - 1], L, 0)],
-    ['Bed level at the structure', levelText(bedLevelAtStructure(inputs, results), L, datum)],
+    [caseFieldName('reach.bedLevelAtControl'), levelText(bedLevelAtStructure(inputs, results), L, datum)],
     ['Bank levels', banks > 0 ? `given or marked on ${banks} of ${reach.sections.length} sections` : 'not given (inundation not checked)'],
   ];
 }
@@ -67,7 +68,7 @@ export function channelRows(inputs: CaseInput, results: CaseResult, datum: strin
   const L = lengthUnit(results.units);
   const reach = inputs.reach;
   const rows = reach.kind === 'prismatic' ? prismaticRows(reach, L, datum) : surveyedRows(reach, inputs, results, L, datum);
-  rows.push(['Energy coefficient (alpha)', reach.energyCoefficient !== undefined ? String(reach.energyCoefficient) : '1 (default)']);
+  rows.push([caseFieldName('reach.energyCoefficient'), reach.energyCoefficient !== undefined ? String(reach.energyCoefficient) : '1 (default)']);
   rows.push(['Level datum', `every level on this sheet is in ${L} above ${datumName(datum)}; depths and heights are above the bed`]);
   return rows;
 }

@@ -1,8 +1,12 @@
+import { caseFieldName } from '@/lib/case-words/describe-case-field';
+import { valueInWords } from '@/lib/case-words/value-words';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import { coefficientWords } from '@/lib/hydraulics/weirs/coefficient-words';
 import type { CaseInput } from '@/lib/validation/case-schema';
 import { dischargeUnit, fixed, heightText, lengthUnit, levelText, withUnit } from './certificate-text';
 import type { FieldRow } from './pdf-layout';
+
+const CASE_PIER_COEFFICIENT = caseFieldName('control.piers.coefficient').toLowerCase();
 
 type WeirControl = Extract<CaseInput['control'], { type: 'weir' }>;
 
@@ -23,7 +27,7 @@ export function bedLevelAtStructure(inputs: CaseInput, results: CaseResult): num
 function coefficientRows(control: WeirControl, results: CaseResult): FieldRow[] {
   const rows: FieldRow[] = [];
   if (control.coefficient !== undefined) {
-    rows.push(['Coefficient given by the designer', `${control.coefficient}${control.coefficientReason ? ` (${control.coefficientReason})` : ''}`]);
+    rows.push([`${caseFieldName('control.coefficient')} given by the designer`, `${control.coefficient}${control.coefficientReason ? ` (${control.coefficientReason})` : ''}`]);
   }
   for (const event of results.events) {
     const weir = event.control.weir;
@@ -46,17 +50,17 @@ function weirRows(control: WeirControl, inputs: CaseInput, results: CaseResult, 
   const rows: FieldRow[] = [['Type', KIND_WORDS[control.kind]]];
   rows.push(['Crest level', bedLevel === null ? 'not known (no bed level at the structure)' : levelText(bedLevel + control.sillHeight, L, datum)]);
   rows.push(['Sill height', heightText(control.sillHeight, L)]);
-  if (control.crestLength !== undefined) rows.push(['Crest length', withUnit(control.crestLength, L)]);
-  if (control.crestBreadth !== undefined) rows.push(['Crest breadth (in the direction of flow)', withUnit(control.crestBreadth, L)]);
-  if (control.noseShape !== undefined) rows.push(['Nose shape', control.noseShape]);
-  if (control.channelWidth !== undefined) rows.push(['Approach channel width', withUnit(control.channelWidth, L)]);
-  if (control.designHead !== undefined) rows.push(['Design head', withUnit(control.designHead, L)]);
-  if (control.piers) rows.push(['Piers', `${control.piers.count}${control.piers.coefficient !== undefined ? `, pier contraction coefficient ${control.piers.coefficient}` : ''}`]);
-  if (control.abutmentCoefficient !== undefined) rows.push(['Abutment contraction coefficient', String(control.abutmentCoefficient)]);
+  if (control.crestLength !== undefined) rows.push([caseFieldName('control.crestLength'), withUnit(control.crestLength, L)]);
+  if (control.crestBreadth !== undefined) rows.push([caseFieldName('control.crestBreadth'), withUnit(control.crestBreadth, L)]);
+  if (control.noseShape !== undefined) rows.push([caseFieldName('control.noseShape'), valueInWords(control.noseShape)]);
+  if (control.channelWidth !== undefined) rows.push([caseFieldName('control.channelWidth'), withUnit(control.channelWidth, L)]);
+  if (control.designHead !== undefined) rows.push([caseFieldName('control.designHead'), withUnit(control.designHead, L)]);
+  if (control.piers) rows.push([caseFieldName('control.piers'), `${control.piers.count}${control.piers.coefficient !== undefined ? `, ${CASE_PIER_COEFFICIENT} ${control.piers.coefficient}` : ''}`]);
+  if (control.abutmentCoefficient !== undefined) rows.push([caseFieldName('control.abutmentCoefficient'), String(control.abutmentCoefficient)]);
   if (control.ratingTable) {
     const first = control.ratingTable[0];
     const last = control.ratingTable[control.ratingTable.length - 1];
-    rows.push(['Rating table', `${control.ratingTable.length} rows, from ${withUnit(first[1], dischargeUnit(results.units), 2)} at ${withUnit(first[0], L)} to ${withUnit(last[1], dischargeUnit(results.units), 2)} at ${withUnit(last[0], L)} above the crest`]);
+    rows.push([caseFieldName('control.ratingTable'), `${control.ratingTable.length} rows, from ${withUnit(first[1], dischargeUnit(results.units), 2)} at ${withUnit(first[0], L)} to ${withUnit(last[1], dischargeUnit(results.units), 2)} at ${withUnit(last[0], L)} above the crest`]);
   }
   rows.push(...coefficientRows(control, results));
   rows.push(['Approach velocity', control.approachVelocity === false ? 'ignored: the head is the water level above the crest' : 'included: the head is the energy head above the crest (water level plus the velocity head of the approach flow)']);

@@ -1,3 +1,4 @@
+import { caseFieldName } from '@/lib/case-words/describe-case-field';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import type { CaseInput } from '@/lib/validation/case-schema';
 import { dischargeUnit, fixed, lengthUnit, levelUnit, percent, withUnit } from './certificate-text';
@@ -20,10 +21,10 @@ function eventsTable(doc: Doc, { inputs, results }: InputSummarySource): void {
     doc,
     [
       { title: 'Design event', width: 80 },
-      { title: `Discharge (${Q})`, width: 60, align: 'right', mono: true },
+      { title: `${caseFieldName('events[].discharge')} (${Q})`, width: 60, align: 'right', mono: true },
       { title: 'Annual exceedance probability', width: 70, align: 'right', mono: true },
-      { title: 'Return period', width: 60, align: 'right', mono: true },
-      { title: 'Climate-change allowance', width: 64, align: 'right', mono: true },
+      { title: caseFieldName('events[].returnPeriod'), width: 60, align: 'right', mono: true },
+      { title: caseFieldName('events[].climateChangeAllowance'), width: 64, align: 'right', mono: true },
       { title: `Design discharge (${Q})`, width: 64, align: 'right', mono: true },
     ],
     inputs.events.map((e, i) => ({
@@ -49,9 +50,9 @@ function limitsTable(doc: Doc, { inputs, results, datum }: InputSummarySource): 
     doc,
     [
       { title: 'Flood-level limit', width: 150 },
-      { title: `Upstream (${L})`, width: 54, align: 'right', mono: true },
-      { title: `Maximum level (${levelUnit(L, datum)})`, width: 80, align: 'right', mono: true },
-      { title: `Freeboard (${L})`, width: 54, align: 'right', mono: true },
+      { title: `${caseFieldName('limits[].distanceUpstream')} (${L})`, width: 54, align: 'right', mono: true },
+      { title: `${caseFieldName('limits[].maxLevel')} (${levelUnit(L, datum)})`, width: 80, align: 'right', mono: true },
+      { title: `${caseFieldName('limits[].freeboard')} (${L})`, width: 54, align: 'right', mono: true },
       { title: `Water to stay below (${levelUnit(L, datum)})`, width: 80, align: 'right', mono: true },
     ],
     inputs.limits.map((l) => ({ cells: [l.label, fixed(l.distanceUpstream, 0), fixed(l.maxLevel), fixed(l.freeboard), fixed(l.maxLevel - l.freeboard)] })),
@@ -70,8 +71,8 @@ function methodRows({ inputs, results }: InputSummarySource): FieldRow[] {
   if (p.expansionCoefficient !== undefined || p.contractionCoefficient !== undefined) {
     rows.push(['Expansion and contraction coefficients', `${p.expansionCoefficient ?? 'default'} and ${p.contractionCoefficient ?? 'default'}`]);
   }
-  rows.push(['Impact threshold', inputs.impactThreshold !== undefined ? withUnit(inputs.impactThreshold, L) : `${results.units === 'US' ? '0.033 ft' : '0.010 m'} (default)`]);
-  rows.push(['Minimum margin for a robust pass', inputs.minimumMargin !== undefined ? withUnit(inputs.minimumMargin, L) : `0 ${L} (none asked for)`]);
+  rows.push([caseFieldName('impactThreshold'), inputs.impactThreshold !== undefined ? withUnit(inputs.impactThreshold, L) : `${results.units === 'US' ? '0.033 ft' : '0.010 m'} (default)`]);
+  rows.push([caseFieldName('minimumMargin'), inputs.minimumMargin !== undefined ? withUnit(inputs.minimumMargin, L) : `0 ${L} (none asked for)`]);
   for (const e of results.events) {
     const r = e.refinement;
     rows.push([`Step refinement, ${e.name}`, `${r.stepsUsed} steps; the extent changed by ${percent(Math.abs(r.extentChangeOnHalving) * 100, 2)} on the last halving of the step; ${r.converged ? 'converged' : 'NOT converged'}`]);

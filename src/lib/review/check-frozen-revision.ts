@@ -6,6 +6,7 @@ import { evaluateCaseOffThread } from '@/lib/engine-pool/engine-pool';
 import { ThrottledError } from '@/lib/http/app-errors';
 import { frozenIntegrity } from '@/lib/revisions/frozen-integrity';
 import { frozenCaseFile, resultsSha256 } from '@/lib/revisions/revision-hashes';
+import { caseIssuesInWords, engineTextInWords } from '@/lib/case-words/case-issue-words';
 import { parseCase } from '@/lib/validation/parse-case';
 import { type FieldChange, resultChanges } from './revision-changes';
 
@@ -22,13 +23,13 @@ export interface FrozenRevisionCheck {
 
 async function rerun(inputs: unknown): Promise<FrozenRevisionCheck['rerun']> {
   const parsed = parseCase(inputs);
-  if (!parsed.ok) return { engineVersion: ENGINE_VERSION, resultsSha256: null, matches: false, error: `The frozen inputs no longer read as a case file: ${parsed.issues.map((i) => `${i.path} ${i.message}`).join('; ')}`, results: null };
+  if (!parsed.ok) return { engineVersion: ENGINE_VERSION, resultsSha256: null, matches: false, error: `The frozen inputs no longer read as a case file: ${caseIssuesInWords(parsed.issues, inputs).map((i) => i.message).join('; ')}`, results: null };
   try {
     const results = await evaluateCaseOffThread(parsed.value);
     return { engineVersion: ENGINE_VERSION, resultsSha256: resultsSha256(results), matches: false, error: null, results };
   } catch (error) {
     if (error instanceof ThrottledError) throw error;
-    return { engineVersion: ENGINE_VERSION, resultsSha256: null, matches: false, error: `The engine could not evaluate the frozen inputs: ${error instanceof Error ? error.message : String(error)}`, results: null };
+    return { engineVersion: ENGINE_VERSION, resultsSha256: null, matches: false, error: `The engine could not evaluate the frozen inputs: ${error instanceof Error ? engineTextInWords(error.message, inputs) : String(error)}`, results: null };
   }
 }
 

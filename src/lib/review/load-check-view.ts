@@ -4,7 +4,9 @@ import type { SessionUser } from '@/lib/auth/current-session';
 import { Review, Revision, User, database } from '@/lib/db';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import { frozenIntegrity } from '@/lib/revisions/frozen-integrity';
+import { decodeDraft } from '@/lib/revisions/draft-inputs';
 import { frozenCaseFile } from '@/lib/revisions/revision-hashes';
+import { parseCase } from '@/lib/validation/parse-case';
 import { checkFrozenRevision } from './check-frozen-revision';
 import { findVisibleRevision } from './find-visible-revision';
 import { listReviewComments } from './list-review-comments';
@@ -19,6 +21,11 @@ async function lastReviewedBefore(revision: Revision): Promise<Revision | null> 
   const earlier = await Revision.findAll({ where: { schemeId: revision.schemeId, number: { [Op.lt]: revision.number } }, order: [['number', 'DESC']] });
   const decided = new Set((await Review.findAll({ where: { revisionId: earlier.map((r) => r.id), decision: { [Op.ne]: null } }, attributes: ['revisionId'] })).map((r) => r.revisionId));
   return earlier.find((r) => decided.has(r.id)) ?? null;
+}
+
+function caseInputOf(inputs: unknown) {
+  const parsed = parseCase(inputs);
+  return parsed.ok ? parsed.value : null;
 }
 
 /** The checker's review page: inputs and stored results beside the independent re-run, and what changed since the last review. */
@@ -36,6 +43,10 @@ export async function loadCheckView({ revisionId, checker }: { revisionId: strin
     revision: { id: revision.id, number: revision.number, status: revision.status, submittedAt: revision.submittedAt, engineVersion: revision.engineVersion, revisionSha256: revision.revisionSha256, inputsSha256: revision.inputsSha256, resultsSha256: revision.resultsSha256, author: author?.name ?? 'unknown', checker: assigned?.name ?? null, assignedToOther: !!revision.checkerId && revision.checkerId !== checker.id },
     scheme: { id: scheme.id, reference: scheme.reference, name: scheme.name, watercourse: scheme.watercourse, site: scheme.site },
     inputs,
+    /** The inputs as the engine read them (defaults filled in), for the charts and step table; null if they no longer parse. */
+    caseInput: caseInputOf(inputs),
+    datum: decodeDraft(revision.inputsJson).wizard?.datum ?? null,
+    governing: decodeDraft(revision.inputsJson).wizard?.governing,
     results,
     check: revision.status === 'submitted' ? await checkFrozenRevision(revision) : null,
     integrity: frozenIntegrity(revision),

@@ -5,6 +5,7 @@ import { Revision, database } from '@/lib/db';
 import { evaluateCaseOffThread } from '@/lib/engine-pool/engine-pool';
 import { UnprocessableError } from '@/lib/http/app-errors';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
+import { caseIssuesInWords, engineIssueInWords } from '@/lib/case-words/case-issue-words';
 import { EngineError } from '@/lib/hydraulics/errors';
 import { ENGINE_VERSION } from '@/lib/hydraulics/version';
 import { findReadableRevision, isEditable } from '@/lib/schemes/scheme-access';
@@ -25,7 +26,7 @@ export async function evaluateDraft({ revisionId, user }: { revisionId: string; 
   const where = { revisionNumber: revision.number, schemeId: scheme.id };
   const draft = decodeDraft(revision.inputsJson);
   const parsed = parseCase(caseFileOf(draft));
-  if (!parsed.ok) return { ...where, status: 'incomplete', draft, issues: withSteps(parsed.issues) };
+  if (!parsed.ok) return { ...where, status: 'incomplete', draft, issues: withSteps(caseIssuesInWords(parsed.issues, draft)) };
   if (revision.resultsJson && revision.engineVersion === ENGINE_VERSION) {
     return { ...where, status: 'evaluated', draft, input: parsed.value, result: JSON.parse(revision.resultsJson) as CaseResult };
   }
@@ -36,7 +37,8 @@ export async function evaluateDraft({ revisionId, user }: { revisionId: string; 
     // Too large or too slow for the engine: the same answer as no solution, with what to reduce.
     if (error instanceof UnprocessableError) return { ...where, status: 'unsolvable', draft, error: error.message, issues: withSteps(error.issues) };
     if (!(error instanceof EngineError)) throw error;
-    return { ...where, status: 'unsolvable', draft, error: error.message, issues: withSteps([{ path: error.field, message: error.message }]) };
+    const issue = engineIssueInWords(error, draft);
+    return { ...where, status: 'unsolvable', draft, error: issue.message, issues: withSteps([issue]) };
   }
   // Only the designer's open draft keeps its result; anyone else sees a fresh run of the same inputs.
   if (user.role === 'designer' && scheme.designerId === user.id && isEditable(revision)) {

@@ -1,3 +1,4 @@
+import { excerpt } from '@/lib/case-words/excerpt';
 import type { FieldIssue } from '@/lib/http/app-errors';
 import type { CaseUnits } from '@/lib/validation/case-schema';
 import type { LimitsStepValues } from '@/lib/validation/scheme-schemas';
@@ -15,7 +16,7 @@ export function limitsBeyondReach(reach: DraftReach | undefined, limits: LimitsS
   const u = units === 'US' ? 'ft' : 'm';
   return limits.flatMap((limit, i) =>
     limit.distanceUpstream > length
-      ? [{ path: `limits[${i}].distanceUpstream`, message: `"${limit.label}" is ${limit.distanceUpstream} ${u} upstream, beyond the upstream end of the reach (${length} ${u} from the structure); lengthen the reach or move the limit` }]
+      ? [{ path: `limits[${i}].distanceUpstream`, message: `"${excerpt(limit.label, 60)}" is ${limit.distanceUpstream} ${u} upstream, beyond the upstream end of the reach (${length} ${u} from the structure); lengthen the reach or move the limit` }]
       : [],
   );
 }

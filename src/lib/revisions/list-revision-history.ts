@@ -1,5 +1,6 @@
 import 'server-only';
 import type { SessionUser } from '@/lib/auth/current-session';
+import { changedFieldLabel } from '@/lib/case-words/step-field-words';
 import { AuditEvent, Revision, User, database } from '@/lib/db';
 import { readableRevisionWhere } from '@/lib/schemes/revision-visibility';
 
@@ -25,21 +26,29 @@ export interface RevisionHistory {
 
 const STEP_WORDS: Record<string, string> = { scheme: 'the scheme', channel: 'the channel', flows: 'the design flows', structure: 'the structure', limits: 'the thresholds and limits' };
 
-function summary(event: AuditEvent): string {
+function summary(event: AuditEvent, caseFile: unknown): string {
   const d = JSON.parse(event.detailsJson) as { step?: string; changed?: string[]; origin?: string; verdict?: string; file?: string; field?: string; from?: number; to?: number; rowCount?: number };
   switch (event.action) {
     case 'revision.draft-created':
       return `Draft started (${d.origin ?? 'new'})`;
     case 'revision.step-saved':
-      return `Saved ${STEP_WORDS[d.step ?? ''] ?? d.step}: ${(d.changed ?? []).join(', ') || 'no change'}`;
+      return `Saved ${STEP_WORDS[d.step ?? ''] ?? d.step}: ${(d.changed ?? []).map((path) => changedFieldLabel(path, caseFile)).join('; ') || 'no change'}`;
     case 'revision.survey-attached':
       return `Surveyed cross-sections uploaded from ${d.file ?? 'a CSV file'} (${d.rowCount ?? '?'} points)`;
     case 'revision.evaluated':
       return `Evaluated: ${d.verdict ?? ''}`;
     case 'revision.crest-adopted':
-      return `Adopted the sized crest: ${d.field} ${d.from} → ${d.to}`;
+      return `Adopted the sized crest: ${d.field ? changedFieldLabel(d.field, caseFile) : 'the sized dimension'} ${d.from} → ${d.to}`;
     default:
       return event.action;
+  }
+}
+
+function inputsOf(json: string): unknown {
+  try {
+    return JSON.parse(json);
+  } catch {
+    return undefined;
   }
 }
 
@@ -59,6 +68,6 @@ export async function listRevisionHistory(schemeId: string, user: Pick<SessionUs
     basedOnNumber: r.basedOnRevisionId ? (numbers.get(r.basedOnRevisionId) ?? null) : null,
     createdAt: r.createdAt,
     updatedAt: r.updatedAt,
-    entries: events.filter((e) => e.entityId === r.id).map((e) => ({ at: e.at, actor: e.actorId ? (people.get(e.actorId) ?? 'unknown') : 'Sillmark', action: e.action, summary: summary(e) })),
+    entries: events.filter((e) => e.entityId === r.id).map((e) => ({ at: e.at, actor: e.actorId ? (people.get(e.actorId) ?? 'unknown') : 'Sillmark', action: e.action, summary: summary(e, inputsOf(r.inputsJson)) })),
   }));
 }

@@ -2,6 +2,7 @@ import 'server-only';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { evaluateCaseOffThread } from '@/lib/engine-pool/engine-pool';
 import { InvalidRequestError, UnprocessableError } from '@/lib/http/app-errors';
+import { caseIssuesInWords } from '@/lib/case-words/case-issue-words';
 import { fieldIssuesFromZod } from '@/lib/http/zod-issues';
 import { findEditableRevision } from '@/lib/schemes/scheme-access';
 import { parseCase } from '@/lib/validation/parse-case';
@@ -18,10 +19,10 @@ export async function previewHead({ request, user }: { request: HeadPreviewReque
   const { revision } = await findEditableRevision(user, request.revisionId);
   const draft = decodeDraft(revision.inputsJson);
   const structure = structureStepSchema(draft.units).safeParse({ control: request.control, existingControl: request.existingControl });
-  if (!structure.success) throw new InvalidRequestError(fieldIssuesFromZod(structure.error));
+  if (!structure.success) throw new InvalidRequestError(caseIssuesInWords(fieldIssuesFromZod(structure.error), draft));
   const { sizing: _sizing, sensitivity: _sensitivity, existingControl: _existing, ...rest } = caseFileOf(draft);
   const parsed = parseCase({ ...rest, ...structure.data, limits: [] });
-  if (!parsed.ok) throw new UnprocessableError('Save the channel and the design flows first: the head over the crest needs them.', withSteps(parsed.issues));
+  if (!parsed.ok) throw new UnprocessableError('Save the channel and the design flows first: the head over the crest needs them.', withSteps(caseIssuesInWords(parsed.issues, draft)));
   const result = await evaluateCaseOffThread(parsed.value);
   return {
     units: result.units,

@@ -1,6 +1,7 @@
 import 'server-only';
 import { recordAuditEvent } from '@/lib/audit/record-audit-event';
 import type { SessionUser } from '@/lib/auth/current-session';
+import { stepFieldLabel } from '@/lib/case-words/step-field-words';
 import { database } from '@/lib/db';
 import { InvalidRequestError } from '@/lib/http/app-errors';
 import { fieldIssuesFromZod } from '@/lib/http/zod-issues';
@@ -20,7 +21,7 @@ function nextStep(step: EditableStep): WizardStep {
 function checkedValues(request: SaveStepRequest, draft: DraftInputs): StepValues {
   const { step, values } = request;
   const parse = <T>(result: { success: true; data: T } | { success: false; error: import('zod').ZodError }): T => {
-    if (!result.success) throw new InvalidRequestError(fieldIssuesFromZod(result.error));
+    if (!result.success) throw new InvalidRequestError(fieldIssuesFromZod(result.error).map((issue) => ({ ...issue, label: stepFieldLabel(step, issue.path, { ...draft, ...values }) })));
     return result.data;
   };
   if (step === 'scheme') {

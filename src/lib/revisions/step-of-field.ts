@@ -1,14 +1,9 @@
+import { describeCaseField } from '@/lib/case-words/describe-case-field';
 import type { EditableStep } from '@/lib/validation/scheme-schemas';
 
 /** The wizard step where a case-file field is entered, so an incomplete or unsolvable case can send the designer there. */
 export function stepOfField(path: string): EditableStep {
-  if (path === 'case' || path === 'units' || path === 'title' || path.startsWith('format') || path.startsWith('version')) return 'scheme';
-  if (path === 'reach.bedLevelAtControl' || path === 'reach.length') return 'scheme';
-  if (path === 'reach.bankHeight' || /^reach\.sections\[\d+\]\.bankLevel/.test(path)) return 'limits';
-  if (path.startsWith('reach') || path.startsWith('profile')) return 'channel';
-  if (path.startsWith('events')) return 'flows';
-  if (path.startsWith('control') || path.startsWith('existingControl')) return 'structure';
-  return 'limits';
+  return describeCaseField(path).step;
 }
 
 export interface StepIssue {

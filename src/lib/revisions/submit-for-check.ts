@@ -4,6 +4,7 @@ import { recordAuditEvent } from '@/lib/audit/record-audit-event';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Revision, Scheme, User, database } from '@/lib/db';
 import { evaluateCaseOffThread } from '@/lib/engine-pool/engine-pool';
+import { caseIssuesInWords } from '@/lib/case-words/case-issue-words';
 import { ConflictError, InvalidRequestError, NotFoundError, UnprocessableError } from '@/lib/http/app-errors';
 import { ENGINE_VERSION } from '@/lib/hydraulics/version';
 import { deliverOutboundMail } from '@/lib/mail/deliver-outbound-mail';
@@ -36,7 +37,7 @@ async function submittableDraft(revisionId: string, designer: SessionUser, check
   const checker = await chosenChecker(checkerId, revision.authorId, transaction);
   const caseFile = frozenCaseFile(revision.inputsJson);
   const parsed = parseCase(caseFile);
-  if (!parsed.ok) throw new UnprocessableError('The draft is not complete enough to check: finish these fields in the scheme’s wizard first.', parsed.issues);
+  if (!parsed.ok) throw new UnprocessableError('The draft is not complete enough to check: finish these fields in the scheme’s wizard first.', caseIssuesInWords(parsed.issues, caseFile));
   return { revision, scheme, checker, caseFile, caseInput: parsed.value };
 }
 

@@ -2,6 +2,7 @@ import 'server-only';
 import { randomUUID } from 'node:crypto';
 import { z } from 'zod';
 import { recordAuditEvent } from '@/lib/audit/record-audit-event';
+import { caseIssuesInWords } from '@/lib/case-words/case-issue-words';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Scheme } from '@/lib/db';
 import { ForbiddenError, InvalidRequestError } from '@/lib/http/app-errors';
@@ -41,12 +42,21 @@ function parseSchemeBlock(block: unknown, eventCount: number) {
   return parsed.data;
 }
 
+/** The decoded file, for naming its events and limits in the messages; nothing when it is not JSON. */
+function readableJson(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return undefined;
+  }
+}
+
 /** Starts a scheme from an uploaded case file: checked whole first, so a bad file stores nothing. */
 export async function importSchemeCase({ bytes, originalName, designer }: { bytes: Buffer; originalName: string; designer: SessionUser }) {
   if (designer.role !== 'designer') throw new ForbiddenError('Only designers create schemes.');
   const text = textOfUpload(bytes, 'a Sillmark case file (JSON)');
   const parsed = parseCaseText(text);
-  if (!parsed.ok) throw new InvalidRequestError(parsed.issues, 'The case file has problems; nothing was stored.');
+  if (!parsed.ok) throw new InvalidRequestError(caseIssuesInWords(parsed.issues, readableJson(text)), 'The case file has problems; nothing was stored.');
   const raw = JSON.parse(text) as { scheme?: unknown };
   const value = parsed.value;
   const block = parseSchemeBlock(raw.scheme, value.events.length);

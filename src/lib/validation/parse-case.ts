@@ -69,7 +69,8 @@ export function parseCaseText(text: string): ParsedCase {
   try {
     raw = JSON.parse(text);
   } catch (error) {
-    const detail = error instanceof Error ? error.message : String(error);
+    // V8 quotes the start of the text it could not read: keep that short.
+    const detail = error instanceof Error ? error.message.slice(0, 120) : 'unreadable';
     return { ok: false, issues: [{ path: 'case', message: `is not valid JSON (${detail})` }] };
   }
   return parseCase(raw);

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { type CaseUnits, caseSchema } from './case-schema';
 import { multiLineText, singleLineText } from './plain-text';
+import { missingOr } from './case-schema-parts';
 
 // The wizard's forms, one schema per step. Every case field is taken from the engine's own case schema
 // (a .pick() or a part of it), so the form in the browser and the server refuse exactly the same input.
@@ -122,12 +123,12 @@ export type NewSchemeInput = z.infer<typeof newSchemeSchema>;
 
 /** The live head preview: the structure form's values, against the draft's saved channel and flows. */
 export const headPreviewRequestSchema = z.object({
-  revisionId: z.string({ error: 'is required' }).min(1, { error: 'is required' }).max(64),
+  revisionId: z.string({ error: missingOr('text') }).min(1, { error: 'is required' }).max(64),
   control: z.unknown(),
   existingControl: z.unknown().optional(),
 });
 export type HeadPreviewRequest = z.infer<typeof headPreviewRequestSchema>;
 
-export const startDraftSchema = z.object({ revisionId: z.string({ error: 'is required' }).min(1, { error: 'is required' }).max(64) });
-export const adoptCrestSchema = z.object({ revisionId: z.string({ error: 'is required' }).min(1, { error: 'is required' }).max(64) });
-export const evaluateRequestSchema = z.object({ revisionId: z.string({ error: 'is required' }).min(1, { error: 'is required' }).max(64) });
+export const startDraftSchema = z.object({ revisionId: z.string({ error: missingOr('text') }).min(1, { error: 'is required' }).max(64) });
+export const adoptCrestSchema = z.object({ revisionId: z.string({ error: missingOr('text') }).min(1, { error: 'is required' }).max(64) });
+export const evaluateRequestSchema = z.object({ revisionId: z.string({ error: missingOr('text') }).min(1, { error: 'is required' }).max(64) });

@@ -1,4 +1,5 @@
 import type { CaseUnits } from './case-schema';
+import { excerpt } from '@/lib/case-words/excerpt';
 
 // Reading a survey CSV's header and rows into numbers, one line-numbered message per bad cell.
 
@@ -34,7 +35,7 @@ function headerColumns(header: string[], line: number): { columns: Map<Column, n
   const names = header.map(columnName);
   const issues: Issue[] = [];
   names.forEach((name, i) => {
-    if (!KNOWN.includes(name)) issues.push({ line, message: `column ${i + 1} "${header[i]}" is not a survey column: ${HEADER_HELP}` });
+    if (!KNOWN.includes(name)) issues.push({ line, message: `column ${i + 1} "${excerpt(header[i])}" is not a survey column: ${HEADER_HELP}` });
     else if (names.indexOf(name) !== i) issues.push({ line, message: `the column ${name} appears twice` });
   });
   for (const name of REQUIRED) if (!names.includes(name)) issues.push({ line, message: `the column ${name} is missing: ${HEADER_HELP}` });
@@ -61,22 +62,22 @@ function rowOf(record: string[], line: number, columns: Map<Column, number>, uni
   const number = (c: Column, what: string): number => {
     const text = cell(c);
     if (text === '') issues.push({ line, message: `${c} is empty: give the ${what}` });
-    else if (!NUMBER.test(text)) issues.push({ line, message: `${c} "${text}" is not a number (${what})` });
+    else if (!NUMBER.test(text)) issues.push({ line, message: `${c} "${excerpt(text)}" is not a number (${what})` });
     return Number(text);
   };
   const distanceUpstream = number('distance_upstream', `distance upstream from the structure, ${length}`);
   const station = number('station', `distance across the section from its left end, ${length}`);
   const elevation = number('elevation', `ground level, ${length} above the datum`);
-  if (Number.isFinite(distanceUpstream) && distanceUpstream < 0) issues.push({ line, message: `distance_upstream ${cell('distance_upstream')} ${length} must be 0 ${length} or more (measured upstream from the structure)` });
+  if (Number.isFinite(distanceUpstream) && distanceUpstream < 0) issues.push({ line, message: `distance_upstream ${excerpt(cell('distance_upstream'))} ${length} must be 0 ${length} or more (measured upstream from the structure)` });
   const nText = cell('manning_n');
   let manningN: number | null = null;
   if (nText !== '') {
-    if (!NUMBER.test(nText)) issues.push({ line, message: `manning_n "${nText}" is not a number (Manning's n, dimensionless, typically 0.02–0.15)` });
-    else if (!(Number(nText) > 0 && Number(nText) <= 0.5)) issues.push({ line, message: `manning_n ${nText} must be greater than 0 and at most 0.5 (typically 0.02–0.15)` });
+    if (!NUMBER.test(nText)) issues.push({ line, message: `manning_n "${excerpt(nText)}" is not a number (Manning's n, dimensionless, typically 0.02–0.15)` });
+    else if (!(Number(nText) > 0 && Number(nText) <= 0.5)) issues.push({ line, message: `manning_n ${excerpt(nText)} must be greater than 0 and at most 0.5 (typically 0.02–0.15)` });
     manningN = Number(nText);
   }
   const bank = columns.has('bank') ? bankOf(cell('bank')) : null;
-  if (bank === undefined) issues.push({ line, message: `bank "${cell('bank')}" must be blank, left or right` });
+  if (bank === undefined) issues.push({ line, message: `bank "${excerpt(cell('bank'))}" must be blank, left or right` });
   if (issues.length > before) return null;
   return { line, distanceUpstream, station, elevation, bank: bank ?? null, manningN };
 }

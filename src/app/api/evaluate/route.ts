@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { ANY_ROLE } from '@/lib/auth/authorize';
 import { evaluateCaseJsonOffThread } from '@/lib/engine-pool/engine-pool';
+import { caseIssuesInWords } from '@/lib/case-words/case-issue-words';
 import { InvalidRequestError } from '@/lib/http/app-errors';
 import { authorizedRoute } from '@/lib/http/authorized-route';
 import { readJsonBody } from '@/lib/http/read-json-body';
@@ -19,7 +20,7 @@ export const POST = authorizedRoute(ANY_ROLE, async (request, user) => {
   const body = await readJsonBody(request, objectBody);
   if ('format' in body) {
     const parsed = parseCase(body);
-    if (!parsed.ok) throw new InvalidRequestError(parsed.issues);
+    if (!parsed.ok) throw new InvalidRequestError(caseIssuesInWords(parsed.issues, body));
     // The worker's JSON text is sent as it is: parsing and re-serialising it would put the work back on this thread.
     const resultJson = await evaluateCaseJsonOffThread(parsed.value, request.signal);
     return new Response(`{"status":"evaluated","result":${resultJson}}`, { headers: { 'content-type': 'application/json' } });

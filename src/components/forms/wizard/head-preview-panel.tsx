@@ -36,7 +36,7 @@ export function HeadPreviewPanel({ revisionId, structureJson, lengthUnit, discha
         {error ? (
           <div role="status" className="text-verdict-caution">
             <p><span aria-hidden="true">⚠ </span>Not worked out yet: {error.message}</p>
-            <ul className="ml-5 list-disc">{error.issues.map((i) => <li key={`${i.path}${i.message}`}><span className="num">{i.path}</span> {i.message}</li>)}</ul>
+            <ul className="ml-5 list-disc">{error.issues.map((i) => <li key={`${i.path}${i.message}`}>{i.message}</li>)}</ul>
           </div>
         ) : null}
         {data && !error ? (

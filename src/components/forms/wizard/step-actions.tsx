@@ -10,7 +10,7 @@ export function StepActions({ failure, backHref, submitting, label = 'Save and c
         <div role="alert" className="mb-4 text-sm text-verdict-fail">
           <p><span aria-hidden="true">✖ </span>{failure.error}</p>
           {failure.unplaced.length > 0 ? (
-            <ul className="ml-5 list-disc">{failure.unplaced.map((i) => <li key={`${i.path}-${i.message}`}><span className="num">{i.path}</span> {i.message}</li>)}</ul>
+            <ul className="ml-5 list-disc">{failure.unplaced.map((i) => <li key={`${i.path}-${i.message}`}>{i.label ? `${i.label}: ` : ''}{i.message}</li>)}</ul>
           ) : null}
         </div>
       ) : null}

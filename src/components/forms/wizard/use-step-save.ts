@@ -10,7 +10,7 @@ import { stepHref } from './wizard-progress';
 export interface SaveFailure {
   error: string;
   /** Problems the form has no field for, listed above the buttons. */
-  unplaced: { path: string; message: string }[];
+  unplaced: { path: string; label?: string; message: string }[];
 }
 
 /**
@@ -29,7 +29,7 @@ export function useStepSave<T extends FieldValues>({ schemeId, revisionId, step,
       setFailure({ error: 'The server could not be reached; nothing was saved. Check the connection and try again.', unplaced: [] });
       return false;
     }
-    const body = (await response.json().catch(() => ({}))) as { nextStep?: string; error?: string; issues?: { path: string; message: string }[] };
+    const body = (await response.json().catch(() => ({}))) as { nextStep?: string; error?: string; issues?: { path: string; label?: string; message: string }[] };
     if (response.ok) {
       router.push(stepHref(schemeId, (body.nextStep ?? 'results') as WizardStep));
       return true;

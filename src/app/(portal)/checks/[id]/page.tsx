@@ -7,7 +7,9 @@ import { loadCheckView } from '@/lib/review/load-check-view';
 import { IntegrityAlarm } from '@/components/ui/integrity-alarm';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusLabel } from '@/components/ui/status-label';
+import { featuredEventIndex } from '@/lib/revisions/results-sheet';
 import { ChangesTable } from '../_components/changes-table';
+import { DesignerResults } from '../_components/designer-results';
 import { InputsTable } from '../_components/inputs-table';
 import { utc } from '../_components/quantities';
 import { RerunComparison } from '../_components/rerun-comparison';
@@ -29,13 +31,19 @@ async function load(revisionId: string, checker: Awaited<ReturnType<typeof requi
   }
 }
 
-export default async function CheckPage({ params }: { params: Promise<{ id: string }> }) {
+function chosenEvent(query: string | undefined, count: number, featured: number): number {
+  return query && /^\d+$/.test(query) && Number(query) < count ? Number(query) : featured;
+}
+
+export default async function CheckPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ event?: string }> }) {
   const { id } = await params;
+  const query = await searchParams;
   const checker = await requirePageRole(['checker'], `/checks/${id}`);
   const view = await load(id, checker);
   const { revision, scheme, check } = view;
   const units = view.results?.units;
   const canDecide = revision.status === 'submitted' && !revision.assignedToOther;
+  const eventIndex = view.results ? chosenEvent(query.event, view.results.events.length, featuredEventIndex(view.results, view.governing)) : 0;
   return (
     <>
       <PageHeader eyebrow={`Check · ${scheme.reference} · revision ${revision.number}`} title={scheme.name}>
@@ -68,18 +76,30 @@ export default async function CheckPage({ params }: { params: Promise<{ id: stri
         )}
       </section>
 
-      <div className="grid gap-8 xl:grid-cols-2">
-        <section aria-labelledby="h-inputs">
-          <h2 id="h-inputs" className="mb-3 text-lg font-semibold">Frozen inputs</h2>
-          <p className="num mb-3 break-all text-xs text-ink-faint">SHA-256 {revision.inputsSha256}</p>
-          <InputsTable inputs={view.inputs} />
-        </section>
-        <section aria-labelledby="h-results">
-          <h2 id="h-results" className="mb-3 text-lg font-semibold">Stored results</h2>
-          <p className="num mb-3 break-all text-xs text-ink-faint">SHA-256 {revision.resultsSha256}</p>
-          {view.results ? <ResultsSummary results={view.results} caption="Stored at submission" /> : <p className="text-sm">No results are stored.</p>}
-        </section>
-      </div>
+      <section aria-labelledby="h-results" className="mb-10">
+        <h2 id="h-results" className="mb-1 text-lg font-semibold">Stored results</h2>
+        <p className="mb-1 text-sm text-ink-soft">What the designer saw on the results sheet when submitting.</p>
+        <p className="num mb-3 break-all text-xs text-ink-faint">SHA-256 {revision.resultsSha256}</p>
+        {view.results ? <ResultsSummary results={view.results} caption="Stored at submission" /> : <p className="text-sm">No results are stored.</p>}
+        {view.results && view.caseInput && view.results.events.length > 0 ? (
+          <div className="mt-6">
+            <DesignerResults
+              input={view.caseInput}
+              results={view.results}
+              eventIndex={eventIndex}
+              datum={view.datum}
+              href={`/checks/${revision.id}`}
+              stepTableCsvHref={`/api/schemes/${scheme.id}/step-table?revision=${revision.number}&event=${eventIndex}`}
+            />
+          </div>
+        ) : null}
+      </section>
+
+      <section aria-labelledby="h-inputs" className="mb-10">
+        <h2 id="h-inputs" className="mb-3 text-lg font-semibold">Frozen inputs</h2>
+        <p className="num mb-3 break-all text-xs text-ink-faint">SHA-256 {revision.inputsSha256}</p>
+        <InputsTable inputs={view.inputs} />
+      </section>
 
       <section aria-labelledby="h-review" className="mt-10">
         <h2 id="h-review" className="mb-3 text-lg font-semibold">Review</h2>

@@ -13,7 +13,7 @@ export function ChangesTable({ changes, caption, units, empty }: { changes: Fiel
       {changes.map((c) => (
         <tr key={`${c.part}-${c.field}`} className="border-b border-paper-edge align-top">
           <td className="py-1 pr-3 text-xs text-ink-soft">{REVIEW_PART_LABELS[c.part]}</td>
-          <td className="py-1 pr-3">{c.field}</td>
+          <td className="py-1 pr-3">{c.label}</td>
           <td className="num break-all py-1 pr-3 text-right text-ink-soft">{shownValue(c.before, c.kind, units)}</td>
           <td className="num break-all py-1 pr-3 text-right font-semibold">{shownValue(c.after, c.kind, units)}</td>
           <td className="py-1 text-xs">{CHANGE_WORDS[c.change]}</td>

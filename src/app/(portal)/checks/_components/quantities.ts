@@ -1,3 +1,4 @@
+import { valueInWords } from '@/lib/case-words/value-words';
 import type { QuantityKind } from '@/lib/review/key-results';
 
 // Numbers as the pages show them: fixed decimals in the tabular face, always with their unit.
@@ -15,7 +16,7 @@ export function quantity(value: number | null | undefined, unit: string, digits 
 export function shownValue(value: string | number | boolean | null, kind: QuantityKind, units: 'SI' | 'US' | undefined): string {
   if (value === null) return '—';
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
-  if (typeof value === 'string') return value;
+  if (typeof value === 'string') return valueInWords(value);
   const u = unitsOf(units);
   if (kind === 'length') return quantity(value, u.length);
   if (kind === 'discharge') return quantity(value, u.discharge, 2);

@@ -23,7 +23,7 @@ export function SubmitForCheckForm({ revisionId, checkers }: { revisionId: strin
     if (result.ok) return router.refresh();
     const checkerIssue = result.issues.find((issue) => issue.path === 'checkerId');
     if (checkerIssue) setError('checkerId', { message: checkerIssue.message });
-    setFailure({ message: result.error, fields: result.issues.filter((issue) => issue !== checkerIssue).map((issue) => `${issue.path}: ${issue.message}`) });
+    setFailure({ message: result.error, fields: result.issues.filter((issue) => issue !== checkerIssue).map((issue) => issue.message) });
   });
 
   return (

@@ -10,7 +10,7 @@ export function IncompleteNotice({ schemeId, title, issues, editable }: { scheme
       <ul className="mt-2 space-y-1 text-sm">
         {issues.map((i) => (
           <li key={`${i.path}-${i.message}`}>
-            {editable ? <Link className="text-accent underline" href={stepHref(schemeId, i.step)}>{STEP_TITLES[i.step]}</Link> : STEP_TITLES[i.step]}: <span className="num">{i.path}</span> {i.message}
+            {editable ? <Link className="text-accent underline" href={stepHref(schemeId, i.step)}>{STEP_TITLES[i.step]}</Link> : STEP_TITLES[i.step]}: {i.message}
           </li>
         ))}
       </ul>

@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import Link from 'next/link';
+import { engineTextInWords } from '@/lib/case-words/case-issue-words';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import { longSectionData, sectionOutline } from '@/lib/revisions/results-sheet';
 import { stepTableColumns } from '@/lib/revisions/step-table-csv';
@@ -66,7 +67,7 @@ export function ResultsSheet({ scheme, revision, input, result, eventIndex, gove
         </Section>
       ) : null}
       <Section id="warnings-heading" title={`Warnings (${result.warnings.length})`}>
-        {result.warnings.length === 0 ? <p className="text-sm text-ink-soft">None.</p> : <ul className="space-y-1 text-sm">{result.warnings.map((w) => <li key={w}><span aria-hidden="true" className="text-verdict-caution">⚠ </span>{w}</li>)}</ul>}
+        {result.warnings.length === 0 ? <p className="text-sm text-ink-soft">None.</p> : <ul className="space-y-1 text-sm">{result.warnings.map((w) => <li key={w}><span aria-hidden="true" className="text-verdict-caution">⚠ </span>{engineTextInWords(w, input)}</li>)}</ul>}
       </Section>
       {result.sensitivity ? (
         <Section id="sensitivity-heading" title="Sensitivity">

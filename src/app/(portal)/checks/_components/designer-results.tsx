@@ -1,0 +1,62 @@
+import type { ReactNode } from 'react';
+import Link from 'next/link';
+import { engineTextInWords } from '@/lib/case-words/case-issue-words';
+import type { CaseResult } from '@/lib/hydraulics/case-result';
+import { unitWords } from '@/lib/revisions/draft-inputs';
+import { longSectionData, sectionOutline } from '@/lib/revisions/results-sheet';
+import { stepTableColumns } from '@/lib/revisions/step-table-csv';
+import type { CaseInput } from '@/lib/validation/case-schema';
+import { ProfileViews } from '../../schemes/[id]/results/profile-views';
+import { SensitivityTable } from '../../schemes/[id]/results/sensitivity-table';
+import { StepTable } from '../../schemes/[id]/results/step-table';
+
+type Props = {
+  input: CaseInput;
+  results: CaseResult;
+  eventIndex: number;
+  datum: string | null;
+  /** The page's own address, to which `?event=` is added. */
+  href: string;
+  stepTableCsvHref: string;
+};
+
+function Part({ id, title, children }: { id: string; title: string; children: ReactNode }) {
+  return (
+    <section aria-labelledby={id} className="mb-8">
+      <h3 id={id} className="mb-2 font-semibold">{title}</h3>
+      {children}
+    </section>
+  );
+}
+
+/** The stored results as the designer saw them on the results sheet: long-section and cross-section, warnings, sensitivity and step table. */
+export function DesignerResults({ input, results, eventIndex, datum, href, stepTableCsvHref }: Props) {
+  const event = results.events[eventIndex];
+  const u = unitWords(input.units).length;
+  const caption = `${event.name}: stored water level with the scheme ${event.control.level.toFixed(3)} ${u} at the structure, falling back to the level without it by ${event.extent.distanceUpstream.toFixed(0)} ${u} upstream. ${event.limits.filter((l) => l.pass).length} of ${event.limits.length} limits met.`;
+  return (
+    <div data-testid="designer-results">
+      {results.events.length > 1 ? (
+        <nav aria-label="Events of the stored results" className="mb-4 flex flex-wrap gap-2 text-sm">
+          {results.events.map((e, i) => (
+            <Link key={e.name} href={`${href}?event=${i}`} scroll={false} aria-current={i === eventIndex ? 'page' : undefined} className={`rounded border px-3 py-1 ${i === eventIndex ? 'border-accent bg-accent-wash font-semibold' : 'border-paper-edge'}`}>
+              {e.name} {e.verdict === 'pass' ? '✔' : '✖'}<span className="sr-only"> {e.verdict}</span>
+            </Link>
+          ))}
+        </nav>
+      ) : null}
+      <Part id="h-stored-long-section" title={`Long-section and cross-section: ${event.name}`}>
+        <ProfileViews data={longSectionData(input, event)} profile={event.profile} outline={sectionOutline(input)} lengthUnit={u} levelTitle={`Level (${u}${datum ? ` above ${datum}` : ' above datum'})`} caption={caption} />
+      </Part>
+      <Part id="h-stored-warnings" title={`Warnings (${results.warnings.length})`}>
+        {results.warnings.length === 0 ? <p className="text-sm text-ink-soft">None.</p> : <ul className="space-y-1 text-sm">{results.warnings.map((w) => <li key={w}><span aria-hidden="true" className="text-verdict-caution">⚠ </span>{engineTextInWords(w, input)}</li>)}</ul>}
+      </Part>
+      <Part id="h-stored-sensitivity" title="Sensitivity">
+        {results.sensitivity ? <SensitivityTable sensitivity={results.sensitivity} limits={input.limits.map((l) => l.label)} lengthUnit={u} /> : <p className="text-sm text-ink-soft">The designer did not ask for sensitivity runs.</p>}
+      </Part>
+      <Part id="h-stored-steps" title={`Step table: ${event.name}`}>
+        <StepTable rows={event.profile} columns={stepTableColumns(input.units)} csvHref={stepTableCsvHref} eventName={event.name} />
+      </Part>
+    </div>
+  );
+}
