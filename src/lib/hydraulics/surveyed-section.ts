@@ -37,7 +37,7 @@ function withPointAt(points: Point[], station: Metres): Point[] {
 }
 
 function highestGroundAt(points: Point[], station: Metres): Metres {
-  return Math.max(...points.filter((p) => p.station === station).map((p) => p.elevation));
+  return points.reduce((highest, p) => (p.station === station ? Math.max(highest, p.elevation) : highest), -Infinity);
 }
 
 function subAreaOf(segment: GroundSegment, banks: ValidatedSurvey['banks']): SubArea {
@@ -74,7 +74,7 @@ export function surveyedSection(spec: SurveyedSectionSpec, opts: { field?: strin
   const segmentsBySubArea = Object.fromEntries(
     SUB_AREAS.map((subArea) => [subArea, segments.filter((s) => s.subArea === subArea).map((s) => s.segment)]),
   ) as Record<SubArea, GroundSegment[]>;
-  const invertLevel = Math.min(...ground.map((p) => p.elevation));
+  const invertLevel = ground.reduce((lowest, p) => Math.min(lowest, p.elevation), Infinity);
   const lowerEndLevel = Math.min(ground[0].elevation, ground[ground.length - 1].elevation);
   const maxDepth = lowerEndLevel - invertLevel;
   const breakpointDepths = [...new Set(ground.map((p) => p.elevation - invertLevel))].filter((d) => d > 0 && d <= maxDepth).sort((a, b) => a - b);

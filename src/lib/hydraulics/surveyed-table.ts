@@ -44,15 +44,20 @@ export class SurveyTable {
         const [low, high] = z1 <= z2 ? [index.get(z1) as number, index.get(z2) as number] : [index.get(z2) as number, index.get(z1) as number];
         const width = Math.abs(x2 - x1);
         const rise = Math.abs(z2 - z1);
+        const length = Math.hypot(width, rise);
         if (rise === 0) {
           jumpT[low] += width;
           jumpP[low] += width;
+        } else if (!Number.isFinite(width / rise) || !Number.isFinite(length / rise)) {
+          // A rise too small for its slope to exist in double precision: wholly wet just above its upper end.
+          jumpT[high] += width;
+          jumpP[high] += length;
         } else {
           // A vertical wall (width 0) only adds perimeter, one metre per metre of rise.
           rateT[low] += width / rise;
           rateT[high] -= width / rise;
-          rateP[low] += Math.hypot(width, rise) / rise;
-          rateP[high] -= Math.hypot(width, rise) / rise;
+          rateP[low] += length / rise;
+          rateP[high] -= length / rise;
         }
       }
       let [area, moment, width, perimeter, widthRate, perimeterRate] = [0, 0, 0, 0, 0, 0];
