@@ -35,6 +35,7 @@ export class SurveyTable {
     this.levels = levels;
     const index = new Map(levels.map((level, k) => [level, k]));
     const count = levels.length;
+    const negligibleRise = 1e-13 * Math.max(levels[count - 1] - levels[0], Math.abs(levels[0]), Math.abs(levels[count - 1]), Number.MIN_VALUE);
     subAreas.forEach((segments, j) => {
       const jumpT = new Array<number>(count).fill(0);
       const jumpP = new Array<number>(count).fill(0);
@@ -48,8 +49,8 @@ export class SurveyTable {
         if (rise === 0) {
           jumpT[low] += width;
           jumpP[low] += width;
-        } else if (!Number.isFinite(width / rise) || !Number.isFinite(length / rise)) {
-          // A rise too small for its slope to exist in double precision: wholly wet just above its upper end.
+        } else if (rise <= negligibleRise || !Number.isFinite(length / rise)) {
+          // A rise far below the precision of the levels (its slope would be all rounding): wholly wet just above its upper end.
           jumpT[high] += width;
           jumpP[high] += length;
         } else {

@@ -37,7 +37,7 @@ export function convergedMarch(compute: (steps: number) => MarchResult, opts: Re
   const maxResolution = opts.maxResolution ?? 2 ** 14;
   const extentTolerance = opts.extentTolerance ?? 0.001;
   const levelTolerance = opts.levelTolerance ?? 0.001;
-  let steps = Math.max(2, Math.min(2 * (opts.initialResolution ?? 16), maxResolution));
+  let steps = Math.max(2, Math.min(opts.initialResolution ?? 16, maxResolution));
   for (;;) {
     const march = compute(steps);
     const coarse: NodeRun = coarseFromFine(march, steps, opts.bedSlope, opts.reachLength) ?? compute(Math.max(1, Math.round(steps / 2))).table;
