@@ -4,6 +4,8 @@ import { NoPhysicalSolutionError, requirePositive } from './errors';
 import { specificEnergy } from './flow-properties';
 import { type Bracket, rootInBracket, signChangeBrackets } from './root-scan';
 import type { FlowSection } from './section';
+import { emptySample, sampleSection } from './section-sample';
+import { requireDepth } from './section-state';
 import type { CubicMetresPerSecond, Metres } from './units';
 import { GRAVITY } from './units';
 
@@ -42,8 +44,10 @@ export function isCriticalRoot(section: FlowSection, y: Metres, discharge: Cubic
  */
 export function criticalResidual(section: FlowSection, discharge: CubicMetresPerSecond, momentumOnly = false): (y: Metres) => number {
   const rootGravity = Math.sqrt(GRAVITY);
+  const sample = emptySample();
   return (y) => {
-    const state = section.stateAtDepth(y);
+    requireDepth(y);
+    const state = sampleSection(section, y, sample);
     const alpha = momentumOnly ? 1 : state.energyCoefficient;
     return rootGravity * state.area ** 1.5 - discharge * Math.sqrt(alpha * state.topWidth);
   };

@@ -18,7 +18,19 @@ export function hasBreakpoints(section: FlowSection): section is FlowSection & {
  * Ascending depths in (from, to] for scanning a finite section: a geometric run near `from` (shallow roots),
  * a uniform run, and every depth where the ground changes slope (where the top width may jump), with a point just above it.
  */
-export function finiteDepthGrid(section: FlowSection, from: Metres = 0, to: Metres = section.maxDepth): Metres[] {
+export function finiteDepthGrid(section: FlowSection, from: Metres = 0, to: Metres = section.maxDepth): readonly Metres[] {
+  // The whole-section grid is the same for every discharge; normal and critical depths of one section share it.
+  const whole = from === 0 && to === section.maxDepth;
+  const known = whole ? wholeSectionGrids.get(section) : undefined;
+  if (known !== undefined) return known;
+  const grid = depthGrid(section, from, to);
+  if (whole) wholeSectionGrids.set(section, grid);
+  return grid;
+}
+
+const wholeSectionGrids = new WeakMap<FlowSection, readonly Metres[]>();
+
+function depthGrid(section: FlowSection, from: Metres, to: Metres): Metres[] {
   const span = to - from;
   const depths: Metres[] = [to];
   for (let i = 1; i < UNIFORM_STEPS; i++) depths.push(from + (span * i) / UNIFORM_STEPS);

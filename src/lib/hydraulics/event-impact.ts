@@ -34,9 +34,9 @@ export function eventImpact(input: CaseInput, model: ReachModel, profile: GvfPro
   }
 
   const limits = checkLimits(profile.points, levels.levelAt, input.limits, 'limits');
-  const leastMargin = limits.length === 0 ? null : Math.min(...limits.map((l) => l.margin));
+  const leastMargin = limits.length === 0 ? null : limits.reduce((m, l) => Math.min(m, l.margin), Infinity);
   return {
-    afflux: { atControl: afflux[0]?.afflux ?? 0, max: Math.max(0, ...afflux.map((a) => a.afflux)), min: Math.min(0, ...afflux.map((a) => a.afflux)) },
+    afflux: { atControl: afflux[0]?.afflux ?? 0, max: afflux.reduce((m, a) => Math.max(m, a.afflux), 0), min: afflux.reduce((m, a) => Math.min(m, a.afflux), 0) },
     extent,
     inundation,
     limits,

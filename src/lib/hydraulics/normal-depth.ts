@@ -4,6 +4,8 @@ import { NoPhysicalSolutionError, requireFinite, requirePositive } from './error
 import { CIRCLE_PEAK_CONVEYANCE_DEPTH_RATIO } from './prismatic/circle-geometry';
 import { type Bracket, firstSignChange, rootInBracket } from './root-scan';
 import type { FlowSection } from './section';
+import { emptySample, sampleSection } from './section-sample';
+import { requireDepth } from './section-state';
 import type { CubicMetresPerSecond, Metres, Slope } from './units';
 
 export interface NormalDepthOptions {
@@ -13,8 +15,11 @@ export interface NormalDepthOptions {
   dischargeField?: string;
 }
 
+const scratch = emptySample();
+
 function uniformFlowCapacity(section: FlowSection, depth: Metres, bedSlope: Slope): CubicMetresPerSecond {
-  return section.stateAtDepth(depth).conveyance * Math.sqrt(bedSlope);
+  requireDepth(depth);
+  return sampleSection(section, depth, scratch).conveyance * Math.sqrt(bedSlope);
 }
 
 function capacityExceeded(field: string, discharge: number, capacity: number, detail: string): NoPhysicalSolutionError {

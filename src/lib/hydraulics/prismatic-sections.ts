@@ -2,9 +2,10 @@
 import { InvalidInputError, requireFinite, requirePositive } from './errors';
 import { manningConveyance } from './manning';
 import { circleGeometry } from './prismatic/circle-geometry';
-import { trapezoidGeometry } from './prismatic/trapezoid-geometry';
+import { type TrapezoidDimensions, trapezoidGeometry } from './prismatic/trapezoid-geometry';
 import { type PrismaticShapeSpec, validatedShape } from './prismatic/shape-spec';
 import type { FlowSection, SectionState } from './section';
+import type { SectionSample } from './section-sample';
 import { requireDepth, type SectionGeometry, sectionState } from './section-state';
 import type { Metres } from './units';
 
@@ -38,6 +39,7 @@ export function prismaticSection(spec: PrismaticShapeSpec, manningN: number, opt
   const geometryAt: (depth: Metres) => SectionGeometry =
     shape.kind === 'circular' ? (depth) => circleGeometry(shape.diameter, depth) : (depth) => trapezoidGeometry(shape.dimensions, depth);
   const maxDepth = shape.kind === 'circular' ? shape.diameter : Infinity;
+  const sampleInto = shape.kind === 'circular' ? circleSampler(shape.diameter, manningN, energyCoefficient) : trapezoidSampler(shape.dimensions, manningN, energyCoefficient);
 
   return {
     shape: shape.kind === 'circular' ? 'circular' : shape.shape,
@@ -50,5 +52,34 @@ export function prismaticSection(spec: PrismaticShapeSpec, manningN: number, opt
       const conveyance = manningConveyance(geometry.area, geometry.wettedPerimeter, manningN);
       return sectionState(geometry, conveyance, energyCoefficient, depth > maxDepth);
     },
+    sampleInto,
+  };
+}
+
+type Sampler = (depth: Metres, out: SectionSample) => void;
+
+/** trapezoidGeometry's A and T with its perimeter factor worked out once (same expressions, so the same numbers). */
+function trapezoidSampler(dimensions: TrapezoidDimensions, manningN: number, energyCoefficient: number): Sampler {
+  const { bottomWidth: b, sideSlopeLeft: zL, sideSlopeRight: zR } = dimensions;
+  const zSum = zL + zR;
+  const perimeterPerDepth = Math.hypot(1, zL) + Math.hypot(1, zR);
+  return (depth, out) => {
+    requireDepth(depth);
+    const area = b * depth + (zSum * depth * depth) / 2;
+    out.area = area;
+    out.topWidth = b + zSum * depth;
+    out.conveyance = manningConveyance(area, b + depth * perimeterPerDepth, manningN);
+    out.energyCoefficient = energyCoefficient;
+  };
+}
+
+function circleSampler(diameter: Metres, manningN: number, energyCoefficient: number): Sampler {
+  return (depth, out) => {
+    requireDepth(depth);
+    const geometry = circleGeometry(diameter, depth);
+    out.area = geometry.area;
+    out.topWidth = geometry.topWidth;
+    out.conveyance = manningConveyance(geometry.area, geometry.wettedPerimeter, manningN);
+    out.energyCoefficient = energyCoefficient;
   };
 }

@@ -23,11 +23,13 @@ export function sectionState(
   const { area, wettedPerimeter, topWidth } = geometry;
   const hydraulicRadius = wettedPerimeter > 0 ? area / wettedPerimeter : 0;
   const hydraulicDepth = area <= 0 ? 0 : topWidth > 0 ? area / topWidth : Infinity;
-  const values = [area, wettedPerimeter, topWidth, geometry.firstMoment, hydraulicRadius, conveyance, energyCoefficient];
-  if (!values.every(Number.isFinite) || Number.isNaN(hydraulicDepth)) {
+  const finite =
+    Number.isFinite(area) && Number.isFinite(wettedPerimeter) && Number.isFinite(topWidth) && Number.isFinite(geometry.firstMoment) &&
+    Number.isFinite(hydraulicRadius) && Number.isFinite(conveyance) && Number.isFinite(energyCoefficient);
+  if (!finite || Number.isNaN(hydraulicDepth)) {
     throw new InvalidInputError('depth', `${geometry.depth} m gives section properties beyond the range of double precision (check the units)`);
   }
-  return { ...geometry, hydraulicRadius, hydraulicDepth, conveyance, energyCoefficient, overtopped };
+  return { depth: geometry.depth, area, wettedPerimeter, topWidth, firstMoment: geometry.firstMoment, hydraulicRadius, hydraulicDepth, conveyance, energyCoefficient, overtopped };
 }
 
 /** A depth handed to stateAtDepth: finite and not negative. */

@@ -1,3 +1,4 @@
+import type { SectionSample } from './section-sample';
 import type { CubicMetres, CubicMetresPerSecond, Dimensionless, Metres, SquareMetres } from './units';
 
 /** Hydraulic properties of one cross-section at one water depth (SI). */
@@ -33,4 +34,6 @@ export interface FlowSection {
   /** Deepest depth the section can represent (Infinity for open prismatic shapes; the diameter of a circle; the lower end of a surveyed section). */
   readonly maxDepth: Metres;
   stateAtDepth(depth: Metres): SectionState;
+  /** The same area, top width, conveyance and α as stateAtDepth, written into `out` (optional; see section-sample.ts). */
+  sampleInto?(depth: Metres, out: SectionSample): void;
 }

@@ -1,9 +1,11 @@
 // A surveyed (station–elevation) cross-section as a FlowSection, with left overbank / channel / right overbank.
 import { InvalidInputError, requireFinite } from './errors';
 import { manningConveyance } from './manning';
-import { type GroundSegment, type WettedPiece, sumPieces, wettedPiece } from './polygon-clip';
+import type { GroundSegment } from './polygon-clip';
 import type { FlowSection, SectionState } from './section';
+import type { SectionSample } from './section-sample';
 import { requireDepth, sectionState } from './section-state';
+import { type PieceValues, SurveyTable } from './surveyed-table';
 import { type SurveyedSectionSpec, type ValidatedSurvey, validatedSurvey } from './surveyed-spec';
 import type { Metres } from './units';
 
@@ -35,7 +37,7 @@ function withPointAt(points: Point[], station: Metres): Point[] {
 }
 
 function highestGroundAt(points: Point[], station: Metres): Metres {
-  return Math.max(...points.filter((p) => p.station === station).map((p) => p.elevation));
+  return points.reduce((highest, p) => (p.station === station ? Math.max(highest, p.elevation) : highest), -Infinity);
 }
 
 function subAreaOf(segment: GroundSegment, banks: ValidatedSurvey['banks']): SubArea {
@@ -50,12 +52,14 @@ function subAreaOf(segment: GroundSegment, banks: ValidatedSurvey['banks']): Sub
  * with vᵢ = Kᵢ√S/Aᵢ and V = K√S/A, i.e. α = (Σ Kᵢ³/Aᵢ²) / (K³/A²).
  * Summed as Σ (vᵢ/V)³ (Aᵢ/A) so that a sliver of a sub-area cannot overflow or underflow.
  */
-function dividedEnergyCoefficient(parts: { area: number; conveyance: number }[]): number {
-  const area = parts.reduce((s, p) => s + p.area, 0);
-  const conveyance = parts.reduce((s, p) => s + p.conveyance, 0);
+function dividedEnergyCoefficient(parts: readonly PieceValues[], conveyances: readonly number[], area: number, conveyance: number): number {
   if (area <= 0 || conveyance <= 0) return 1;
   const meanRatio = conveyance / area;
-  const alpha = parts.reduce((s, p) => (p.area > 0 ? s + (p.conveyance / p.area / meanRatio) ** 3 * (p.area / area) : s), 0);
+  let alpha = 0;
+  for (let j = 0; j < parts.length; j++) {
+    const part = parts[j];
+    if (part.area > 0) alpha += (conveyances[j] / part.area / meanRatio) ** 3 * (part.area / area);
+  }
   return Number.isFinite(alpha) ? Math.max(1, alpha) : 1;
 }
 
@@ -70,21 +74,42 @@ export function surveyedSection(spec: SurveyedSectionSpec, opts: { field?: strin
   const segmentsBySubArea = Object.fromEntries(
     SUB_AREAS.map((subArea) => [subArea, segments.filter((s) => s.subArea === subArea).map((s) => s.segment)]),
   ) as Record<SubArea, GroundSegment[]>;
-  const invertLevel = Math.min(...ground.map((p) => p.elevation));
+  const invertLevel = ground.reduce((lowest, p) => Math.min(lowest, p.elevation), Infinity);
   const lowerEndLevel = Math.min(ground[0].elevation, ground[ground.length - 1].elevation);
   const maxDepth = lowerEndLevel - invertLevel;
   const breakpointDepths = [...new Set(ground.map((p) => p.elevation - invertLevel))].filter((d) => d > 0 && d <= maxDepth).sort((a, b) => a - b);
 
+  const table = new SurveyTable(SUB_AREAS.map((subArea) => segmentsBySubArea[subArea]));
+  const roughness = SUB_AREAS.map((subArea) => survey.roughness[subArea]);
+  // Scratch for one evaluation at a time: the engine is synchronous, and nothing here calls back out.
+  const parts: PieceValues[] = SUB_AREAS.map(() => ({ area: 0, wettedPerimeter: 0, topWidth: 0, firstMoment: 0 }));
+  const conveyances = [0, 0, 0];
+  const whole: PieceValues = { area: 0, wettedPerimeter: 0, topWidth: 0, firstMoment: 0 };
+
+  /** Fills parts, conveyances and whole at `level`; returns the total conveyance. */
+  function evaluate(level: Metres): number {
+    const k = table.interval(level);
+    whole.area = whole.wettedPerimeter = whole.topWidth = whole.firstMoment = 0;
+    let conveyance = 0;
+    for (let j = 0; j < 3; j++) {
+      const part = parts[j];
+      table.fill(k, j, level, part);
+      conveyances[j] = manningConveyance(part.area, part.wettedPerimeter, roughness[j]);
+      conveyance += conveyances[j];
+      whole.area += part.area;
+      whole.wettedPerimeter += part.wettedPerimeter;
+      whole.topWidth += part.topWidth;
+      whole.firstMoment += part.firstMoment;
+    }
+    return conveyance;
+  }
+
   function stateAtLevel(level: Metres): SectionState {
     requireFinite(level, 'level');
     if (level < invertLevel) throw new InvalidInputError('level', `must not be below the lowest ground point (${invertLevel} m)`);
-    const parts = SUB_AREAS.map((subArea) => {
-      const piece: WettedPiece = sumPieces(segmentsBySubArea[subArea].map((segment) => wettedPiece(segment, level)));
-      return { ...piece, conveyance: manningConveyance(piece.area, piece.wettedPerimeter, survey.roughness[subArea]) };
-    });
-    const whole = sumPieces(parts);
-    const conveyance = parts.reduce((sum, part) => sum + part.conveyance, 0);
-    return sectionState({ depth: level - invertLevel, ...whole }, conveyance, dividedEnergyCoefficient(parts), level > lowerEndLevel);
+    const conveyance = evaluate(level);
+    const alpha = dividedEnergyCoefficient(parts, conveyances, whole.area, conveyance);
+    return sectionState({ depth: level - invertLevel, ...whole }, conveyance, alpha, level > lowerEndLevel);
   }
 
   return {
@@ -98,6 +123,14 @@ export function surveyedSection(spec: SurveyedSectionSpec, opts: { field?: strin
     stateAtDepth(depth: Metres): SectionState {
       requireDepth(depth);
       return { ...stateAtLevel(invertLevel + depth), depth };
+    },
+    sampleInto(depth: Metres, out: SectionSample): void {
+      requireDepth(depth);
+      const conveyance = evaluate(invertLevel + depth);
+      out.area = whole.area;
+      out.topWidth = whole.topWidth;
+      out.conveyance = conveyance;
+      out.energyCoefficient = dividedEnergyCoefficient(parts, conveyances, whole.area, conveyance);
     },
   };
 }

@@ -51,7 +51,7 @@ function breakpoints(from: Metres, to: Metres, ...profiles: readonly (readonly P
 }
 
 function flooding(points: ProfilePoint[], groundAt: ((d: Metres) => Metres) | null): ParcelFlooding | null {
-  const maxWaterLevel = Math.max(...points.map((p) => p.waterLevel));
+  const maxWaterLevel = points.reduce((m, p) => Math.max(m, p.waterLevel), -Infinity);
   if (!groundAt) return null;
   const wet = inundation(points, groundAt);
   return { inundatedLength: wet.totalLength, maxDepth: wet.maxDepth, maxWaterLevel };

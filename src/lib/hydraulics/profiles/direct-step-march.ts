@@ -1,11 +1,10 @@
 // One pass of the direct step method: from the control upstream through a given sequence of depths.
 import { EngineError } from '../errors';
-import { frictionSlope, specificEnergy } from '../flow-properties';
 import type { FlowSection } from '../section';
 import { brentRoot } from '../solvers';
 import type { CubicMetresPerSecond, Metres, Slope } from '../units';
 import type { DepthSequence } from './depth-grid';
-import { profilePointAt } from './point-state';
+import { MarchTable } from './march-table';
 import type { ProfilePoint, ProfileStop } from './profile-point';
 
 export interface DirectStepReach {
@@ -24,7 +23,8 @@ export interface MarchLimits {
 }
 
 export interface MarchResult {
-  points: ProfilePoint[];
+  /** The computed nodes, control first. */
+  table: MarchTable;
   /** Null when maxSteps ran out before anything stopped the profile. */
   stoppedBy: ProfileStop | null;
   /** Depth steps taken, the partial last one included. */
@@ -32,20 +32,13 @@ export interface MarchResult {
 }
 
 /**
- * Distance upstream covered between depths yDown and yUp:
+ * Distance upstream covered between nodes `down` and `up`:
  * Δx = (E_down − E_up)/(S₀ − S̄f), S̄f the mean of the friction slopes at the two ends
  * (Chow, Open-Channel Hydraulics, 1959, §10-3, direct step method). Chow measures x downstream; going upstream
  * the roles of the two ends swap, which is why E_down comes first here.
  */
-function stepLength(reach: DirectStepReach, yDown: Metres, yUp: Metres): Metres {
-  const { section, discharge, bedSlope } = reach;
-  const energyDrop = specificEnergy(section, yDown, discharge) - specificEnergy(section, yUp, discharge);
-  const meanFriction = (frictionSlope(section, yDown, discharge) + frictionSlope(section, yUp, discharge)) / 2;
-  return energyDrop / (bedSlope - meanFriction);
-}
-
-function pointAt(reach: DirectStepReach, depth: Metres, distance: Metres): ProfilePoint {
-  return profilePointAt(reach.section, reach.discharge, depth, distance, reach.bedLevelAtControl + reach.bedSlope * distance);
+export function stepLength(table: MarchTable, bedSlope: Slope, down: number, up: number): Metres {
+  return (table.energy[down] - table.energy[up]) / (bedSlope - (table.friction[down] + table.friction[up]) / 2);
 }
 
 function passes(depth: Metres, limit: Metres, rising: boolean): boolean {
@@ -54,36 +47,62 @@ function passes(depth: Metres, limit: Metres, rising: boolean): boolean {
 
 /** Marches until the reach end, the end depth, the top of the section, or maxSteps — whichever comes first. */
 export function directStepMarch(reach: DirectStepReach, depths: DepthSequence, limits: MarchLimits): MarchResult {
+  const table = new MarchTable(reach.section, reach.discharge);
   const start = depths(0);
-  const points: ProfilePoint[] = [pointAt(reach, start, 0)];
+  table.evaluate(0, start);
+  table.distance[0] = 0;
+  let last = 0;
   const rising = depths(1) > start;
   for (let k = 1; k <= limits.maxSteps; k++) {
-    const previous = points[points.length - 1];
     let depth = depths(k);
     let stop: ProfileStop | null = null;
     if (limits.endDepth !== null && passes(depth, limits.endDepth, rising)) [depth, stop] = [limits.endDepth, limits.endsBy];
     if (rising && depth >= reach.section.maxDepth) [depth, stop] = [reach.section.maxDepth, 'section-overtopped'];
-    if (depth === previous.depth && stop === null) continue;
-    const length = stepLength(reach, previous.depth, depth);
+    if (depth === table.depth[last] && stop === null) continue;
+    const next = last + 1;
+    table.evaluate(next, depth);
+    const length = stepLength(table, reach.bedSlope, last, next);
     if (!(length > 0) || !Number.isFinite(length)) {
-      throw new EngineError(`profile: the direct step from ${previous.depth} m to ${depth} m gave no forward distance`, 'profile', 'no-convergence');
+      throw new EngineError(`profile: the direct step from ${table.depth[last]} m to ${depth} m gave no forward distance`, 'profile', 'no-convergence');
     }
-    const distance = previous.distanceUpstream + length;
+    const distance = table.distance[last] + length;
     if (distance >= reach.reachLength) {
-      points.push(pointAt(reach, depthAtReachEnd(reach, previous, depth), reach.reachLength));
-      return { points, stoppedBy: 'reach-end', stepsTaken: k };
+      landOnReachEnd(reach, table, last, depth);
+      return { table, stoppedBy: 'reach-end', stepsTaken: k };
     }
-    points.push(pointAt(reach, depth, distance));
-    if (stop !== null) return { points, stoppedBy: stop, stepsTaken: k };
+    table.distance[next] = distance;
+    table.count = next + 1;
+    last = next;
+    if (stop !== null) return { table, stoppedBy: stop, stepsTaken: k };
   }
-  return { points, stoppedBy: null, stepsTaken: limits.maxSteps };
+  table.count = last + 1;
+  return { table, stoppedBy: null, stepsTaken: limits.maxSteps };
 }
 
-/** The depth within the last step at which the same direct-step relation lands exactly on the reach end. */
-function depthAtReachEnd(reach: DirectStepReach, from: ProfilePoint, stepDepth: Metres): Metres {
-  const remaining = reach.reachLength - from.distanceUpstream;
-  if (remaining <= 0) return from.depth;
-  const shortfall = (y: Metres) => (y === from.depth ? -remaining : stepLength(reach, from.depth, y) - remaining);
-  const [lo, hi] = from.depth < stepDepth ? [from.depth, stepDepth] : [stepDepth, from.depth];
-  return brentRoot(shortfall, lo, hi, { tolerance: 1e-12 * hi, field: 'profile' });
+/** The last node: the depth within the last step at which the same direct-step relation lands exactly on the reach end. */
+function landOnReachEnd(reach: DirectStepReach, table: MarchTable, from: number, stepDepth: Metres): void {
+  const slot = from + 1;
+  const fromDepth = table.depth[from];
+  const remaining = reach.reachLength - table.distance[from];
+  let depth = fromDepth;
+  if (remaining > 0) {
+    const shortfall = (y: Metres) => {
+      if (y === fromDepth) return -remaining;
+      table.evaluate(slot, y);
+      return stepLength(table, reach.bedSlope, from, slot) - remaining;
+    };
+    const [lo, hi] = fromDepth < stepDepth ? [fromDepth, stepDepth] : [stepDepth, fromDepth];
+    depth = brentRoot(shortfall, lo, hi, { tolerance: 1e-12 * hi, field: 'profile' });
+  }
+  table.evaluate(slot, depth);
+  table.distance[slot] = reach.reachLength;
+  table.count = slot + 1;
+}
+
+/** The march's nodes as reported profile points; the bed rises upstream at the bed slope. */
+export function marchPoints(reach: DirectStepReach, march: MarchResult): ProfilePoint[] {
+  const { table } = march;
+  const points: ProfilePoint[] = new Array(table.count);
+  for (let i = 0; i < table.count; i++) points[i] = table.point(i, reach.bedLevelAtControl + reach.bedSlope * table.distance[i]);
+  return points;
 }

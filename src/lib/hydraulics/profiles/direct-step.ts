@@ -4,12 +4,13 @@ import { EngineError, InvalidInputError, requireFinite, requirePositive } from '
 import type { FlowSection } from '../section';
 import type { CubicMetresPerSecond, Metres, Slope } from '../units';
 import { type DepthSequence, geometricDepths, proportionalDepths } from './depth-grid';
-import { type DirectStepReach, type MarchResult, directStepMarch } from './direct-step-march';
+import { type DirectStepReach, type MarchResult, directStepMarch, marchPoints } from './direct-step-march';
+import { convergedMarch, fixedResolutionMarch } from './march-refinement';
 import { odeSelfCheck } from './ode-self-check';
 import { profilePointAt } from './point-state';
 import type { GvfProfile, ProfileRun } from './profile-point';
 import { type BackwaterRegime, backwaterRegime } from './profile-regime';
-import { type RefinementOptions, convergedProfile, fixedResolutionProfile } from './step-refinement';
+import type { RefinementOptions } from './step-refinement';
 import { jumpReport } from './hydraulic-jump';
 
 export interface DirectStepInput {
@@ -50,15 +51,16 @@ function runOnce(reach: DirectStepReach, regime: BackwaterRegime, steps: number)
   if (march === null || march.stoppedBy === null) throw new EngineError('profile: the depth range never reached the end of the reach', 'profile', 'no-convergence');
   if (march.stoppedBy !== 'reach-end' || march.stepsTaken >= steps) return march;
   // The reach ended part-way through the depth range: spread all the steps over the depths actually reached.
-  const depthAtEnd = march.points[march.points.length - 1].depth;
+  const depthAtEnd = march.table.depth[march.table.count - 1];
   const refined = directStepMarch(reach, sequence(depthAtEnd), { ...limits, maxSteps: 4 * steps + 16 });
   return refined.stoppedBy === null ? march : refined;
 }
 
 function asRun(reach: DirectStepReach, regime: BackwaterRegime, march: MarchResult): ProfileRun {
-  const { jump, warnings } = jumpReport(regime, march.stoppedBy === 'hydraulic-jump' ? march.points[march.points.length - 1].distanceUpstream : null);
+  const points = marchPoints(reach, march);
+  const { jump, warnings } = jumpReport(regime, march.stoppedBy === 'hydraulic-jump' ? points[points.length - 1].distanceUpstream : null);
   if (march.stoppedBy === 'section-overtopped') warnings.push('the water reaches the top of the section before the profile ends; the profile stops there');
-  return { points: march.points, stoppedBy: march.stoppedBy ?? 'reach-end', profileType: regime.profileType, jump, warnings };
+  return { points, stoppedBy: march.stoppedBy ?? 'reach-end', profileType: regime.profileType, jump, warnings };
 }
 
 function validated(input: DirectStepInput): number {
@@ -87,9 +89,14 @@ export function directStepProfile(input: DirectStepInput): GvfProfile {
     const { jump, warnings } = jumpReport(regime, regime.endsBy === 'hydraulic-jump' ? 0 : null);
     return { points: [control], stoppedBy: regime.endsBy ?? 'reach-end', profileType: regime.profileType, jump, refinement: { stepsUsed: 0, extentChangeOnHalving: 0, converged: true }, selfCheck: null, warnings };
   }
-  const compute = (steps: number) => asRun(reach, regime, runOnce(reach, regime, Math.max(1, Math.round(steps))));
-  const { run, refinement } =
-    input.depthSteps === undefined ? convergedProfile(compute, input.refinement) : fixedResolutionProfile(compute, input.depthSteps, input.refinement);
+  const compute = (steps: number) => runOnce(reach, regime, Math.max(1, Math.round(steps)));
+  const refined =
+    input.depthSteps === undefined
+      ? convergedMarch(compute, { ...input.refinement, bedSlope: input.bedSlope, reachLength: input.reachLength })
+      : fixedResolutionMarch(compute, input.depthSteps, input.refinement);
+  const run = asRun(reach, regime, refined.march);
+  if (refined.warning !== null) run.warnings.push(refined.warning);
+  const refinement = { stepsUsed: run.points.length - 1, extentChangeOnHalving: refined.change.extentChange, converged: refined.converged };
   const selfCheck = input.skipSelfCheck ? null : odeSelfCheck({ section: input.section, discharge: input.discharge, bedSlope: input.bedSlope, points: run.points });
   const warnings = [...run.warnings, ...(selfCheck?.warnings ?? [])];
   return { ...run, refinement, selfCheck: selfCheck?.report ?? null, warnings };

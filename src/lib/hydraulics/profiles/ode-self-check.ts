@@ -1,9 +1,11 @@
 // An independent check of a prismatic profile: the GVF equation integrated by an extrapolation ODE solver.
 import { Solver } from './odex-solver';
-import { froudeNumber, frictionSlope } from '../flow-properties';
+import { InvalidInputError } from '../errors';
+import { wettedState } from '../flow-properties';
 import type { FlowSection } from '../section';
 import { brentRoot } from '../solvers';
 import type { CubicMetresPerSecond, Metres, Slope } from '../units';
+import { GRAVITY } from '../units';
 import type { ProfilePoint, SelfCheckReport } from './profile-point';
 
 export const SELF_CHECK_METHOD = 'odex (Gragg–Bulirsch–Stoer extrapolation) on dx/dy = −(1 − Fr²)/(S₀ − Sf), x upstream';
@@ -19,8 +21,13 @@ const MAX_SOLVER_STEPS = 2_000;
  * normal depth, the only place where dx/dy is singular.
  */
 export function distancePerDepth(section: FlowSection, discharge: CubicMetresPerSecond, bedSlope: Slope, depth: Metres): number {
-  const froude = froudeNumber(section, depth, discharge);
-  return -(1 - froude * froude) / (bedSlope - frictionSlope(section, depth, discharge));
+  const state = wettedState(section, depth, discharge);
+  // Fr² = αQ²T/(gA³) and Sf = (Q/K)², as froudeNumber and frictionSlope in flow-properties.ts, from one state.
+  const velocity = discharge / state.area;
+  const froude = velocity * Math.sqrt((state.energyCoefficient * state.topWidth) / (GRAVITY * state.area));
+  const friction = (discharge / state.conveyance) ** 2;
+  if (!Number.isFinite(froude) || !Number.isFinite(friction)) throw new InvalidInputError('discharge', 'is out of range for this section (the result overflows)');
+  return -(1 - froude * froude) / (bedSlope - friction);
 }
 
 /** x at each point's depth from one odex integration, sampled with its dense output; null if the solver gave up. */

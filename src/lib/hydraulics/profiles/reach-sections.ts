@@ -73,7 +73,7 @@ export function stationBetween(a: ReachStation, b: ReachStation, weight: number)
  * section again between stations that share one, interpolated ground between surveyed ones. Stations that
  * differ without surveys cannot be interpolated; they are left as they are and a warning says so.
  */
-export function refinedReach(reach: readonly ReachStation[], maxSpacing: Metres): { stations: ReachStation[]; warnings: string[] } {
+export function refinedReach(reach: readonly ReachStation[], maxSpacing: Metres, between: typeof stationBetween = stationBetween): { stations: ReachStation[]; warnings: string[] } {
   requirePositive(maxSpacing, 'maxSpacing');
   const stations: ReachStation[] = [reach[0]];
   const warnings: string[] = [];
@@ -83,8 +83,27 @@ export function refinedReach(reach: readonly ReachStation[], maxSpacing: Metres)
     const pieces = Math.ceil((b.distanceUpstream - a.distanceUpstream) / maxSpacing - 1e-9);
     const interpolable = canInterpolate(a, b);
     if (pieces > 1 && !interpolable) warnings.push(`no sections interpolated between ${a.distanceUpstream} m and ${b.distanceUpstream} m: they carry no survey`);
-    if (interpolable) for (let k = 1; k < pieces; k++) stations.push(stationBetween(a, b, k / pieces));
+    if (interpolable) for (let k = 1; k < pieces; k++) stations.push(between(a, b, k / pieces));
     stations.push(b);
   }
   return { stations, warnings };
+}
+
+/**
+ * stationBetween, remembering each station it makes. Why: halving the spacing puts a station at every place the
+ * coarser spacing had one (k/n = 2k/2n exactly), and building a surveyed section, with its critical depth, is
+ * most of the cost of a step; one refinement reuses them instead of building them again.
+ */
+export function rememberedStationsBetween(): typeof stationBetween {
+  const known = new Map<ReachStation, Map<number, ReachStation>>();
+  return (a, b, weight) => {
+    let fromA = known.get(a);
+    if (fromA === undefined) known.set(a, (fromA = new Map()));
+    let station = fromA.get(weight);
+    if (station === undefined) {
+      station = stationBetween(a, b, weight);
+      fromA.set(weight, station);
+    }
+    return station;
+  };
 }

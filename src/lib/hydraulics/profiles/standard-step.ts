@@ -8,7 +8,7 @@ import { profilePointAt } from './point-state';
 import type { GvfProfile, ProfileRun } from './profile-point';
 import { backwaterRegime } from './profile-regime';
 import { isPrismaticReach, meanBedSlope } from './reach-geometry';
-import { type ReachStation, refinedReach } from './reach-sections';
+import { type ReachStation, refinedReach, rememberedStationsBetween } from './reach-sections';
 import { type StandardStepPass, rememberedJumpDepths, standardStepMarch } from './standard-step-march';
 import { type RefinementOptions, convergedProfile, fixedResolutionProfile } from './step-refinement';
 import { jumpReport } from './hydraulic-jump';
@@ -85,13 +85,14 @@ export function standardStepProfile(input: StandardStepInput): GvfProfile {
   }
 
   const jumpDepthAt = rememberedJumpDepths(input.discharge);
+  const between = rememberedStationsBetween();
   const compute = (resolution: number): ProfileRun => {
-    const { stations, warnings } = refinedReach(input.reach, reachLength / resolution);
+    const { stations, warnings } = refinedReach(input.reach, reachLength / resolution, between);
     const pass: StandardStepPass = { stations, controlDepth: regime.controlDepth, settings, normalDepthTolerance: tolerance, normalDepthAt, profileType: regime.profileType, jumpDepthAt };
     const run = standardStepMarch(pass);
     return { ...run, warnings: [...warnings, ...run.warnings] };
   };
-  const widestGap = Math.max(...input.reach.slice(1).map((s, i) => s.distanceUpstream - input.reach[i].distanceUpstream));
+  const widestGap = input.reach.reduce((widest, s, i) => (i === 0 ? widest : Math.max(widest, s.distanceUpstream - input.reach[i - 1].distanceUpstream)), 0);
   const initialResolution = Math.max(16, reachLength / widestGap);
   const { run, refinement } =
     input.maxSpacing === undefined

@@ -1,6 +1,9 @@
 import { InvalidInputError, NoPhysicalSolutionError } from '../errors';
 import type { FlowSection } from '../section';
+import { emptySample, sampleSection } from '../section-sample';
 import { GRAVITY, type CubicMetresPerSecond, type Metres, type MetresPerSecond } from '../units';
+
+const scratch = emptySample();
 
 export interface ApproachState {
   velocity: MetresPerSecond;
@@ -21,7 +24,9 @@ export function approachState(
   energyCoefficient: number | undefined,
   field: string,
 ): ApproachState {
-  const state = approach.stateAtDepth(sillHeight + head);
+  const depth = sillHeight + head;
+  // The weir head is solved by iteration on this; the area and α are all it needs of the section.
+  const state = sampleSection(approach, depth, scratch);
   if (!(state.area > 0)) {
     throw new InvalidInputError(`${field}.sillHeight`, 'the approach section holds no water at the crest level; the sill must stand above the channel bed');
   }
@@ -31,5 +36,5 @@ export function approachState(
   if (!Number.isFinite(velocityHead)) {
     throw new NoPhysicalSolutionError(field, 'approach-too-small', 'the approach section at the crest is too small to carry the flow: check the sill height and the discharge');
   }
-  return { velocity, velocityHead, overtopped: state.overtopped };
+  return { velocity, velocityHead, overtopped: depth > approach.maxDepth };
 }

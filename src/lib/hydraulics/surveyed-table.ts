@@ -1,0 +1,112 @@
+// A surveyed section's wetted geometry tabulated once against the water level, exactly, for every sub-area.
+import type { GroundSegment } from './polygon-clip';
+import type { Metres } from './units';
+
+/** Wetted area, perimeter, top width and first moment of one sub-area at one level (the same four as WettedPiece). */
+export interface PieceValues {
+  area: number;
+  wettedPerimeter: number;
+  topWidth: number;
+  firstMoment: number;
+}
+
+/**
+ * Between two consecutive ground elevations every piece of ground is dry, wholly wet, or wet over a fraction that
+ * grows linearly with the level, so the top width T and the wetted perimeter P are linear in the level there, and
+ * A = ∫T dh and Aȳ = ∫A dh (the first moment about the surface grows by the area) are its exact integrals:
+ * A(e + s) = A + T s + T′ s²/2 and Aȳ(e + s) = Aȳ + A s + T s²/2 + T′ s³/6 (by integration; the pieces are those of
+ * polygon-clip.ts). A flat piece of ground is dry with the water exactly at its level and wet above it, so T and P
+ * jump there: each interval (eₖ, eₖ₊₁] starts from the values just above eₖ. Why: a march asks for thousands of
+ * levels; clipping every piece of ground each time costs a pass over the survey, this a binary search.
+ */
+export class SurveyTable {
+  /** Distinct ground elevations, ascending. */
+  readonly levels: number[];
+  /** Per interval k (above levels[k]), per sub-area j at index 3k + j: the values just above levels[k] and the slopes. */
+  private readonly area: number[] = [];
+  private readonly moment: number[] = [];
+  private readonly width: number[] = [];
+  private readonly widthRate: number[] = [];
+  private readonly perimeter: number[] = [];
+  private readonly perimeterRate: number[] = [];
+
+  constructor(subAreas: readonly (readonly GroundSegment[])[]) {
+    const levels = [...new Set(subAreas.flatMap((segments) => segments.flatMap((s) => [s.z1, s.z2])))].sort((a, b) => a - b);
+    this.levels = levels;
+    const index = new Map(levels.map((level, k) => [level, k]));
+    const count = levels.length;
+    const negligibleRise = 1e-13 * Math.max(levels[count - 1] - levels[0], Math.abs(levels[0]), Math.abs(levels[count - 1]), Number.MIN_VALUE);
+    subAreas.forEach((segments, j) => {
+      const jumpT = new Array<number>(count).fill(0);
+      const jumpP = new Array<number>(count).fill(0);
+      const rateT = new Array<number>(count).fill(0);
+      const rateP = new Array<number>(count).fill(0);
+      for (const { x1, z1, x2, z2 } of segments) {
+        const [low, high] = z1 <= z2 ? [index.get(z1) as number, index.get(z2) as number] : [index.get(z2) as number, index.get(z1) as number];
+        const width = Math.abs(x2 - x1);
+        const rise = Math.abs(z2 - z1);
+        const length = Math.hypot(width, rise);
+        if (rise === 0) {
+          jumpT[low] += width;
+          jumpP[low] += width;
+        } else if (rise <= negligibleRise || !Number.isFinite(length / rise)) {
+          // A rise far below the precision of the levels (its slope would be all rounding): wholly wet just above its upper end.
+          jumpT[high] += width;
+          jumpP[high] += length;
+        } else {
+          // A vertical wall (width 0) only adds perimeter, one metre per metre of rise.
+          rateT[low] += width / rise;
+          rateT[high] -= width / rise;
+          rateP[low] += length / rise;
+          rateP[high] -= length / rise;
+        }
+      }
+      let [area, moment, width, perimeter, widthRate, perimeterRate] = [0, 0, 0, 0, 0, 0];
+      for (let k = 0; k < count; k++) {
+        width += jumpT[k];
+        perimeter += jumpP[k];
+        widthRate += rateT[k];
+        perimeterRate += rateP[k];
+        // Past the highest rise of this sub-area, rounding must not leave a slope behind.
+        if (k === count - 1) [widthRate, perimeterRate] = [0, 0];
+        const at = 3 * k + j;
+        [this.area[at], this.moment[at], this.width[at], this.widthRate[at], this.perimeter[at], this.perimeterRate[at]] = [area, moment, width, widthRate, perimeter, perimeterRate];
+        if (k === count - 1) break;
+        const s = levels[k + 1] - levels[k];
+        moment += area * s + (width * s * s) / 2 + (widthRate * s * s * s) / 6;
+        area += width * s + (widthRate * s * s) / 2;
+        width = Math.max(0, width + widthRate * s);
+        perimeter = Math.max(0, perimeter + perimeterRate * s);
+      }
+    });
+  }
+
+  /** The interval holding `level`: the last k with levels[k] < level, or −1 at or below the lowest ground. */
+  interval(level: Metres): number {
+    const levels = this.levels;
+    if (!(level > levels[0])) return -1;
+    let lo = 0;
+    let hi = levels.length;
+    while (hi - lo > 1) {
+      const mid = (lo + hi) >> 1;
+      if (levels[mid] < level) lo = mid;
+      else hi = mid;
+    }
+    return lo;
+  }
+
+  /** Sub-area j's values at `level` inside interval k (from `interval`), written into `out`. */
+  fill(k: number, j: number, level: Metres, out: PieceValues): void {
+    if (k < 0) {
+      out.area = out.wettedPerimeter = out.topWidth = out.firstMoment = 0;
+      return;
+    }
+    const at = 3 * k + j;
+    const s = level - this.levels[k];
+    const [area, width, widthRate] = [this.area[at], this.width[at], this.widthRate[at]];
+    out.area = area + width * s + (widthRate * s * s) / 2;
+    out.topWidth = width + widthRate * s;
+    out.wettedPerimeter = this.perimeter[at] + this.perimeterRate[at] * s;
+    out.firstMoment = this.moment[at] + area * s + (width * s * s) / 2 + (widthRate * s * s * s) / 6;
+  }
+}
