@@ -59,7 +59,7 @@ describe('the engine runs off the request thread', () => {
 
     expect(tooManyResponse.status).toBe(400);
     const refused = await tooManyResponse.json();
-    expect(refused.issues).toContainEqual({ path: 'events', message: `must list at most ${MAX_EVENTS} flood events per case (this one has 300): reduce them to ${MAX_EVENTS} or fewer` });
+    expect(refused.issues).toContainEqual({ path: 'events', message: `Flood events are too many: at most ${MAX_EVENTS} per case (this one has 300); reduce them to ${MAX_EVENTS} or fewer` });
 
     for (const response of [mostEventsResponse, longSurveyResponse]) {
       expect([200, 422]).toContain(response.status);

@@ -22,8 +22,8 @@ export const finite = (unit?: string) => z.number({ error: missingOr(unit ? `a n
 export const positive = (unit?: string) => finite(unit).positive({ error: `must be greater than 0${unit ? ` ${unit}` : ''}` });
 export const nonNegative = (unit?: string) => finite(unit).nonnegative({ error: `must be 0${unit ? ` ${unit}` : ''} or more` });
 /** A list too long for the engine: the message says how many are allowed and how many were sent. */
-export const atMost = (max: number, what: string) => (issue: { input: unknown }) =>
-  `must list at most ${max} ${what}${Array.isArray(issue.input) ? ` (this one has ${issue.input.length}): reduce them to ${max} or fewer` : ''}`;
+export const atMost = (max: number, per: string) => (issue: { input: unknown }) =>
+  `are too many: at most ${max} ${per}${Array.isArray(issue.input) ? ` (this one has ${issue.input.length}); reduce them to ${max} or fewer` : ''}`;
 export const text = (what: string) => singleLineText(what, { missing: 'is required' }).min(1, { error: `must not be empty (${what})` });
 
 function sectionSchema(u: UnitLabels) {
@@ -79,7 +79,7 @@ export function surveyedReachSchema(u: UnitLabels) {
   const section = z.object({
     distanceUpstream: nonNegative(u.length),
     points: z.array(point, { error: missingOr('a list of [station, elevation] points') }).min(3, { error: 'must list at least three [station, elevation] points' })
-      .max(MAX_POINTS_PER_SECTION, { error: atMost(MAX_POINTS_PER_SECTION, 'points per cross-section') }),
+      .max(MAX_POINTS_PER_SECTION, { error: atMost(MAX_POINTS_PER_SECTION, 'per cross-section') }),
     manningN: roughness,
     bankStations: z.tuple([finite(u.length), finite(u.length)], { error: 'must be a [left, right] pair of stations' }).optional(),
     bankLevel: finite(u.length).optional(),
@@ -89,7 +89,7 @@ export function surveyedReachSchema(u: UnitLabels) {
     sections: z
       .array(section, { error: missingOr('a list of cross-sections') })
       .min(2, { error: 'must list at least two cross-sections' })
-      .max(MAX_SURVEYED_SECTIONS, { error: atMost(MAX_SURVEYED_SECTIONS, 'surveyed cross-sections per reach') })
+      .max(MAX_SURVEYED_SECTIONS, { error: atMost(MAX_SURVEYED_SECTIONS, 'per reach') })
       .superRefine((sections, ctx) => {
         if (sections[0] && sections[0].distanceUpstream !== 0) {
           ctx.addIssue({ code: 'custom', path: [0, 'distanceUpstream'], message: 'must be 0: the first section is the control section' });
@@ -138,7 +138,7 @@ export function weirControlSchema(u: UnitLabels) {
       ratingTable: z
         .array(z.tuple([nonNegative(`level above the crest, ${u.length}`), nonNegative(u.discharge)], { error: 'must be a [level, discharge] pair' }))
         .min(2, { error: 'must list at least two [level, discharge] pairs' })
-        .max(MAX_RATING_TABLE_ROWS, { error: atMost(MAX_RATING_TABLE_ROWS, 'rows in the rating table') })
+        .max(MAX_RATING_TABLE_ROWS, { error: atMost(MAX_RATING_TABLE_ROWS, 'in one rating table') })
         .superRefine((rows, ctx) => {
           rows.forEach(([level, q], i) => {
             if (i > 0 && (level <= rows[i - 1][0] || q <= rows[i - 1][1])) {

@@ -34,7 +34,7 @@ function caseObject(units: CaseUnits) {
     units: z.literal(units),
     reach: z.discriminatedUnion('kind', [prismaticReachSchema(u), surveyedReachSchema(u)], { error: missingOr('"prismatic" or "surveyed"') }),
     events: z.array(eventSchema(u), { error: missingOr('a list of flood events') }).min(1, { error: 'must list at least one flood event' })
-      .max(MAX_EVENTS, { error: atMost(MAX_EVENTS, 'flood events per case') }),
+      .max(MAX_EVENTS, { error: atMost(MAX_EVENTS, 'per case') }),
     control: z.discriminatedUnion('type', [depthControlSchema(u), weirControlSchema(u)], { error: missingOr('"depth" or "weir"') }),
     existingControl: depthControlSchema(u).optional(),
     profile: z
@@ -59,7 +59,7 @@ function caseObject(units: CaseUnits) {
           freeboard: nonNegative(u.length).default(0),
         }),
       )
-      .max(MAX_LIMITS, { error: atMost(MAX_LIMITS, 'limits per case') })
+      .max(MAX_LIMITS, { error: atMost(MAX_LIMITS, 'per case') })
       .default([]),
     sizing: z
       .object({
