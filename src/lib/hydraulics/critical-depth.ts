@@ -49,7 +49,7 @@ export function criticalResidual(section: FlowSection, discharge: CubicMetresPer
     requireDepth(y);
     const state = sampleSection(section, y, sample);
     const alpha = momentumOnly ? 1 : state.energyCoefficient;
-    return rootGravity * state.area ** 1.5 - discharge * Math.sqrt(alpha * state.topWidth);
+    return rootGravity * state.area * Math.sqrt(state.area) - discharge * Math.sqrt(alpha * state.topWidth);
   };
 }
 

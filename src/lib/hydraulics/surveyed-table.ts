@@ -103,7 +103,9 @@ export class SurveyTable {
     }
     const at = 3 * k + j;
     const s = level - this.levels[k];
-    const [area, width, widthRate] = [this.area[at], this.width[at], this.widthRate[at]];
+    const area = this.area[at];
+    const width = this.width[at];
+    const widthRate = this.widthRate[at];
     out.area = area + width * s + (widthRate * s * s) / 2;
     out.topWidth = width + widthRate * s;
     out.wettedPerimeter = this.perimeter[at] + this.perimeterRate[at] * s;
