@@ -12,6 +12,8 @@ export interface RunOptions {
   manningFactor: number;
   dischargeFactor: number;
   skipSelfCheck: boolean;
+  /** Given, the events are evaluated largest flow first and only until one does not hold (a yes-or-no question). */
+  holds?: (event: EventResult) => boolean;
 }
 
 /** Evaluates every event of `input` (SI) with the options; the evaluator's own loop. */
@@ -92,17 +94,23 @@ export function crestSizing(input: CaseInput, run: CaseRunner): CaseResult['sizi
   const range = sizingRange(input, model, sizing.vary, sizing.increment);
   const minimumMargin = input.minimumMargin ?? 0;
   const percentages = input.sensitivity ?? DEFAULT_SENSITIVITY;
-  const holds = (events: EventResult[]) => events.every((e) => e.verdict === 'pass' && (e.leastMargin === null || e.leastMargin >= minimumMargin));
+  const eventHolds = (e: EventResult) => e.verdict === 'pass' && (e.leastMargin === null || e.leastMargin >= minimumMargin);
+  const holds = (events: EventResult[]) => events.every(eventHolds);
+  // A value that passes had every event evaluated; the governing one is read from that run, not run again.
+  const passingRuns = new Map<number, EventResult[]>();
   const passes = (value: number) => {
     const adjust = { [sizing.vary]: value };
-    if (!holds(run(input, { ...QUICK, adjust }))) return false;
+    const events = run(input, { ...QUICK, adjust, holds: eventHolds });
+    if (!holds(events)) return false;
+    passingRuns.set(value, events);
     if (!sizing.robust) return true;
     return PERTURBATIONS(percentages).every((p) =>
-      holds(run(input, { ...QUICK, adjust: { ...adjust, coefficientMultiplier: p.coefficientFactor }, manningFactor: p.manningFactor, dischargeFactor: p.dischargeFactor })),
+      holds(run(input, { ...QUICK, adjust: { ...adjust, coefficientMultiplier: p.coefficientFactor }, manningFactor: p.manningFactor, dischargeFactor: p.dischargeFactor, holds: eventHolds })),
     );
   };
   const result = sizeCrest({ passes, lower: range.lower, upper: range.upper, increment: sizing.increment, direction: sizing.vary === 'sillHeight' ? 'highest-passing' : 'lowest-passing' });
-  const governing = result.value === null ? null : leastMarginOf(run(input, { ...QUICK, adjust: { [sizing.vary]: result.value } }));
+  const governingRun = result.value === null ? null : (passingRuns.get(result.value) ?? run(input, { ...QUICK, adjust: { [sizing.vary]: result.value } }));
+  const governing = governingRun === null ? null : leastMarginOf(governingRun);
   const demands = [minimumMargin > 0 ? `a margin of at least ${(minimumMargin * 1000).toFixed(0)} mm` : null, sizing.robust ? 'every sensitivity run passing' : null].filter((d) => d !== null);
   const reason = `${result.reason}; ${range.why}${demands.length > 0 ? `; sized for ${demands.join(' and ')}` : ''}`;
   return { ...result, reason, vary: sizing.vary, lower: range.lower, upper: range.upper, searchedRange: range.why, robust: sizing.robust ?? false, governing };
@@ -116,7 +124,9 @@ export function caseSensitivity(input: CaseInput, events: readonly EventResult[]
   const designHead = events[index].control.weir?.designHead ?? undefined;
   const eventOnly: CaseInput = { ...input, events: [input.events[index]] };
   const runOne = (p: Perturbation) => {
-    const [event] = run(eventOnly, {
+    // The unperturbed run is the governing event itself, already evaluated with the same design head.
+    const unperturbed = p.manningFactor === 1 && p.dischargeFactor === 1 && p.coefficientFactor === 1;
+    const [event] = unperturbed ? [events[index]] : run(eventOnly, {
       adjust: { coefficientMultiplier: p.coefficientFactor, ...(designHead !== undefined ? { designHead } : {}) },
       manningFactor: p.manningFactor,
       dischargeFactor: p.dischargeFactor,

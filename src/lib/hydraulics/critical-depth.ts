@@ -49,7 +49,7 @@ export function criticalResidual(section: FlowSection, discharge: CubicMetresPer
     requireDepth(y);
     const state = sampleSection(section, y, sample);
     const alpha = momentumOnly ? 1 : state.energyCoefficient;
-    return rootGravity * state.area ** 1.5 - discharge * Math.sqrt(alpha * state.topWidth);
+    return rootGravity * state.area * Math.sqrt(state.area) - discharge * Math.sqrt(alpha * state.topWidth);
   };
 }
 
@@ -75,8 +75,13 @@ export function criticalDepths(section: FlowSection, discharge: CubicMetresPerSe
   const field = opts.field ?? 'reach.section';
   const dischargeField = opts.dischargeField ?? 'discharge';
   requirePositive(discharge, dischargeField);
-  const isRoot = (y: Metres) => isCriticalRoot(section, y, discharge, false);
-  const roots = residualRoots(section, criticalResidual(section, discharge), isRoot, dischargeField);
+  let known = criticalRoots.get(section);
+  if (known === undefined) criticalRoots.set(section, (known = new Map()));
+  let roots = known.get(discharge);
+  if (roots === undefined) {
+    const isRoot = (y: Metres) => isCriticalRoot(section, y, discharge, false);
+    known.set(discharge, (roots = residualRoots(section, criticalResidual(section, discharge), isRoot, dischargeField)));
+  }
   if (roots.length === 0) {
     throw new NoPhysicalSolutionError(
       field,
@@ -84,8 +89,15 @@ export function criticalDepths(section: FlowSection, discharge: CubicMetresPerSe
       `critical depth for ${discharge} m³/s lies above the top of the section (${section.maxDepth.toPrecision(4)} m deep): the flow would overtop it`,
     );
   }
-  return roots;
+  return [...roots];
 }
+
+/**
+ * Critical depths found, per section and discharge. Why: one event asks for the control section's critical depth for
+ * its regime, its weir and its profile; sections never change once built. An empty list (overtopped) is kept too:
+ * the error is raised afresh, with the caller's field names.
+ */
+const criticalRoots = new WeakMap<FlowSection, Map<CubicMetresPerSecond, readonly Metres[]>>();
 
 /** The critical depth; where a compound section has several, the one with the least specific energy. */
 export function criticalDepth(section: FlowSection, discharge: CubicMetresPerSecond, opts: CriticalDepthOptions = {}): Metres {

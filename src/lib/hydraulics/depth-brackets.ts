@@ -40,7 +40,11 @@ function depthGrid(section: FlowSection, from: Metres, to: Metres): Metres[] {
     const inside = section.breakpointDepths.filter((d) => d > from && d < to);
     depths.push(...inside, ...inside.map((d) => Math.min(to, d + span * SHALLOWEST_FRACTION)));
   }
-  return [...new Set(depths)].sort((a, b) => a - b);
+  // A typed array sorts numbers without a comparator call per comparison; equal neighbours are then dropped.
+  const sorted = Float64Array.from(depths).sort();
+  const distinct: Metres[] = [];
+  for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) distinct.push(sorted[i]);
+  return distinct;
 }
 
 /**

@@ -19,7 +19,17 @@ const runEvents: CaseRunner = (input, opts) => {
   const designDischarges = input.events.map((e) => e.discharge * (1 + (e.climateChangeAllowance ?? 0) / 100) * opts.dischargeFactor);
   const designHead = opts.adjust.designHead ?? defaultDesignHead(input.control, model.controlSection, Math.max(...designDischarges), opts.adjust);
   const adjust = { ...opts.adjust, ...(designHead !== undefined ? { designHead } : {}) };
-  return input.events.map((event, i) => evaluateEvent(event, i, { input, model, adjust, dischargeFactor: opts.dischargeFactor, skipSelfCheck: opts.skipSelfCheck }));
+  const evaluate = (i: number) => evaluateEvent(input.events[i], i, { input, model, adjust, dischargeFactor: opts.dischargeFactor, skipSelfCheck: opts.skipSelfCheck });
+  const holds = opts.holds;
+  if (holds === undefined) return input.events.map((_, i) => evaluate(i));
+  // The largest flow is the likeliest to fail, so it goes first; the rest are needed only if it holds.
+  const order = input.events.map((_, i) => i).sort((a, b) => designDischarges[b] - designDischarges[a] || a - b);
+  const done: EventResult[] = [];
+  for (const i of order) {
+    done[i] = evaluate(i);
+    if (!holds(done[i])) break;
+  }
+  return done.filter((e) => e !== undefined);
 };
 
 function governingEvent(events: readonly EventResult[]): CaseResult['governingEvent'] {

@@ -62,6 +62,21 @@ export function normalDepth(section: FlowSection, discharge: CubicMetresPerSecon
     const bed = bedSlope === 0 ? 'horizontal' : 'adverse';
     throw new NoPhysicalSolutionError(slopeField, 'no-normal-depth', `no normal depth: the bed is ${bed}, uniform flow cannot exist`);
   }
+  let known = normalDepths.get(section);
+  if (known === undefined) normalDepths.set(section, (known = new Map()));
+  const key = `${discharge} ${bedSlope}`;
+  let depth = known.get(key);
+  if (depth === undefined) known.set(key, (depth = solvedNormalDepth(section, discharge, bedSlope, dischargeField)));
+  return depth;
+}
+
+/**
+ * Normal depths found, per section and discharge and slope. Why: one event asks for the control section's normal
+ * depth for its regime, its profile and its levels without the scheme; sections never change once built.
+ */
+const normalDepths = new WeakMap<FlowSection, Map<string, Metres>>();
+
+function solvedNormalDepth(section: FlowSection, discharge: CubicMetresPerSecond, bedSlope: Slope, dischargeField: string): Metres {
   const residual = (y: Metres) => uniformFlowCapacity(section, y, bedSlope) - discharge;
   let bracket: Bracket | null;
   if (section.maxDepth === Infinity) bracket = openDepthBracket(residual, dischargeField);

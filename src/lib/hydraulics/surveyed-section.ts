@@ -58,7 +58,10 @@ function dividedEnergyCoefficient(parts: readonly PieceValues[], conveyances: re
   let alpha = 0;
   for (let j = 0; j < parts.length; j++) {
     const part = parts[j];
-    if (part.area > 0) alpha += (conveyances[j] / part.area / meanRatio) ** 3 * (part.area / area);
+    if (part.area > 0) {
+      const ratio = conveyances[j] / part.area / meanRatio;
+      alpha += ratio * ratio * ratio * (part.area / area);
+    }
   }
   return Number.isFinite(alpha) ? Math.max(1, alpha) : 1;
 }

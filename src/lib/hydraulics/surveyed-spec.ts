@@ -20,11 +20,16 @@ export interface ValidatedSurvey {
 function checkedPoints(points: unknown, field: string): { station: Metres; elevation: Metres }[] {
   if (!Array.isArray(points) || points.length < 3) throw new InvalidInputError(`${field}.points`, 'must list at least three [station, elevation] points');
   const checked = points.map((point: unknown, i) => {
-    const at = `${field}.points[${i}]`;
-    if (!Array.isArray(point) || point.length !== 2) throw new InvalidInputError(at, 'must be a [station, elevation] pair');
-    requireFinite(point[0], `${at}.station`);
-    requireFinite(point[1], `${at}.elevation`);
-    return { station: point[0] as number, elevation: point[1] as number };
+    // The field path is spelt out only for a point that fails: every interpolated section passes through here.
+    const valid = Array.isArray(point) && point.length === 2 && Number.isFinite(point[0]) && Number.isFinite(point[1]);
+    if (!valid) {
+      const at = `${field}.points[${i}]`;
+      if (!Array.isArray(point) || point.length !== 2) throw new InvalidInputError(at, 'must be a [station, elevation] pair');
+      requireFinite(point[0], `${at}.station`);
+      requireFinite(point[1], `${at}.elevation`);
+    }
+    const [station, elevation] = point as [number, number];
+    return { station, elevation };
   });
   checked.forEach((point, i) => {
     if (i > 0 && point.station < checked[i - 1].station) {

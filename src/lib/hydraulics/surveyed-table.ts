@@ -31,9 +31,15 @@ export class SurveyTable {
   private readonly perimeterRate: number[] = [];
 
   constructor(subAreas: readonly (readonly GroundSegment[])[]) {
-    const levels = [...new Set(subAreas.flatMap((segments) => segments.flatMap((s) => [s.z1, s.z2])))].sort((a, b) => a - b);
+    // Plain loops and a typed-array sort: a refined reach builds a table for every interpolated section.
+    const elevations: number[] = [];
+    for (const segments of subAreas) for (const s of segments) elevations.push(s.z1, s.z2);
+    const sorted = Float64Array.from(elevations).sort();
+    const levels: number[] = [];
+    for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) levels.push(sorted[i]);
     this.levels = levels;
-    const index = new Map(levels.map((level, k) => [level, k]));
+    const index = new Map<number, number>();
+    for (let k = 0; k < levels.length; k++) index.set(levels[k], k);
     const count = levels.length;
     const negligibleRise = 1e-13 * Math.max(levels[count - 1] - levels[0], Math.abs(levels[0]), Math.abs(levels[count - 1]), Number.MIN_VALUE);
     subAreas.forEach((segments, j) => {
@@ -42,7 +48,8 @@ export class SurveyTable {
       const rateT = new Array<number>(count).fill(0);
       const rateP = new Array<number>(count).fill(0);
       for (const { x1, z1, x2, z2 } of segments) {
-        const [low, high] = z1 <= z2 ? [index.get(z1) as number, index.get(z2) as number] : [index.get(z2) as number, index.get(z1) as number];
+        const low = index.get(z1 <= z2 ? z1 : z2) as number;
+        const high = index.get(z1 <= z2 ? z2 : z1) as number;
         const width = Math.abs(x2 - x1);
         const rise = Math.abs(z2 - z1);
         const length = Math.hypot(width, rise);
@@ -61,16 +68,26 @@ export class SurveyTable {
           rateP[high] -= length / rise;
         }
       }
-      let [area, moment, width, perimeter, widthRate, perimeterRate] = [0, 0, 0, 0, 0, 0];
+      let area = 0;
+      let moment = 0;
+      let width = 0;
+      let perimeter = 0;
+      let widthRate = 0;
+      let perimeterRate = 0;
       for (let k = 0; k < count; k++) {
         width += jumpT[k];
         perimeter += jumpP[k];
         widthRate += rateT[k];
         perimeterRate += rateP[k];
         // Past the highest rise of this sub-area, rounding must not leave a slope behind.
-        if (k === count - 1) [widthRate, perimeterRate] = [0, 0];
+        if (k === count - 1) widthRate = perimeterRate = 0;
         const at = 3 * k + j;
-        [this.area[at], this.moment[at], this.width[at], this.widthRate[at], this.perimeter[at], this.perimeterRate[at]] = [area, moment, width, widthRate, perimeter, perimeterRate];
+        this.area[at] = area;
+        this.moment[at] = moment;
+        this.width[at] = width;
+        this.widthRate[at] = widthRate;
+        this.perimeter[at] = perimeter;
+        this.perimeterRate[at] = perimeterRate;
         if (k === count - 1) break;
         const s = levels[k + 1] - levels[k];
         moment += area * s + (width * s * s) / 2 + (widthRate * s * s * s) / 6;
@@ -103,7 +120,9 @@ export class SurveyTable {
     }
     const at = 3 * k + j;
     const s = level - this.levels[k];
-    const [area, width, widthRate] = [this.area[at], this.width[at], this.widthRate[at]];
+    const area = this.area[at];
+    const width = this.width[at];
+    const widthRate = this.widthRate[at];
     out.area = area + width * s + (widthRate * s * s) / 2;
     out.topWidth = width + widthRate * s;
     out.wettedPerimeter = this.perimeter[at] + this.perimeterRate[at] * s;

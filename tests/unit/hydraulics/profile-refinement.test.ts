@@ -2,9 +2,9 @@ import { describe, expect, it } from 'vitest';
 import type { ProfilePoint, ProfileRun } from '@/lib/hydraulics/profiles/profile-point';
 import { convergedProfile, fixedResolutionProfile, halvingChange } from '@/lib/hydraulics/profiles/step-refinement';
 
-/** A synthetic run with `resolution` steps whose extent carries a second-order step error: L(1 + c/r²). */
-function syntheticRun(resolution: number, c = 1, extentTrue = 1000): ProfileRun {
-  const extent = extentTrue * (1 + c / (resolution * resolution));
+/** A synthetic run with `resolution` steps whose extent carries a step error of the given order: L(1 + c/r^order). */
+function syntheticRun(resolution: number, c = 1, extentTrue = 1000, order = 2): ProfileRun {
+  const extent = extentTrue * (1 + c / resolution ** order);
   const points: ProfilePoint[] = [];
   for (let i = 0; i <= resolution; i++) {
     const x = (extent * i) / resolution;
@@ -35,6 +35,25 @@ describe('convergedProfile', () => {
     const stuck = syntheticRun(4);
     const { refinement } = convergedProfile(() => stuck, { maxResolution: 64 });
     expect(refinement.converged).toBe(false);
+  });
+
+  it('with the method\'s order, takes a halving\'s change over 2^p − 1 as the finer run\'s error once the changes fall at that order', () => {
+    // L(1 + 3.5/r²): 16→32 changes 1.02 %, 32→64 0.256 % (a quarter: second order), whose error estimate 0.256/3 = 0.085 % is
+    // below 0.1 %, so it stops at 64 steps; on the bare change it needs 64→128 (0.064 %).
+    const withOrder = convergedProfile((r) => syntheticRun(r, 3.5), {}, 2);
+    const without = convergedProfile((r) => syntheticRun(r, 3.5));
+    expect(withOrder.refinement.stepsUsed).toBe(64);
+    expect(without.refinement.stepsUsed).toBe(128);
+    expect(withOrder.refinement.converged).toBe(true);
+  });
+
+  it('does not divide the change when the first halving has nothing to compare with, or the changes fall slower than the order', () => {
+    // L(1 + 0.1/r): changes halve on each halving (first order), so second-order arithmetic would be optimistic.
+    const firstOrder = (r: number) => syntheticRun(r, 0.1, 1000, 1);
+    expect(convergedProfile(firstOrder, {}, 2).refinement.stepsUsed).toBe(128);
+    expect(convergedProfile(firstOrder).refinement.stepsUsed).toBe(128);
+    // 16→32 is the first halving: 0.29 % is compared as it is, even with an order.
+    expect(convergedProfile((r) => syntheticRun(r, 1), { maxResolution: 32 }, 2).refinement.converged).toBe(false);
   });
 
   it('reports the change on one more halving for a fixed step count', () => {

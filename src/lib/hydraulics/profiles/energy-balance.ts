@@ -3,6 +3,8 @@ import { criticalDepth } from '../critical-depth';
 import { DEEPEST_OPEN_DEPTH } from '../depth-brackets';
 import { EngineError } from '../errors';
 import type { FlowSection, SectionState } from '../section';
+import { emptySample, sampleSection } from '../section-sample';
+import { requireDepth } from '../section-state';
 import { brentRoot, expandBracketUpward } from '../solvers';
 import type { CubicMetresPerSecond, Metres } from '../units';
 import { GRAVITY } from '../units';
@@ -22,7 +24,7 @@ export type BalanceResult =
   | { kind: 'section-overtopped' };
 
 /** αV²/2g with V = Q/A (Chow, Open-Channel Hydraulics, 1959, §2-7 — from memory). */
-function velocityHead(state: SectionState, discharge: CubicMetresPerSecond): Metres {
+function velocityHead(state: Pick<SectionState, 'energyCoefficient' | 'area'>, discharge: CubicMetresPerSecond): Metres {
   return (state.energyCoefficient * discharge * discharge) / (2 * GRAVITY * state.area * state.area);
 }
 
@@ -39,8 +41,11 @@ function balanceResidual(down: ReachStation, downDepth: Metres, up: ReachStation
   const downHead = velocityHead(downState, discharge);
   const downEnergy = down.bedLevel + downDepth + downHead;
   const length = up.distanceUpstream - down.distanceUpstream;
+  // One reused record per balance: Brent asks for a dozen depths, and a full state per depth is garbage at once.
+  const sample = emptySample();
   return (depth) => {
-    const state = up.section.stateAtDepth(depth);
+    requireDepth(depth);
+    const state = sampleSection(up.section, depth, sample);
     const upHead = velocityHead(state, discharge);
     const friction = length * meanFrictionSlope(settings.frictionAveraging, discharge, downState.conveyance, state.conveyance);
     const coefficient = downHead < upHead ? settings.expansionCoefficient : settings.contractionCoefficient;

@@ -40,18 +40,40 @@ export interface RefinedRun {
   refinement: RefinementReport;
 }
 
+/** Below this ratio of successive changes a halving is not behaving as a method of the stated order. */
+const LEAST_ORDER_RATIO = 3;
+
+function fallsAtOrder(earlier: number, latest: number): boolean {
+  return latest === 0 || earlier / latest >= LEAST_ORDER_RATIO;
+}
+
+/**
+ * What a halving's change is divided by to estimate the finer profile's own error. For a method of order p the
+ * error of the finer run is about change/(2^p − 1) (Richardson and Gaunt, The deferred approach to the limit,
+ * Philosophical Transactions A, 1927 — from memory). It is used only once an earlier halving has shown both the
+ * extent and the level changes falling at close to that order (a ratio of at least 3, against 4 for p = 2);
+ * otherwise the change itself is the estimate, as without an order.
+ */
+function errorDivisor(order: number | undefined, earlier: HalvingChange | null, latest: HalvingChange): number {
+  if (order === undefined || earlier === null || !(latest.extentChange > 0 || latest.levelChange > 0)) return 1;
+  const falling = fallsAtOrder(earlier.extentChange, latest.extentChange) && fallsAtOrder(earlier.levelChange, latest.levelChange);
+  return falling ? 2 ** order - 1 : 1;
+}
+
 /**
  * Doubles the resolution (halves the step) until the extent changes by less than extentTolerance and the
  * levels by less than levelTolerance, or maxResolution is reached (then `converged` is false and a warning is added).
- * Only a halving that puts more steps into the profile counts.
+ * Only a halving that puts more steps into the profile counts. With `order`, the method's order of accuracy, the
+ * change is first turned into an estimate of the finer profile's own error (see errorDivisor).
  */
-export function convergedProfile(compute: (resolution: number) => ProfileRun, opts: RefinementOptions = {}): RefinedRun {
+export function convergedProfile(compute: (resolution: number) => ProfileRun, opts: RefinementOptions = {}, order?: number): RefinedRun {
   const maxResolution = opts.maxResolution ?? 2 ** 14;
   const extentTolerance = opts.extentTolerance ?? 0.001;
   const levelTolerance = opts.levelTolerance ?? 0.001;
   let resolution = Math.min(opts.initialResolution ?? 16, maxResolution);
   let previous = compute(resolution);
   let change: HalvingChange = { extentChange: 1, levelChange: Infinity };
+  let earlier: HalvingChange | null = null;
   while (resolution * 2 <= maxResolution) {
     resolution *= 2;
     const next = compute(resolution);
@@ -59,7 +81,9 @@ export function convergedProfile(compute: (resolution: number) => ProfileRun, op
     // A halving that adds no steps to the profile (all of it inside one step) is no evidence of convergence.
     const refined = next.points.length > previous.points.length;
     previous = next;
-    if (refined && change.extentChange < extentTolerance && change.levelChange < levelTolerance) {
+    const divisor = refined ? errorDivisor(order, earlier, change) : 1;
+    if (refined) earlier = change;
+    if (refined && change.extentChange / divisor < extentTolerance && change.levelChange / divisor < levelTolerance) {
       return { run: next, refinement: { stepsUsed: next.points.length - 1, extentChangeOnHalving: change.extentChange, converged: true } };
     }
   }

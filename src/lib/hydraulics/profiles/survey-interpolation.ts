@@ -25,7 +25,16 @@ function withPointAt(points: GroundPoint[], station: Metres): GroundPoint[] {
   return [...points.slice(0, i), { station, elevation }, ...points.slice(i)];
 }
 
+/** Surveys already laid out. Why: refinement interpolates many sections between the same two surveys. */
+const laidOutSurveys = new WeakMap<SurveyedSectionSpec, LaidOutSurvey>();
+
 function laidOut(spec: SurveyedSectionSpec, field: string): LaidOutSurvey {
+  let known = laidOutSurveys.get(spec);
+  if (known === undefined) laidOutSurveys.set(spec, (known = layOut(spec, field)));
+  return known;
+}
+
+function layOut(spec: SurveyedSectionSpec, field: string): LaidOutSurvey {
   const survey = validatedSurvey(spec, field);
   const points = withPointAt(withPointAt(survey.points, survey.banks.left), survey.banks.right);
   const first = points[0].station;

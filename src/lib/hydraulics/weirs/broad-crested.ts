@@ -66,7 +66,7 @@ export function broadCrestedRating(spec: WeirSpec, field: string): FreeFlowRatin
     notes.push('The nose shape was not given; a square-edged crest was assumed, which gives the lower coefficient and so the higher head.');
   }
   return {
-    discharge: (_h, energyHead) => coefficientAt(energyHead) * BROAD_CREST_FACTOR * b * energyHead ** 1.5,
+    discharge: (_h, energyHead) => coefficientAt(energyHead) * BROAD_CREST_FACTOR * b * energyHead * Math.sqrt(energyHead),
     coefficient: (_h, energyHead) => coefficientAt(energyHead),
     validity: (h, energyHead) => [...sharedChecks(h, energyHead, spec), ...ratioChecks(energyHead)],
     usesEnergyHead: true,

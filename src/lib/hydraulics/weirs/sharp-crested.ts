@@ -33,7 +33,7 @@ export function sharpCrestedRating(spec: WeirSpec, field: string): FreeFlowRatin
   if (userCoefficient !== undefined) {
     requirePositive(userCoefficient, `${field}.coefficient`);
     return {
-      discharge: (_h, energyHead) => THIN_PLATE_FACTOR * userCoefficient * b * energyHead ** 1.5,
+      discharge: (_h, energyHead) => THIN_PLATE_FACTOR * userCoefficient * b * energyHead * Math.sqrt(energyHead),
       coefficient: () => userCoefficient,
       validity: (h) => [check('head (m)', h, 0.03), check('sill height (m)', p, 0.1), check('crest length (m)', b, 0.15)],
       usesEnergyHead: true,
@@ -47,7 +47,7 @@ export function sharpCrestedRating(spec: WeirSpec, field: string): FreeFlowRatin
   const notes: string[] = [];
   if (spec.channelWidth === undefined) {
     return {
-      discharge: (h) => THIN_PLATE_FACTOR * rehbockCoefficient(h, p) * b * h ** 1.5,
+      discharge: (h) => THIN_PLATE_FACTOR * rehbockCoefficient(h, p) * b * h * Math.sqrt(h),
       coefficient: (h) => rehbockCoefficient(h, p),
       // Rehbock's formula is usually quoted as good up to h/P ≈ 5 (Henderson 1966, from memory).
       validity: (h) => [check('head (m)', h, 0.03), check('head / sill height', h / p, 0, 5), check('sill height (m)', p, 0.1)],
