@@ -94,7 +94,9 @@ describe('designer → checker → designer → checker → planning officer', (
     // The checker takes revision 2 from the queue, sees what changed since revision 1, and countersigns.
     await openCheck(checker, 2);
     const changes = checker.locator('table', { has: checker.getByText('Inputs changed since revision 1') });
-    expect(await changes.getByRole('cell', { name: 'control.crestLength' }).count()).toBe(1);
+    // The field is named in words (issue 12 §6), never by its case-file path.
+    expect(await changes.getByRole('cell', { name: /^proposed structure: crest length/ }).count()).toBe(1);
+    expect(await changes.getByRole('cell', { name: 'control.crestLength' }).count()).toBe(0);
     await checker.setViewportSize({ width: 820, height: 1100 });
     await shot(checker, '4-review-tablet');
     await checker.setViewportSize({ width: 1280, height: 900 });

@@ -136,7 +136,7 @@ describe('a designer creates a prismatic scheme with the wizard, leaves, comes b
     await expect.poll(async () => Number(await page.getByLabel('Sill height (m)').inputValue())).toBeCloseTo(Number(sized), 6);
     await page.goto(schemeUrl);
     await page.getByText(/^What changed/).click();
-    expect(await page.getByRole('table', { name: 'History of revision 1' }).textContent()).toMatch(/Adopted the sized crest: control\.sillHeight 1\.6 → [\d.]+/);
+    expect(await page.getByRole('table', { name: 'History of revision 1' }).textContent()).toMatch(/Adopted the sized crest: proposed structure: sill height above the bed 1\.6 → [\d.]+/);
     await page.screenshot({ path: 'tests/.artifacts/wizard-prismatic-history.png', fullPage: true });
     await page.context().close();
   });
