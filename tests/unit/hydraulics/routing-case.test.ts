@@ -126,3 +126,17 @@ describe('a routed case', () => {
     expect(short).toThrow(/control\.ratingTable/);
   });
 });
+
+describe('plausibility of a reservoir', () => {
+  it('warns of a reservoir longer than the reach and of a flood starting above the crest, naming the field', SLOW, () => {
+    const input = parsed({ ...raw(), sensitivity: undefined, events: [raw().events[0]], reservoir: { ...raw().reservoir, length: 5000, startLevel: 55.4 } });
+    const result = evaluateCase(input);
+    expect(result.warnings.some((w) => w.startsWith('reservoir.length: the reservoir (5000 m) runs beyond'))).toBe(true);
+    expect(result.warnings.some((w) => w.startsWith('reservoir.startLevel: the flood starts with the reservoir above the crest'))).toBe(true);
+    // Starting above the crest, the outflow at the start is the spillway's flow at that level, more than the inflow.
+    const r = result.events[0].routing!;
+    expect(r.steps[0].outflow).toBeGreaterThan(r.steps[0].inflow);
+    expect(Math.abs(r.volumeBalance.residual)).toBeLessThan(1e-9 * r.volumeBalance.inflow);
+    expect(result.events[0].limits.every((l) => l.source === 'reservoir')).toBe(true);
+  });
+});

@@ -49,10 +49,12 @@ describe('a pool of constant area with a thin-plate weir, against odex', () => {
     }
   });
 
-  it('peaks within 1 mm of the odex integration of dh/dt = (I − Q(h))/A', () => {
+  it('peaks within the 1 mm refinement tolerance of the odex integration of dh/dt = (I − Q(h))/A', () => {
     const reference = odexPeakLevel();
+    // The march samples the level at its steps and is refined to 1 mm (about 0.2 mm here).
     expect(Math.abs(routed.result.peakLevel.level - reference)).toBeLessThan(1e-3);
-    expect(Math.abs(routed.result.selfCheck!.peakLevel - reference)).toBeLessThan(1e-4);
+    // The engine's own odex self-check, on the tabulated rating, agrees with the forward weir equation to 10 µm (about 1 µm here).
+    expect(Math.abs(routed.result.selfCheck!.peakLevel - reference)).toBeLessThan(1e-5);
     expect(routed.result.outflowPeak.discharge).toBeLessThan(18);
   });
 
