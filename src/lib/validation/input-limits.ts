@@ -21,3 +21,5 @@ export const MAX_HYDROGRAPH_POINTS = 2000;
 export const MAX_STORAGE_ROWS = 200;
 /** Time steps one routing may take after refinement (each a solution of the storage-indication equation). */
 export const ROUTING_STEP_LIMIT = 20_000;
+/** Rows of the routing table kept in a result (the march may take more steps; the table keeps every k-th and the peaks). */
+export const ROUTING_TABLE_ROWS = 1000;
