@@ -15,3 +15,11 @@ export const MAX_RATING_TABLE_ROWS = 200;
 export const MAX_PARCELS = 2000;
 /** A JSON request body, in bytes (1 MiB). */
 export const MAX_JSON_BYTES = 1024 * 1024;
+/** Parcel outlines in one plan file (one per parcel of the register, at most). */
+export const MAX_PLAN_OUTLINES = MAX_PARCELS;
+/** Vertices in one parcel's outline, all its rings and parts together. */
+export const MAX_OUTLINE_VERTICES = 1000;
+/** Vertices of the river centreline. */
+export const MAX_CENTRELINE_VERTICES = 5000;
+/** A plan file (GeoJSON or CSV of vertices), in bytes (4 MiB). */
+export const MAX_PLAN_FILE_BYTES = 4 * 1024 * 1024;
