@@ -4,6 +4,7 @@ import type { QueryInterface } from 'sequelize';
 // The plan of a scheme's parcels: their outlines and the river centreline, stored per scheme (like the register, not
 // per revision). Every upload is a new version; the file itself is kept in the plans folder beside the database by
 // a name of ours (stored_name), and the checked geometry as JSON in the row, so drawing never re-reads the file.
+// A register version made by restoring an earlier one records which (restored_from_version), so the history says so.
 const statements = [
   `CREATE TABLE parcel_plans (
     id TEXT PRIMARY KEY,
@@ -19,6 +20,7 @@ const statements = [
     created_at TEXT NOT NULL,
     UNIQUE (scheme_id, version)
   )`,
+  'ALTER TABLE parcel_registers ADD COLUMN restored_from_version INTEGER CHECK (restored_from_version IS NULL OR restored_from_version >= 1)',
 ];
 
 export const up: MigrationFn<QueryInterface> = async ({ context }) => {
@@ -26,5 +28,6 @@ export const up: MigrationFn<QueryInterface> = async ({ context }) => {
 };
 
 export const down: MigrationFn<QueryInterface> = async ({ context }) => {
+  await context.sequelize.query('ALTER TABLE parcel_registers DROP COLUMN restored_from_version');
   await context.sequelize.query('DROP TABLE IF EXISTS parcel_plans');
 };
