@@ -3,6 +3,7 @@ import type { MultiPolygon, Position } from 'geojson';
 import type { PlanGeometry } from '@/lib/validation/plan-schemas';
 import { type Centreline, centrelineBetween, pointAtChainage } from './linear-referencing';
 import type { PlanCategory } from './plan-style';
+import { polygonArea } from './planar-geometry';
 import type { Stretch } from './river-stretches';
 
 // The plan laid out on a page: projected coordinates (metres) to page units by d3-geo's planar identity projection,
@@ -18,6 +19,8 @@ export interface PlanDrawingInput {
   height: number;
   /** Crop the plan round this parcel (for its letter); the whole plan when absent. */
   focus?: string;
+  /** The category of a parcel missing from `categories`. */
+  otherwise?: PlanCategory;
 }
 
 export interface DrawnParcel {
@@ -75,9 +78,14 @@ export function layOutPlan(input: PlanDrawingInput): PlanDrawing {
   return {
     width: input.width,
     height: input.height,
-    parcels: input.geometry.outlines.map((o) => {
+    parcels: input.geometry.outlines.flatMap((o) => {
       const shape = toMultiPolygon(o.polygons);
-      return { reference: o.reference, category: input.categories.get(o.reference.toLowerCase()) ?? 'not-computed', path: path(shape) ?? '', labelAt: path.centroid(shape) };
+      const [[x0, y0], [x1, y1]] = path.bounds(shape);
+      if (input.focus && (x1 < 0 || y1 < 0 || x0 > input.width || y0 > input.height)) return [];
+      // The label goes in the largest piece: a centroid over pieces wound opposite ways can fall far outside them all.
+      const largest = o.polygons.reduce((best, p) => (polygonArea(p) > polygonArea(best) ? p : best), o.polygons[0]);
+      const labelAt = path.centroid(toMultiPolygon([largest]));
+      return [{ reference: o.reference, category: input.categories.get(o.reference.toLowerCase()) ?? input.otherwise ?? 'not-computed', path: path(shape) ?? '', labelAt }];
     }),
     river: path({ type: 'LineString', coordinates: positions(line.points) }) ?? '',
     inundated: input.inundated.map((s) => along(s.from, s.to)).filter((d) => d !== ''),

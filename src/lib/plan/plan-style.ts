@@ -3,7 +3,8 @@ import type { ParcelCategory } from '@/lib/hydraulics/impact/parcel-impact';
 // How the plan shows each impact category, the same on screen and in the letter's PDF: a fill colour from the
 // portal's verdict palette, a hatch so the categories differ without colour, and the words of the legend.
 
-export type PlanCategory = ParcelCategory | 'not-computed';
+/** 'other-land': a neighbour's parcel in a landowner's letter, drawn without its category (it is not theirs to read). */
+export type PlanCategory = ParcelCategory | 'not-computed' | 'other-land';
 
 export interface CategoryStyle {
   fill: string;
@@ -19,6 +20,7 @@ export const PLAN_CATEGORY_STYLES: Record<PlanCategory, CategoryStyle> = {
   'not-affected': { fill: '#cfe3d2', stroke: '#2f6b3a', hatch: 'none', words: 'Not affected' },
   'outside-reach': { fill: '#ece7db', stroke: '#5d6b70', hatch: 'dots', words: 'Beyond the computed reach' },
   'not-computed': { fill: '#f2eee4', stroke: '#5d6b70', hatch: 'none', words: 'Impact not computed (no revision)' },
+  'other-land': { fill: '#ffffff', stroke: '#5d6b70', hatch: 'none', words: 'Other land' },
 };
 
 export const PLAN_INK = { river: '#17636b', inundated: '#2a6fd6', extent: '#a33a2a', structure: '#1f2a2e', text: '#1f2a2e', paper: '#faf8f3' } as const;

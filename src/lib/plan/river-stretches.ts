@@ -43,7 +43,7 @@ export function inundatedStretches(levels: readonly LevelsAlongRiver[]): Stretch
 
 /** From the structure to the farthest point where the scheme raises the water by the threshold or more; null when nowhere. */
 export function impactExtent(levels: readonly LevelsAlongRiver[], thresholdM: number): Stretch | null {
-  const raised = positiveStretches(levels.map((l) => ({ distance: l.distance, excess: l.withScheme - l.withoutScheme - thresholdM + 1e-9 })));
+  const raised = positiveStretches(levels.map((l) => ({ distance: l.distance, excess: l.withScheme - l.withoutScheme - thresholdM })));
   if (!raised.length) return null;
   return { from: Math.min(0, raised[0].from), to: raised[raised.length - 1].to };
 }
