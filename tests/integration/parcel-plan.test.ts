@@ -1,12 +1,14 @@
+import { execFileSync } from 'node:child_process';
 import { readFileSync, readdirSync } from 'node:fs';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { AuditEvent, ParcelPlan, database } from '@/lib/db';
+import { AuditEvent, Letter, Parcel, ParcelPlan, database } from '@/lib/db';
 import { listRegisterHistory } from '@/lib/parcels/list-register-history';
 import { loadParcelRegister } from '@/lib/parcels/load-parcel-register';
 import { parcelInputOf } from '@/lib/parcels/parcel-record';
 import { loadParcelPlan } from '@/lib/plan/load-parcel-plan';
 import { parcelPlanView } from '@/lib/plan/parcel-plan-view';
+import { generateLettersAction } from '@/app/(portal)/liaison/[id]/letters/actions';
 import { saveParcelEditsAction } from '@/app/(portal)/liaison/[id]/register/actions';
 import { restoreRegisterVersionAction } from '@/app/(portal)/liaison/[id]/register/history/actions';
 import { createTestRevision, createTestScheme, demoParcelsCsv } from './support/liaison-fixtures';
@@ -19,6 +21,7 @@ import { createTestUser } from './support/user-factory';
 let db: Awaited<ReturnType<typeof useTestDatabase>>;
 let liaison: Awaited<ReturnType<typeof createTestUser>>['sessionUser'];
 let schemeId: string;
+let revisionId: string;
 
 const DEMO_PLAN = readFileSync(path.resolve('db', 'seeds', 'parcels', 'harrowfield-plan.geojson'), 'utf8');
 const planFiles = () => {
@@ -36,7 +39,7 @@ beforeAll(async () => {
   const designer = await createTestUser('designer');
   liaison = (await createTestUser('liaison')).sessionUser;
   schemeId = (await createTestScheme(designer.user.id)).id;
-  await createTestRevision({ schemeId, authorId: designer.user.id, status: 'draft', storeResults: true });
+  revisionId = (await createTestRevision({ schemeId, authorId: designer.user.id, status: 'draft', storeResults: true })).id;
 });
 afterAll(async () => {
   signedInAs(null);
@@ -83,7 +86,7 @@ describe('uploading the plan of the parcels', () => {
     expect(stored).toMatchObject({ version: 1, coordinateSystem: 'Harrowfield site grid', sourceFormat: 'geojson' });
     database();
     expect(await AuditEvent.count({ where: { action: 'parcels.plan-imported', schemeId } })).toBe(1);
-    const view = await parcelPlanView({ user: liaison, schemeId, width: 960, height: 640 });
+    const view = await parcelPlanView({ user: liaison, schemeId, width: 960 });
     expect(view.parcels.map((p) => p.reference)).toEqual(['HM-01', 'HM-02', 'HM-03', 'HM-04', 'HM-05', 'HM-06', 'HM-07', 'HM-08', 'HM-09']);
     expect(view.parcels.every((p) => p.inRegister && p.category !== 'not-computed')).toBe(true);
     expect(view.drawing?.parcels.every((p) => p.path.startsWith('M'))).toBe(true);
@@ -137,5 +140,23 @@ describe('restoring an earlier version of the register', () => {
     const unchanged = await restoreRegisterVersionAction({ schemeId, baseRegisterId: history[0].id, version: 1, note: '' });
     expect(unchanged).toMatchObject({ ok: false, status: 422 });
     expect(await tableSnapshot()).toEqual(before);
+  });
+});
+
+describe('the plan in the letters', () => {
+  it('puts the plan cropped round the parcel in the letter of a parcel with an outline, and none in the others', async () => {
+    signedInAs(liaison);
+    // Plan version 2 (the CSV above) outlines HM-01 only.
+    const made = await generateLettersAction({ schemeId, revisionId });
+    expect(made.ok).toBe(true);
+    database();
+    const letters = await Letter.findAll({ where: { revisionId } });
+    const references = new Map((await Parcel.findAll({ where: { id: letters.map((l) => l.parcelId) } })).map((p) => [p.id, p.reference]));
+    const text = (pdfPath: string | null) => execFileSync('pdftotext', [pdfPath!, '-']).toString();
+    const withOutline = letters.find((l) => references.get(l.parcelId) === 'HM-01');
+    const without = letters.find((l) => references.get(l.parcelId) !== 'HM-01');
+    expect(withOutline && without).toBeTruthy();
+    expect(text(withOutline!.pdfPath)).toContain('Plan: where your land (HM-01) lies');
+    expect(text(without!.pdfPath)).not.toContain('Plan: where your land');
   });
 });

@@ -5,7 +5,7 @@ import { chainageRange } from './linear-referencing';
 import { type StoredPlan, loadParcelPlan } from './load-parcel-plan';
 import { type PlanDrawing, layOutPlan } from './plan-drawing';
 import type { PlanCategory } from './plan-style';
-import { polygonArea } from './planar-geometry';
+import { boundsOf, polygonArea } from './planar-geometry';
 import { impactExtent, inundatedStretches } from './river-stretches';
 
 export interface PlanParcelFigures {
@@ -40,7 +40,14 @@ export interface ParcelPlanView {
 }
 
 /** The plan page's data: the latest plan laid out with every parcel's category and figures for the chosen event. */
-export async function parcelPlanView({ user, schemeId, event, width, height }: { user: SessionUser; schemeId: string; event?: number; width: number; height: number }): Promise<ParcelPlanView> {
+/** A drawing as tall as the plan's own shape at this width, between half and one and a half times the width. */
+function heightFor(geometry: StoredPlan['geometry'], width: number): number {
+  const b = boundsOf([...geometry.centreline.points, ...geometry.outlines.flatMap((o) => o.polygons.flat(2))]);
+  const aspect = b && b.maxX > b.minX ? (b.maxY - b.minY) / (b.maxX - b.minX) : 1;
+  return Math.round(width * Math.min(1.5, Math.max(0.5, aspect)));
+}
+
+export async function parcelPlanView({ user, schemeId, event, width }: { user: SessionUser; schemeId: string; event?: number; width: number }): Promise<ParcelPlanView> {
   const table = await computeParcelImpact({ user, schemeId });
   const stored = await loadParcelPlan(schemeId);
   const largest = table.events.reduce((best, e, i) => (e.dischargeM3s > table.events[best].dischargeM3s ? i : best), 0);
@@ -75,7 +82,7 @@ export async function parcelPlanView({ user, schemeId, event, width, height }: {
   return {
     ...base,
     plan,
-    drawing: layOutPlan({ geometry, categories, inundated, extent, width, height }),
+    drawing: layOutPlan({ geometry, categories, inundated, extent, width, height: heightFor(geometry, width) }),
     parcels,
     withoutOutline: table.rows.filter((r) => !outlined.has(r.parcel.reference.toLowerCase())).map((r) => r.parcel.reference),
   };

@@ -24,7 +24,7 @@ export default async function PlanPage({ params, searchParams }: { params: Promi
   const { user, access } = await requireLiaisonPage(id, `/liaison/${id}/plan`);
   const read = readQuery(planQuery, await searchParams);
   if (!read.ok) return <UnreadableAddress issues={read.issues} plainHref={`/liaison/${id}/plan`} plainLabel="Open the plan" />;
-  const view = await orNotFound(() => parcelPlanView({ user, schemeId: id, event: read.data.event, width: 960, height: 640 }));
+  const view = await orNotFound(() => parcelPlanView({ user, schemeId: id, event: read.data.event, width: 960 }));
   const eventName = view.events[view.event - 1]?.name ?? 'no event';
   const categories = [...new Set(view.parcels.map((p) => p.category))] as PlanCategory[];
   return (
@@ -48,11 +48,10 @@ export default async function PlanPage({ params, searchParams }: { params: Promi
               </form>
             ) : null}
           </div>
-          <PlanMap drawing={view.drawing} parcels={view.parcels} event={eventName} label={`Plan of the parcels, ${view.parcels.length} outlines, coloured by impact`} />
-          <div className="mt-4 grid gap-6 md:grid-cols-2">
+          <PlanMap drawing={view.drawing} parcels={view.parcels} event={eventName} label={`Plan of the parcels, ${view.parcels.length} outlines, coloured by impact`}>
             <PlanLegend categories={categories.length ? categories : ['not-computed']} />
-            {view.withoutOutline.length ? <p className="text-sm text-ink-soft">Parcels of the register without an outline (shown in the register and impact table only): <span className="num">{view.withoutOutline.join(', ')}</span>.</p> : null}
-          </div>
+            {view.withoutOutline.length ? <p className="mt-3 text-sm text-ink-soft">Parcels of the register without an outline (shown in the register and impact table only): <span className="num">{view.withoutOutline.join(', ')}</span>.</p> : null}
+          </PlanMap>
         </>
       ) : (
         <EmptyState title="No plan of the parcels yet.">{access === 'manage' ? 'Upload their outlines below to see where they are.' : 'A landowner liaison officer uploads the outlines.'} The register and the impact table work without one.</EmptyState>

@@ -1,6 +1,6 @@
 'use client';
 
-import { useState } from 'react';
+import { type ReactNode, useState } from 'react';
 import type { PlanParcelFigures } from '@/lib/plan/parcel-plan-view';
 import type { PlanDrawing } from '@/lib/plan/plan-drawing';
 import { PLAN_CATEGORY_STYLES, PLAN_INK } from '@/lib/plan/plan-style';
@@ -10,7 +10,7 @@ import { NorthArrow, ScaleBar } from './plan-furniture';
 import { HatchPatterns, hatchId } from './plan-hatches';
 
 /** The plan with its parcels to choose (click, or Tab and Enter), the chosen parcel's figures, and the same parcels as a list. */
-export function PlanMap({ drawing, parcels, event, label }: { drawing: PlanDrawing; parcels: PlanParcelFigures[]; event: string; label: string }) {
+export function PlanMap({ drawing, parcels, event, label, children }: { drawing: PlanDrawing; parcels: PlanParcelFigures[]; event: string; label: string; children: ReactNode }) {
   const [chosen, setChosen] = useState<string | null>(null);
   const selected = parcels.find((p) => p.reference === chosen) ?? null;
   const choose = (reference: string) => setChosen((c) => (c === reference ? null : reference));
@@ -53,6 +53,7 @@ export function PlanMap({ drawing, parcels, event, label }: { drawing: PlanDrawi
           </g>
         </svg>
         <figcaption className="mt-1 text-xs text-ink-soft">Choose a parcel on the plan (click it, or Tab to it and press Enter) or in the list to see its figures.</figcaption>
+        <div className="mt-4">{children}</div>
       </figure>
       <div className="min-w-0">
         <section aria-live="polite" aria-label="The chosen parcel" className="mb-4 rounded border border-paper-edge p-3">
