@@ -1,3 +1,4 @@
+import { MAX_PLAN_VERTICES } from '@/lib/validation/input-limits';
 import type { PlanGeometry } from '@/lib/validation/plan-schemas';
 import type { PlanIssue } from './plan-issues';
 import { boundsOf, polygonArea, signedRingArea } from './planar-geometry';
@@ -31,6 +32,8 @@ export function planGeometryIssues(plan: PlanGeometry, place: Place): PlanIssue[
     issues.push(...flat);
     if (flat.length === 0 && outline.polygons.reduce((a, p) => a + polygonArea(p), 0) <= 0) issues.push({ place: place(outline.source), field: 'coordinates', message: 'its holes are as large as its outline: it encloses no area' });
   }
+  const vertices = plan.outlines.reduce((n, o) => n + o.polygons.reduce((m, p) => m + p.reduce((k, r) => k + r.length, 0), 0), 0);
+  if (vertices > MAX_PLAN_VERTICES) issues.push({ place: 'the file', field: 'coordinates', message: `holds ${vertices} outline vertices in all; a plan holds at most ${MAX_PLAN_VERTICES}: simplify the outlines` });
   const points = plan.centreline.points;
   if (points.every((p) => p[0] === points[0][0] && p[1] === points[0][1])) issues.push({ place: 'the centreline', field: 'coordinates', message: 'has no length: its vertices are all at one point' });
   const all = [...points, ...plan.outlines.flatMap((o) => o.polygons.flat(2))];

@@ -19,6 +19,8 @@ export const MAX_JSON_BYTES = 1024 * 1024;
 export const MAX_PLAN_OUTLINES = MAX_PARCELS;
 /** Vertices in one parcel's outline, all its rings and parts together. */
 export const MAX_OUTLINE_VERTICES = 1000;
+/** Vertices of all the outlines of one plan together. */
+export const MAX_PLAN_VERTICES = 200_000;
 /** Vertices of the river centreline. */
 export const MAX_CENTRELINE_VERTICES = 5000;
 /** A plan file (GeoJSON or CSV of vertices), in bytes (4 MiB). */

@@ -77,3 +77,18 @@ describe('chainage along the centreline by linear referencing', () => {
     expect(chainageRange(line, [at(100, 10), at(200, 10), at(200, 60), at(100, 60)])).toEqual({ from: 50, to: 150 });
   });
 });
+
+describe('the searched chainage range of an outline', () => {
+  it('agrees with the nearest point over every segment, for each demo outline (brute force, no pruning)', async () => {
+    const { readFileSync } = await import('node:fs');
+    const { parsePlanGeoJson } = await import('@/lib/plan/outlines-geojson');
+    const parsed = parsePlanGeoJson(readFileSync('db/seeds/parcels/harrowfield-plan.geojson', 'utf8'));
+    if (!parsed.ok) throw new Error('the demo plan does not parse');
+    const line = parsed.plan.centreline;
+    for (const outline of parsed.plan.outlines) {
+      const vertices = outline.polygons.flat(2);
+      const chainages = vertices.map((v) => locateOnCentreline(line, v).chainage);
+      expect(chainageRange(line, vertices), outline.reference).toEqual({ from: Math.min(...chainages), to: Math.max(...chainages) });
+    }
+  });
+});
