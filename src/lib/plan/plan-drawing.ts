@@ -41,7 +41,8 @@ export interface PlanDrawing {
   scaleBar: { metres: number; length: number };
 }
 
-const PAD = 24;
+/** Margins of the fitted plan: room on the right for the north arrow, below for the scale bar. */
+const MARGIN = { left: 20, top: 20, right: 48, bottom: 36 };
 const positions = (points: readonly (readonly [number, number])[]): Position[] => points.map(([x, y]) => [x, y]);
 const toMultiPolygon = (polygons: PlanGeometry['outlines'][number]['polygons']): MultiPolygon => ({ type: 'MultiPolygon', coordinates: polygons as unknown as Position[][][] });
 
@@ -64,7 +65,7 @@ export function planProjection(input: Pick<PlanDrawingInput, 'geometry' | 'width
     const grow = Math.max(150, 0.5 * Math.max(Math.max(...xs) - Math.min(...xs), Math.max(...ys) - Math.min(...ys)));
     points.push([Math.min(...xs) - grow, Math.min(...ys) - grow], [Math.max(...xs) + grow, Math.max(...ys) + grow]);
   }
-  projection.fitExtent([[PAD, PAD], [input.width - PAD, input.height - PAD]], { type: 'MultiPoint', coordinates: points });
+  projection.fitExtent([[MARGIN.left, MARGIN.top], [input.width - MARGIN.right, input.height - MARGIN.bottom]], { type: 'MultiPoint', coordinates: points });
   return projection;
 }
 
