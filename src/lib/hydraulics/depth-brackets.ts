@@ -30,6 +30,36 @@ export function finiteDepthGrid(section: FlowSection, from: Metres = 0, to: Metr
 
 const wholeSectionGrids = new WeakMap<FlowSection, readonly Metres[]>();
 
+/**
+ * For a section whose geometry is tabulated between breakpoints (a survey): its shallowest depth, every breakpoint
+ * and a point just above each (where the top width may jump), and its top. Between two breakpoints every piece of
+ * ground is straight, so A, T and P are polynomials in the depth with no jump (surveyed-table.ts), and a residual
+ * built from them changes sign between rows where it crosses zero. Why: a fine uniform scan costs some 450
+ * evaluations per section; a survey has a few dozen rows.
+ */
+export function breakpointDepthGrid(section: FlowSection & { breakpointDepths: readonly Metres[] }): readonly Metres[] {
+  let grid = breakpointGrids.get(section);
+  if (grid === undefined) {
+    const top = section.maxDepth;
+    const nudge = top * SHALLOWEST_FRACTION;
+    const depths: Metres[] = [nudge, top];
+    for (const d of section.breakpointDepths) if (d > 0 && d < top) depths.push(d, Math.min(top, d + nudge));
+    grid = sortedDistinct(depths);
+    breakpointGrids.set(section, grid);
+  }
+  return grid;
+}
+
+const breakpointGrids = new WeakMap<FlowSection, readonly Metres[]>();
+
+function sortedDistinct(depths: Metres[]): Metres[] {
+  // A typed array sorts numbers without a comparator call per comparison; equal neighbours are then dropped.
+  const sorted = Float64Array.from(depths).sort();
+  const distinct: Metres[] = [];
+  for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) distinct.push(sorted[i]);
+  return distinct;
+}
+
 function depthGrid(section: FlowSection, from: Metres, to: Metres): Metres[] {
   const span = to - from;
   const depths: Metres[] = [to];
@@ -40,11 +70,7 @@ function depthGrid(section: FlowSection, from: Metres, to: Metres): Metres[] {
     const inside = section.breakpointDepths.filter((d) => d > from && d < to);
     depths.push(...inside, ...inside.map((d) => Math.min(to, d + span * SHALLOWEST_FRACTION)));
   }
-  // A typed array sorts numbers without a comparator call per comparison; equal neighbours are then dropped.
-  const sorted = Float64Array.from(depths).sort();
-  const distinct: Metres[] = [];
-  for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) distinct.push(sorted[i]);
-  return distinct;
+  return sortedDistinct(depths);
 }
 
 /**

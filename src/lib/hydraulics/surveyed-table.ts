@@ -10,6 +10,18 @@ export interface PieceValues {
   firstMoment: number;
 }
 
+/** The index of `level` in the ascending `levels`, which hold it. */
+function levelIndex(levels: readonly number[], level: number): number {
+  let lo = 0;
+  let hi = levels.length - 1;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (levels[mid] < level) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
 /**
  * Between two consecutive ground elevations every piece of ground is dry, wholly wet, or wet over a fraction that
  * grows linearly with the level, so the top width T and the wetted perimeter P are linear in the level there, and
@@ -23,12 +35,12 @@ export class SurveyTable {
   /** Distinct ground elevations, ascending. */
   readonly levels: number[];
   /** Per interval k (above levels[k]), per sub-area j at index 3k + j: the values just above levels[k] and the slopes. */
-  private readonly area: number[] = [];
-  private readonly moment: number[] = [];
-  private readonly width: number[] = [];
-  private readonly widthRate: number[] = [];
-  private readonly perimeter: number[] = [];
-  private readonly perimeterRate: number[] = [];
+  private readonly area: Float64Array;
+  private readonly moment: Float64Array;
+  private readonly width: Float64Array;
+  private readonly widthRate: Float64Array;
+  private readonly perimeter: Float64Array;
+  private readonly perimeterRate: Float64Array;
 
   constructor(subAreas: readonly (readonly GroundSegment[])[]) {
     // Plain loops and a typed-array sort: a refined reach builds a table for every interpolated section.
@@ -38,18 +50,22 @@ export class SurveyTable {
     const levels: number[] = [];
     for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) levels.push(sorted[i]);
     this.levels = levels;
-    const index = new Map<number, number>();
-    for (let k = 0; k < levels.length; k++) index.set(levels[k], k);
     const count = levels.length;
+    // Columns of fixed length, filled by index: the look-ups of a march read them, and a typed array stays packed.
+    [this.area, this.moment, this.width, this.widthRate, this.perimeter, this.perimeterRate] = Array.from({ length: 6 }, () => new Float64Array(3 * count));
+    const jumpT = new Float64Array(count);
+    const jumpP = new Float64Array(count);
+    const rateT = new Float64Array(count);
+    const rateP = new Float64Array(count);
     const negligibleRise = 1e-13 * Math.max(levels[count - 1] - levels[0], Math.abs(levels[0]), Math.abs(levels[count - 1]), Number.MIN_VALUE);
     subAreas.forEach((segments, j) => {
-      const jumpT = new Array<number>(count).fill(0);
-      const jumpP = new Array<number>(count).fill(0);
-      const rateT = new Array<number>(count).fill(0);
-      const rateP = new Array<number>(count).fill(0);
+      jumpT.fill(0);
+      jumpP.fill(0);
+      rateT.fill(0);
+      rateP.fill(0);
       for (const { x1, z1, x2, z2 } of segments) {
-        const low = index.get(z1 <= z2 ? z1 : z2) as number;
-        const high = index.get(z1 <= z2 ? z2 : z1) as number;
+        const low = levelIndex(levels, z1 <= z2 ? z1 : z2);
+        const high = levelIndex(levels, z1 <= z2 ? z2 : z1);
         const width = Math.abs(x2 - x1);
         const rise = Math.abs(z2 - z1);
         const length = Math.hypot(width, rise);

@@ -58,19 +58,85 @@ function stationAt(survey: LaidOutSurvey, u: number): Metres {
   return start + Math.min(1, Math.max(0, u - zone)) * width;
 }
 
-/** Ground elevations at position u, top to bottom as surveyed: several where a vertical wall stands there. */
-function elevationsAt(survey: LaidOutSurvey, u: number): Metres[] {
+/**
+ * Ground elevations at each of the ascending positions `at`, top to bottom as surveyed: several where a vertical wall
+ * stands there, interpolated between the survey's points elsewhere, its end levels beyond its ends. One walk along
+ * the survey, as both lists ascend.
+ */
+function elevationsAlong(survey: LaidOutSurvey, at: readonly number[]): Metres[][] {
   const { points, positions } = survey;
-  const exact = points.filter((_, i) => positions[i] === u).map((p) => p.elevation);
-  if (exact.length > 0) return exact;
-  const after = positions.findIndex((p) => p > u);
-  if (after < 0) return [points[points.length - 1].elevation];
-  if (after === 0) return [points[0].elevation];
-  const t = (u - positions[after - 1]) / (positions[after] - positions[after - 1]);
-  return [points[after - 1].elevation + t * (points[after].elevation - points[after - 1].elevation)];
+  const last = points.length - 1;
+  const result: Metres[][] = [];
+  let i = 0;
+  for (const u of at) {
+    while (i <= last && positions[i] < u) i++;
+    if (i <= last && positions[i] === u) {
+      const exact: Metres[] = [];
+      for (let j = i; j <= last && positions[j] === u; j++) exact.push(points[j].elevation);
+      result.push(exact);
+    } else if (i > last) result.push([points[last].elevation]);
+    else if (i === 0) result.push([points[0].elevation]);
+    else {
+      const t = (u - positions[i - 1]) / (positions[i] - positions[i - 1]);
+      result.push([points[i - 1].elevation + t * (points[i].elevation - points[i - 1].elevation)]);
+    }
+  }
+  return result;
+}
+
+/** The positions of both surveys, ascending, each once. */
+function mergedPositions(a: LaidOutSurvey, b: LaidOutSurvey): number[] {
+  const sorted = Float64Array.from([...a.positions, ...b.positions]).sort();
+  const distinct: number[] = [];
+  for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) distinct.push(sorted[i]);
+  return distinct;
 }
 
 const mix = (a: number, b: number, w: number) => a + (b - a) * w;
+
+/** Everything about blending two surveys that does not depend on the weight: matched stations and ground levels. */
+interface MatchedPair {
+  stationsFrom: Float64Array;
+  stationsTo: Float64Array;
+  levelsFrom: Float64Array;
+  levelsTo: Float64Array;
+  from: LaidOutSurvey;
+  to: LaidOutSurvey;
+}
+
+function matchedPair(a: LaidOutSurvey, b: LaidOutSurvey): MatchedPair {
+  const positions = mergedPositions(a, b);
+  const elevationsA = elevationsAlong(a, positions);
+  const elevationsB = elevationsAlong(b, positions);
+  const rows: [Metres, Metres, Metres, Metres][] = [];
+  for (let p = 0; p < positions.length; p++) {
+    const stationA = stationAt(a, positions[p]);
+    const stationB = stationAt(b, positions[p]);
+    const levelsA = elevationsA[p];
+    const levelsB = elevationsB[p];
+    const count = Math.max(levelsA.length, levelsB.length);
+    for (let k = 0; k < count; k++) rows.push([stationA, stationB, levelsA[Math.min(k, levelsA.length - 1)], levelsB[Math.min(k, levelsB.length - 1)]]);
+  }
+  return {
+    stationsFrom: Float64Array.from(rows, (r) => r[0]),
+    stationsTo: Float64Array.from(rows, (r) => r[1]),
+    levelsFrom: Float64Array.from(rows, (r) => r[2]),
+    levelsTo: Float64Array.from(rows, (r) => r[3]),
+    from: a,
+    to: b,
+  };
+}
+
+/** Pairs already matched. Why: refinement interpolates a section at several weights between the same two surveys. */
+const matchedPairs = new WeakMap<SurveyedSectionSpec, WeakMap<SurveyedSectionSpec, MatchedPair>>();
+
+function rememberedPair(from: SurveyedSectionSpec, to: SurveyedSectionSpec, field: string): MatchedPair {
+  let fromHere = matchedPairs.get(from);
+  if (fromHere === undefined) matchedPairs.set(from, (fromHere = new WeakMap()));
+  let pair = fromHere.get(to);
+  if (pair === undefined) fromHere.set(to, (pair = matchedPair(laidOut(from, field), laidOut(to, field))));
+  return pair;
+}
 
 /**
  * The section a fraction `weight` of the way from `from` (0) to `to` (1). Each sub-area (left overbank, channel,
@@ -79,18 +145,11 @@ const mix = (a: number, b: number, w: number) => a + (b - a) * w;
  * practice for filling in sections between surveyed ones). Vertical walls are blended point by point.
  */
 export function interpolatedSurvey(from: SurveyedSectionSpec, to: SurveyedSectionSpec, weight: number, field = 'reach.sections'): SurveyedSectionSpec {
-  const a = laidOut(from, field);
-  const b = laidOut(to, field);
-  const positions = [...new Set([...a.positions, ...b.positions])].sort((p, q) => p - q);
-  const points: [Metres, Metres][] = [];
-  for (const u of positions) {
-    const station = mix(stationAt(a, u), stationAt(b, u), weight);
-    const levelsA = elevationsAt(a, u);
-    const levelsB = elevationsAt(b, u);
-    const count = Math.max(levelsA.length, levelsB.length);
-    for (let k = 0; k < count; k++) {
-      points.push([station, mix(levelsA[Math.min(k, levelsA.length - 1)], levelsB[Math.min(k, levelsB.length - 1)], weight)]);
-    }
+  const pair = rememberedPair(from, to, field);
+  const { from: a, to: b } = pair;
+  const points: [Metres, Metres][] = new Array(pair.stationsFrom.length);
+  for (let i = 0; i < points.length; i++) {
+    points[i] = [mix(pair.stationsFrom[i], pair.stationsTo[i], weight), mix(pair.levelsFrom[i], pair.levelsTo[i], weight)];
   }
   const manningN = {
     left: mix(a.roughness.left, b.roughness.left, weight),
