@@ -31,19 +31,20 @@ export function finiteDepthGrid(section: FlowSection, from: Metres = 0, to: Metr
 const wholeSectionGrids = new WeakMap<FlowSection, readonly Metres[]>();
 
 /**
- * For a section whose geometry is tabulated between breakpoints (a survey): its shallowest depth, every breakpoint
- * and a point just above each (where the top width may jump), and its top. Between two breakpoints every piece of
- * ground is straight, so A, T and P are polynomials in the depth with no jump (surveyed-table.ts), and a residual
- * built from them changes sign between rows where it crosses zero. Why: a fine uniform scan costs some 450
- * evaluations per section; a survey has a few dozen rows.
+ * For a section whose geometry is tabulated between breakpoints (a survey): its shallowest depth, every breakpoint,
+ * a point just above each where the top width or the perimeter jumps (every breakpoint when the section does not
+ * say), and its top. Between two breakpoints every piece of ground is straight, so A, T and P are polynomials in the
+ * depth with no jump (surveyed-table.ts), and a residual built from them changes sign between rows where it crosses
+ * zero. Why: a fine uniform scan costs some 450 evaluations per section; a survey has a few dozen rows.
  */
-export function breakpointDepthGrid(section: FlowSection & { breakpointDepths: readonly Metres[] }): readonly Metres[] {
+export function breakpointDepthGrid(section: FlowSection & { breakpointDepths: readonly Metres[]; jumpDepths?: readonly Metres[] }): readonly Metres[] {
   let grid = breakpointGrids.get(section);
   if (grid === undefined) {
     const top = section.maxDepth;
     const nudge = top * SHALLOWEST_FRACTION;
     const depths: Metres[] = [nudge, top];
-    for (const d of section.breakpointDepths) if (d > 0 && d < top) depths.push(d, Math.min(top, d + nudge));
+    for (const d of section.breakpointDepths) if (d > 0 && d < top) depths.push(d);
+    for (const d of section.jumpDepths ?? section.breakpointDepths) if (d > 0 && d < top) depths.push(Math.min(top, d + nudge));
     grid = sortedDistinct(depths);
     breakpointGrids.set(section, grid);
   }

@@ -21,6 +21,8 @@ export interface SurveyedSection extends FlowSection {
   readonly bankLevels: { left: Metres; right: Metres };
   /** Depths in (0, maxDepth] at which the ground changes slope; root scans put grid points there. */
   readonly breakpointDepths: readonly Metres[];
+  /** The breakpoint depths just above which the top width or the wetted perimeter jumps (flat ground starts to flood). */
+  readonly jumpDepths: readonly Metres[];
 }
 
 const SUB_AREAS = ['left', 'channel', 'right'] as const;
@@ -91,6 +93,7 @@ export function surveyedSection(spec: SurveyedSectionSpec, opts: { field?: strin
   const maxDepth = lowerEndLevel - invertLevel;
   const table = new SurveyTable(segmentsBySubArea);
   const breakpointDepths = depthsOfLevels(table.levels, invertLevel, maxDepth);
+  const jumpDepths = depthsOfLevels(table.levels.filter((_, k) => table.jumpsAbove[k] === 1), invertLevel, maxDepth);
   const roughness = SUB_AREAS.map((subArea) => survey.roughness[subArea]);
   // Scratch for one evaluation at a time: the engine is synchronous, and nothing here calls back out.
   const parts: PieceValues[] = SUB_AREAS.map(() => ({ area: 0, wettedPerimeter: 0, topWidth: 0, firstMoment: 0 }));
@@ -130,6 +133,7 @@ export function surveyedSection(spec: SurveyedSectionSpec, opts: { field?: strin
     lowerEndLevel,
     bankLevels: { left: highestGroundAt(ground, survey.banks.left), right: highestGroundAt(ground, survey.banks.right) },
     breakpointDepths,
+    jumpDepths,
     stateAtLevel,
     stateAtDepth(depth: Metres): SectionState {
       requireDepth(depth);
