@@ -45,9 +45,17 @@ export class SurveyTable {
 
   constructor(subAreas: readonly (readonly GroundSegment[])[]) {
     // Plain loops and a typed-array sort: a refined reach builds a table for every interpolated section.
-    const elevations: number[] = [];
-    for (const segments of subAreas) for (const s of segments) elevations.push(s.z1, s.z2);
-    const sorted = Float64Array.from(elevations).sort();
+    let segmentCount = 0;
+    for (const segments of subAreas) segmentCount += segments.length;
+    const sorted = new Float64Array(2 * segmentCount);
+    let filled = 0;
+    for (const segments of subAreas) {
+      for (const s of segments) {
+        sorted[filled++] = s.z1;
+        sorted[filled++] = s.z2;
+      }
+    }
+    sorted.sort();
     const levels: number[] = [];
     for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) levels.push(sorted[i]);
     this.levels = levels;
@@ -57,7 +65,8 @@ export class SurveyTable {
     // Per level: jumps in top width and perimeter, then changes in their rates (scratch, reset per sub-area).
     const changes = new Float64Array(4 * count);
     const negligibleRise = 1e-13 * Math.max(levels[count - 1] - levels[0], Math.abs(levels[0]), Math.abs(levels[count - 1]), Number.MIN_VALUE);
-    subAreas.forEach((segments, j) => {
+    for (let j = 0; j < subAreas.length; j++) {
+      const segments = subAreas[j];
       changes.fill(0);
       for (const { x1, z1, x2, z2 } of segments) {
         const low = levelIndex(levels, z1 <= z2 ? z1 : z2);
@@ -109,7 +118,7 @@ export class SurveyTable {
         width = Math.max(0, width + widthRate * s);
         perimeter = Math.max(0, perimeter + perimeterRate * s);
       }
-    });
+    }
   }
 
   /** The interval holding `level`: the last k with levels[k] < level, or −1 at or below the lowest ground. */

@@ -86,7 +86,10 @@ function elevationsAlong(survey: LaidOutSurvey, at: readonly number[]): Metres[]
 
 /** The positions of both surveys, ascending, each once. */
 function mergedPositions(a: LaidOutSurvey, b: LaidOutSurvey): number[] {
-  const sorted = Float64Array.from([...a.positions, ...b.positions]).sort();
+  const sorted = new Float64Array(a.positions.length + b.positions.length);
+  sorted.set(a.positions);
+  sorted.set(b.positions, a.positions.length);
+  sorted.sort();
   const distinct: number[] = [];
   for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) distinct.push(sorted[i]);
   return distinct;
@@ -96,10 +99,10 @@ const mix = (a: number, b: number, w: number) => a + (b - a) * w;
 
 /** Everything about blending two surveys that does not depend on the weight: matched stations and ground levels. */
 interface MatchedPair {
-  stationsFrom: Float64Array;
-  stationsTo: Float64Array;
-  levelsFrom: Float64Array;
-  levelsTo: Float64Array;
+  stationsFrom: number[];
+  stationsTo: number[];
+  levelsFrom: number[];
+  levelsTo: number[];
   from: LaidOutSurvey;
   to: LaidOutSurvey;
 }
@@ -108,23 +111,21 @@ function matchedPair(a: LaidOutSurvey, b: LaidOutSurvey): MatchedPair {
   const positions = mergedPositions(a, b);
   const elevationsA = elevationsAlong(a, positions);
   const elevationsB = elevationsAlong(b, positions);
-  const rows: [Metres, Metres, Metres, Metres][] = [];
+  const pair: MatchedPair = { stationsFrom: [], stationsTo: [], levelsFrom: [], levelsTo: [], from: a, to: b };
   for (let p = 0; p < positions.length; p++) {
     const stationA = stationAt(a, positions[p]);
     const stationB = stationAt(b, positions[p]);
     const levelsA = elevationsA[p];
     const levelsB = elevationsB[p];
     const count = Math.max(levelsA.length, levelsB.length);
-    for (let k = 0; k < count; k++) rows.push([stationA, stationB, levelsA[Math.min(k, levelsA.length - 1)], levelsB[Math.min(k, levelsB.length - 1)]]);
+    for (let k = 0; k < count; k++) {
+      pair.stationsFrom.push(stationA);
+      pair.stationsTo.push(stationB);
+      pair.levelsFrom.push(levelsA[Math.min(k, levelsA.length - 1)]);
+      pair.levelsTo.push(levelsB[Math.min(k, levelsB.length - 1)]);
+    }
   }
-  return {
-    stationsFrom: Float64Array.from(rows, (r) => r[0]),
-    stationsTo: Float64Array.from(rows, (r) => r[1]),
-    levelsFrom: Float64Array.from(rows, (r) => r[2]),
-    levelsTo: Float64Array.from(rows, (r) => r[3]),
-    from: a,
-    to: b,
-  };
+  return pair;
 }
 
 /** Pairs already matched. Why: refinement interpolates a section at several weights between the same two surveys. */
