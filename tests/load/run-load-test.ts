@@ -7,7 +7,7 @@ import autocannon from 'autocannon';
 import { lucia } from '@/lib/auth/lucia';
 import { User, closeSequelize, database } from '@/lib/db';
 import { startApp } from '../e2e/support/app-server';
-import { type LoadRow, check, loadRow } from './load-stats';
+import { type LoadRow, check, loadRow, readmeTableRows } from './load-stats';
 
 const CONNECTIONS = 50;
 const DURATION_S = Number(process.env.LOAD_DURATION_S ?? 20);
@@ -61,6 +61,7 @@ try {
   console.log(`Load test on ${machine}: ${CONNECTIONS} connections, ${DURATION_S} s per run`);
   console.table(rows);
   console.table(targets);
+  console.log(['For the README:', '| Endpoint | Requests/s | p50 | p95 | p99 | Errors |', '| --- | --- | --- | --- | --- | --- |', ...readmeTableRows(rows, health)].join('\n'));
   for (const t of targets) console.log(`${t.verdict === 'PASS' ? '✔ PASS  ' : '✖ MISSED'} ${t.target}: ${t.measured}`);
   if (targets.some((t) => t.verdict === 'MISSED')) process.exitCode = 1;
 } finally {

@@ -22,7 +22,8 @@ const positiveInteger = (text: string | undefined) => (text && /^\d+$/.test(text
 const THREADS = positiveInteger(process.env.ENGINE_THREADS) ?? Math.max(1, os.availableParallelism() - 1);
 /** Counted from the moment a worker starts the job, not from when it joined the queue. */
 export const ENGINE_TIME_LIMIT_MS = positiveInteger(process.env.ENGINE_TIME_LIMIT_MS) ?? 30_000;
-const QUEUE_LIMIT = positiveInteger(process.env.ENGINE_QUEUE_LIMIT) ?? THREADS * 32;
+// 32 cases waiting per core, as when every core had a worker: fewer workers must not turn more callers away.
+const QUEUE_LIMIT = positiveInteger(process.env.ENGINE_QUEUE_LIMIT) ?? os.availableParallelism() * 32;
 const RETRY_AFTER_SECONDS = 5;
 const WORKER_NICE_INCREMENT = 10;
 
