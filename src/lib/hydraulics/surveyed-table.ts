@@ -10,18 +10,6 @@ export interface PieceValues {
   firstMoment: number;
 }
 
-/** The index of `level` in the ascending `levels`, which hold it. */
-function levelIndex(levels: readonly number[], level: number): number {
-  let lo = 0;
-  let hi = levels.length - 1;
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if (levels[mid] < level) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}
-
 /**
  * Between two consecutive ground elevations every piece of ground is dry, wholly wet, or wet over a fraction that
  * grows linearly with the level, so the top width T and the wetted perimeter P are linear in the level there, and
@@ -69,8 +57,9 @@ export class SurveyTable {
       const segments = subAreas[j];
       changes.fill(0);
       for (const { x1, z1, x2, z2 } of segments) {
-        const low = levelIndex(levels, z1 <= z2 ? z1 : z2);
-        const high = levelIndex(levels, z1 <= z2 ? z2 : z1);
+        // The index of a ground elevation in levels: one past the interval below it.
+        const low = this.interval(z1 <= z2 ? z1 : z2) + 1;
+        const high = this.interval(z1 <= z2 ? z2 : z1) + 1;
         const width = Math.abs(x2 - x1);
         const rise = Math.abs(z2 - z1);
         const length = Math.hypot(width, rise);
