@@ -33,6 +33,7 @@ export const ROUTE_ACCESS: Record<string, Partial<Record<'GET' | 'POST' | 'PATCH
   'api/letters/[id]': { GET: ['liaison', 'admin', 'designer', 'checker'] },
   'api/letters/batches/[id]': { GET: ['liaison', 'admin', 'designer', 'checker'] },
   'api/letters/batches/[id]/send': { POST: ['liaison'] },
+  'api/letters/batches/[id]/print': { GET: ['liaison'] },
 };
 
 export const ACTION_ACCESS: Record<string, Record<string, Access>> = {
@@ -47,7 +48,7 @@ export const ACTION_ACCESS: Record<string, Record<string, Access>> = {
   '(portal)/schemes/[id]': { startDraftAction: ['designer'], adoptSizedCrestAction: ['designer'] },
   '(portal)/liaison/[id]/register': { saveParcelEditsAction: ['liaison'] },
   '(portal)/liaison/[id]/template': { saveLetterTemplateAction: ['liaison'] },
-  '(portal)/liaison/[id]/letters': { generateLettersAction: ['liaison'] },
+  '(portal)/liaison/[id]/letters': { generateLettersAction: ['liaison'], withdrawBatchAction: ['liaison'], resendLetterAction: ['liaison'], markPostedAction: ['liaison'] },
   '(portal)/liaison/[id]/letters/[letterId]': { logLetterResponseAction: ['liaison'] },
 };
 
@@ -92,6 +93,7 @@ export const ROUTE_OWNERSHIP: Record<string, Partial<Record<'GET' | 'POST' | 'PA
   'api/letters/[id]': { GET: 'parcels-reader' },
   'api/letters/batches/[id]': { GET: 'parcels-reader' },
   'api/letters/batches/[id]/send': { POST: 'shared' },
+  'api/letters/batches/[id]/print': { GET: 'shared' },
 };
 
 export const ACTION_OWNERSHIP: Record<string, Record<string, Ownership>> = {
@@ -106,6 +108,6 @@ export const ACTION_OWNERSHIP: Record<string, Record<string, Ownership>> = {
   '(portal)/schemes/[id]': { startDraftAction: 'scheme-designer', adoptSizedCrestAction: 'scheme-designer' },
   '(portal)/liaison/[id]/register': { saveParcelEditsAction: 'shared' },
   '(portal)/liaison/[id]/template': { saveLetterTemplateAction: 'shared' },
-  '(portal)/liaison/[id]/letters': { generateLettersAction: 'shared' },
+  '(portal)/liaison/[id]/letters': { generateLettersAction: 'shared', withdrawBatchAction: 'shared', resendLetterAction: 'shared', markPostedAction: 'shared' },
   '(portal)/liaison/[id]/letters/[letterId]': { logLetterResponseAction: 'shared' },
 };

@@ -110,7 +110,10 @@ export const ACTION_TARGETS: Record<string, ActionTarget> = {
   '(portal)/schemes/[id] startDraftAction': { role: 'designer', valid: (w) => json({ revisionId: w.certified.revisionId }) },
   '(portal)/schemes/[id] adoptSizedCrestAction': { role: 'designer', valid: (w) => json({ revisionId: w.draft.revisionId }) },
   '(portal)/liaison/[id]/register saveParcelEditsAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, baseRegisterId: w.certified.registerId ?? 'none', note: 'fuzz', parcels: [parcel] }) },
-  '(portal)/liaison/[id]/template saveLetterTemplateAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, ...paragraphs }) },
-  '(portal)/liaison/[id]/letters generateLettersAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, revisionId: w.certified.revisionId }) },
+  '(portal)/liaison/[id]/template saveLetterTemplateAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, responseDays: 28, ...paragraphs }) },
+  '(portal)/liaison/[id]/letters generateLettersAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, revisionId: w.certified.revisionId, parcelReferences: ['HM-02'] }) },
+  '(portal)/liaison/[id]/letters withdrawBatchAction': { role: 'liaison', valid: (w) => json({ batchId: w.letters.batchId }) },
+  '(portal)/liaison/[id]/letters resendLetterAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId }) },
+  '(portal)/liaison/[id]/letters markPostedAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId, postedOn: '2026-01-12' }) },
   '(portal)/liaison/[id]/letters/[letterId] logLetterResponseAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId, receivedOn: '2026-01-12', summary: 'Owner telephoned; no objection.' }) },
 };
