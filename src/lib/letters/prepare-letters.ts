@@ -45,7 +45,8 @@ export async function latestVersions(revisionId: string, transaction?: Transacti
   return latest;
 }
 
-function letterImpact(row: ParcelImpactRow, revision: Revision, shared: Omit<LetterImpact, 'parcel' | 'category' | 'revision' | 'events' | 'governingEvent' | 'strip'>, discharges: Map<string, number>): LetterImpact {
+/** What one parcel's letter says about its land, from the revision's results. */
+export function letterImpact(row: ParcelImpactRow, revision: Revision, shared: Omit<LetterImpact, 'parcel' | 'category' | 'revision' | 'events' | 'governingEvent' | 'strip'>, discharges: Map<string, number>): LetterImpact {
   const { parcel } = row;
   return {
     ...shared,

@@ -78,3 +78,7 @@ export type MarkPostedInput = z.infer<typeof markPostedSchema>;
 
 export const letterIdSchema = z.object({ letterId: id });
 export const batchIdSchema = z.object({ batchId: id });
+
+/** The template as typed (saved or not) and the parcel whose letter to show. */
+export const previewLetterSchema = saveLetterTemplateSchema.extend({ parcelReference: z.string().trim().min(1, 'is required (the parcel to preview)').max(40, 'must be at most 40 characters') });
+export type PreviewLetterInput = z.infer<typeof previewLetterSchema>;

@@ -47,7 +47,7 @@ export const ACTION_ACCESS: Record<string, Record<string, Access>> = {
   '(portal)/schemes/new': { createSchemeAction: ['designer'] },
   '(portal)/schemes/[id]': { startDraftAction: ['designer'], adoptSizedCrestAction: ['designer'] },
   '(portal)/liaison/[id]/register': { saveParcelEditsAction: ['liaison'] },
-  '(portal)/liaison/[id]/template': { saveLetterTemplateAction: ['liaison'] },
+  '(portal)/liaison/[id]/template': { saveLetterTemplateAction: ['liaison'], previewLetterAction: ['liaison', 'admin', 'designer', 'checker'] },
   '(portal)/liaison/[id]/letters': { generateLettersAction: ['liaison'], withdrawBatchAction: ['liaison'], resendLetterAction: ['liaison'], markPostedAction: ['liaison'] },
   '(portal)/liaison/[id]/letters/[letterId]': { logLetterResponseAction: ['liaison'] },
 };
@@ -107,7 +107,7 @@ export const ACTION_OWNERSHIP: Record<string, Record<string, Ownership>> = {
   '(portal)/schemes/new': { createSchemeAction: 'none' },
   '(portal)/schemes/[id]': { startDraftAction: 'scheme-designer', adoptSizedCrestAction: 'scheme-designer' },
   '(portal)/liaison/[id]/register': { saveParcelEditsAction: 'shared' },
-  '(portal)/liaison/[id]/template': { saveLetterTemplateAction: 'shared' },
+  '(portal)/liaison/[id]/template': { saveLetterTemplateAction: 'shared', previewLetterAction: 'parcels-reader' },
   '(portal)/liaison/[id]/letters': { generateLettersAction: 'shared', withdrawBatchAction: 'shared', resendLetterAction: 'shared', markPostedAction: 'shared' },
   '(portal)/liaison/[id]/letters/[letterId]': { logLetterResponseAction: 'shared' },
 };

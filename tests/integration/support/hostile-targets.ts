@@ -111,6 +111,7 @@ export const ACTION_TARGETS: Record<string, ActionTarget> = {
   '(portal)/schemes/[id] adoptSizedCrestAction': { role: 'designer', valid: (w) => json({ revisionId: w.draft.revisionId }) },
   '(portal)/liaison/[id]/register saveParcelEditsAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, baseRegisterId: w.certified.registerId ?? 'none', note: 'fuzz', parcels: [parcel] }) },
   '(portal)/liaison/[id]/template saveLetterTemplateAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, responseDays: 28, ...paragraphs }) },
+  '(portal)/liaison/[id]/template previewLetterAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, responseDays: 28, parcelReference: 'HM-02', ...paragraphs }) },
   '(portal)/liaison/[id]/letters generateLettersAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, revisionId: w.certified.revisionId, parcelReferences: ['HM-02'] }) },
   '(portal)/liaison/[id]/letters withdrawBatchAction': { role: 'liaison', valid: (w) => json({ batchId: w.letters.batchId }) },
   '(portal)/liaison/[id]/letters resendLetterAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId }) },

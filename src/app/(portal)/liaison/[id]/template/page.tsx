@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import { loadLetterTemplate } from '@/lib/letters/letter-template';
+import { loadParcelRegister } from '@/lib/parcels/load-parcel-register';
 import { PLACEHOLDERS, PLACEHOLDER_NAMES } from '@/lib/validation/letter-placeholders';
 import { requireLiaisonPage } from '../../_components/scheme-page-access';
 import { TemplateForm } from './template-form';
@@ -8,11 +9,12 @@ export const metadata: Metadata = { title: 'Letter template' };
 
 export default async function TemplatePage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  const { access } = await requireLiaisonPage(id, `/liaison/${id}/template`);
+  const { user, access } = await requireLiaisonPage(id, `/liaison/${id}/template`);
   const template = await loadLetterTemplate(id);
+  const { parcels } = await loadParcelRegister({ user, schemeId: id });
   return (
     <div className="grid gap-10 lg:grid-cols-[2fr_1fr]">
-      <TemplateForm schemeId={id} paragraphs={template.paragraphs} responseDays={template.responseDays} version={template.version} readOnly={access !== 'manage'} />
+      <TemplateForm schemeId={id} paragraphs={template.paragraphs} responseDays={template.responseDays} version={template.version} readOnly={access !== 'manage'} parcels={parcels.map((p) => ({ reference: p.reference, ownerName: p.ownerName }))} />
       <aside className="text-sm text-ink-soft">
         <h2 className="mb-2 text-base font-semibold text-ink">What you write, and what the engine writes</h2>
         <p>These paragraphs are yours. The section “What would change on your land” — every level, distance, depth and flow, the table and the diagram — is written from the revision’s results and cannot be edited, so a letter never quotes a number the engine did not compute.</p>

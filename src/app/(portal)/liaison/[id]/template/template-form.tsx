@@ -7,6 +7,7 @@ import { useForm } from 'react-hook-form';
 import { type LetterParagraphs, MAX_RESPONSE_DAYS, MIN_RESPONSE_DAYS, type SaveLetterTemplateInput, saveLetterTemplateSchema } from '@/lib/validation/letter-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { saveLetterTemplateAction } from './actions';
+import { LetterPreview } from './letter-preview';
 
 const FIELDS: { name: keyof LetterParagraphs; label: string; hint: string; rows: number }[] = [
   { name: 'introduction', label: 'Who we are and why we write', hint: 'Opens the letter, after “Dear …”.', rows: 4 },
@@ -16,10 +17,10 @@ const FIELDS: { name: keyof LetterParagraphs; label: string; hint: string; rows:
   { name: 'signOff', label: 'Signed', hint: 'Name and position under “Yours sincerely”.', rows: 2 },
 ];
 
-export function TemplateForm({ schemeId, paragraphs, responseDays, version, readOnly }: { schemeId: string; paragraphs: LetterParagraphs; responseDays: number; version: number; readOnly: boolean }) {
+export function TemplateForm({ schemeId, paragraphs, responseDays, version, readOnly, parcels }: { schemeId: string; paragraphs: LetterParagraphs; responseDays: number; version: number; readOnly: boolean; parcels: { reference: string; ownerName: string }[] }) {
   const router = useRouter();
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<SaveLetterTemplateInput>({ resolver: zodResolver(saveLetterTemplateSchema), defaultValues: { schemeId, responseDays, ...paragraphs } });
+  const { register, handleSubmit, setError, getValues, formState } = useForm<SaveLetterTemplateInput>({ resolver: zodResolver(saveLetterTemplateSchema), defaultValues: { schemeId, responseDays, ...paragraphs } });
 
   const onSubmit = handleSubmit(async (values) => {
     const result = await saveLetterTemplateAction(values);
@@ -44,6 +45,7 @@ export function TemplateForm({ schemeId, paragraphs, responseDays, version, read
         <input id="template-response-days" type="number" inputMode="numeric" min={MIN_RESPONSE_DAYS} max={MAX_RESPONSE_DAYS} step={1} readOnly={readOnly} aria-describedby="template-response-days-hint" aria-invalid={formState.errors.responseDays ? true : undefined} className={`${inputClassName} max-w-[8rem]`} {...register('responseDays', { valueAsNumber: true })} />
       </FormField>
       {readOnly ? <p className="text-sm text-ink-soft">Only a landowner liaison officer can change the template.</p> : <button type="submit" className={buttonClassName} disabled={formState.isSubmitting}>Save the template</button>}
+      <LetterPreview parcels={parcels} values={getValues} />
     </form>
   );
 }
