@@ -13,6 +13,7 @@ export interface TrackedLetter {
   status: LetterStatus;
   failureReason: string | null;
   sentAt: string | null;
+  responseDueOn: string | null;
   responses: number;
   createdAt: string;
 }
@@ -40,6 +41,7 @@ export async function listLetterTracking({ user, schemeId }: { user: SessionUser
       status: l.status as LetterStatus,
       failureReason: l.failureReason,
       sentAt: l.sentAt,
+      responseDueOn: l.responseDueOn ?? null,
       responses: responses.filter((r) => r.letterId === l.id).length,
       createdAt: l.createdAt,
     });

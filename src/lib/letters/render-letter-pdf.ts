@@ -27,6 +27,8 @@ export interface LetterDocument {
   /** The template's paragraphs with the placeholders already filled in. */
   paragraphs: LetterParagraphs;
   impact: LetterImpact;
+  /** Set on a reminder: the day of the first letter it follows up (the dates above are the reminder's own). */
+  reminderOf?: { firstLetterDate: string };
 }
 
 const INK = '#1f2a2e';
@@ -126,7 +128,10 @@ function footers(doc: Doc, letter: LetterDocument, firstPage: number): void {
 
 function body(doc: Doc, letter: LetterDocument): void {
   const { impact, paragraphs } = letter;
-  doc.moveDown(1.2).font('sansSemiBold').fontSize(13).fillColor(INK).text(letterText(`${letter.scheme.name}: what it would mean for your land`));
+  doc.moveDown(1.2).font('sansSemiBold').fontSize(13).fillColor(INK).text(letterText(`${letter.reminderOf ? 'Reminder: ' : ''}${letter.scheme.name}: what it would mean for your land`));
+  if (letter.reminderOf) {
+    doc.font('sans').fontSize(10).fillColor(INK).text(letterText(`We wrote to you on ${longDate(letter.reminderOf.firstLetterDate)} and have not yet heard from you. We repeat that letter below; please respond by ${longDate(letter.respondBy)}.`));
+  }
   if (letter.preliminary) {
     doc.font('sansSemiBold').fontSize(9.5).fillColor('#a33a2a').text('PRELIMINARY: these figures come from a design that has not yet been independently checked and countersigned. They may change.');
   }

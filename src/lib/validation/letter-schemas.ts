@@ -64,12 +64,21 @@ export const sendBatchSchema = z.object({
 });
 export type SendBatchInput = z.infer<typeof sendBatchSchema>;
 
-export const logResponseSchema = z.object({
-  letterId: id,
+export const RESPONSE_TYPES = { 'no-objection': 'No objection', objection: 'Objection', question: 'Question', other: 'Other' } as const;
+export const RESPONSE_CHANNELS = { email: 'E-mail', post: 'Post', telephone: 'Telephone', meeting: 'Meeting' } as const;
+const keysOf = <T extends object>(o: T) => Object.keys(o) as [keyof T & string, ...(keyof T & string)[]];
+
+const responseFields = {
   receivedOn: isoDateText('the day the response arrived').refine((d) => Date.parse(`${d}T00:00:00Z`) <= Date.now(), { error: 'must not be in the future' }),
+  responseType: z.enum(keysOf(RESPONSE_TYPES), 'must be no objection, objection, question or other'),
+  channel: z.enum(keysOf(RESPONSE_CHANNELS), 'must be e-mail, post, telephone or meeting'),
   summary: multiLineText('what the landowner said').min(3, 'is required (what the landowner said, at least 3 characters)').max(2000, 'must be at most 2000 characters'),
-});
+};
+export const logResponseSchema = z.object({ letterId: id, ...responseFields });
 export type LogResponseInput = z.infer<typeof logResponseSchema>;
+
+export const editResponseSchema = z.object({ responseId: id, ...responseFields });
+export type EditResponseInput = z.infer<typeof editResponseSchema>;
 
 const pastDay = (what: string) => isoDateText(what).refine((d) => Date.parse(`${d}T00:00:00Z`) <= Date.now(), { error: 'must not be in the future' });
 

@@ -30,10 +30,12 @@ export const ROUTE_ACCESS: Record<string, Partial<Record<'GET' | 'POST' | 'PATCH
   'api/parcels/[id]/csv': { POST: ['liaison'] },
   'api/parcels/[id]/csv-preview': { POST: ['liaison'] },
   'api/parcels/[id]/impact': { GET: ['liaison', 'admin', 'designer', 'checker'] },
+  'api/parcels/[id]/export': { GET: ['liaison', 'admin', 'designer', 'checker'] },
   'api/letters/[id]': { GET: ['liaison', 'admin', 'designer', 'checker'] },
   'api/letters/batches/[id]': { GET: ['liaison', 'admin', 'designer', 'checker'] },
   'api/letters/batches/[id]/send': { POST: ['liaison'] },
   'api/letters/batches/[id]/print': { GET: ['liaison'] },
+  'api/letters/reminders/[id]': { GET: ['liaison'] },
 };
 
 export const ACTION_ACCESS: Record<string, Record<string, Access>> = {
@@ -49,7 +51,7 @@ export const ACTION_ACCESS: Record<string, Record<string, Access>> = {
   '(portal)/liaison/[id]/register': { saveParcelEditsAction: ['liaison'] },
   '(portal)/liaison/[id]/template': { saveLetterTemplateAction: ['liaison'], previewLetterAction: ['liaison', 'admin', 'designer', 'checker'] },
   '(portal)/liaison/[id]/letters': { generateLettersAction: ['liaison'], withdrawBatchAction: ['liaison'], resendLetterAction: ['liaison'], markPostedAction: ['liaison'] },
-  '(portal)/liaison/[id]/letters/[letterId]': { logLetterResponseAction: ['liaison'] },
+  '(portal)/liaison/[id]/letters/[letterId]': { logLetterResponseAction: ['liaison'], editLetterResponseAction: ['liaison'], makeReminderAction: ['liaison'] },
 };
 
 /**
@@ -90,10 +92,12 @@ export const ROUTE_OWNERSHIP: Record<string, Partial<Record<'GET' | 'POST' | 'PA
   'api/parcels/[id]/csv': { POST: 'shared' },
   'api/parcels/[id]/csv-preview': { POST: 'shared' },
   'api/parcels/[id]/impact': { GET: 'parcels-reader' },
+  'api/parcels/[id]/export': { GET: 'parcels-reader' },
   'api/letters/[id]': { GET: 'parcels-reader' },
   'api/letters/batches/[id]': { GET: 'parcels-reader' },
   'api/letters/batches/[id]/send': { POST: 'shared' },
   'api/letters/batches/[id]/print': { GET: 'shared' },
+  'api/letters/reminders/[id]': { GET: 'shared' },
 };
 
 export const ACTION_OWNERSHIP: Record<string, Record<string, Ownership>> = {
@@ -109,5 +113,5 @@ export const ACTION_OWNERSHIP: Record<string, Record<string, Ownership>> = {
   '(portal)/liaison/[id]/register': { saveParcelEditsAction: 'shared' },
   '(portal)/liaison/[id]/template': { saveLetterTemplateAction: 'shared', previewLetterAction: 'parcels-reader' },
   '(portal)/liaison/[id]/letters': { generateLettersAction: 'shared', withdrawBatchAction: 'shared', resendLetterAction: 'shared', markPostedAction: 'shared' },
-  '(portal)/liaison/[id]/letters/[letterId]': { logLetterResponseAction: 'shared' },
+  '(portal)/liaison/[id]/letters/[letterId]': { logLetterResponseAction: 'shared', editLetterResponseAction: 'shared', makeReminderAction: 'shared' },
 };

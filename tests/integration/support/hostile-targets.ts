@@ -58,6 +58,8 @@ export const RAW_BODY_TARGETS: Record<string, RawBodyTarget> = {
 
 export interface QueryTarget {
   role: Person;
+  /** The record in the route's path, for routes under an [id]. */
+  id?: (world: PortalWorld) => string;
   /** A valid query (without the "?"). */
   valid: (world: PortalWorld) => string;
   /** Hostile queries, each with the field its refusal must name. */
@@ -66,6 +68,17 @@ export interface QueryTarget {
 
 /** GET route handlers that read filters from their query, keyed "GET route": bad filters get 400 naming the field. */
 export const QUERY_TARGETS: Record<string, QueryTarget> = {
+  'GET api/parcels/[id]/export': {
+    role: 'liaison',
+    id: (w) => w.certified.schemeId,
+    valid: () => 'table=impact',
+    hostile: [
+      { query: 'table=owners', field: 'table' },
+      { query: 'table=%3DHYPERLINK(%22x%22)', field: 'table' },
+      { query: 'table=register&table=impact', field: 'table' },
+      { query: 'table=impact&revision=..%2F..%2Fetc', field: 'revision' },
+    ],
+  },
   'GET api/admin/audit/csv': {
     role: 'admin',
     valid: (w) => `person=${w.people.designer.user.id}&action=user.signed-in&from=2026-01-01&to=2026-12-31&q=Harrowfield`,
@@ -116,5 +129,7 @@ export const ACTION_TARGETS: Record<string, ActionTarget> = {
   '(portal)/liaison/[id]/letters withdrawBatchAction': { role: 'liaison', valid: (w) => json({ batchId: w.letters.batchId }) },
   '(portal)/liaison/[id]/letters resendLetterAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId }) },
   '(portal)/liaison/[id]/letters markPostedAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId, postedOn: '2026-01-12' }) },
-  '(portal)/liaison/[id]/letters/[letterId] logLetterResponseAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId, receivedOn: '2026-01-12', summary: 'Owner telephoned; no objection.' }) },
+  '(portal)/liaison/[id]/letters/[letterId] logLetterResponseAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId, receivedOn: '2026-01-12', responseType: 'no-objection', channel: 'telephone', summary: 'Owner telephoned; no objection.' }) },
+  '(portal)/liaison/[id]/letters/[letterId] editLetterResponseAction': { role: 'liaison', valid: () => json({ responseId: 'no-such-response', receivedOn: '2026-01-12', responseType: 'question', channel: 'post', summary: 'Owner wrote asking about the gateway.' }) },
+  '(portal)/liaison/[id]/letters/[letterId] makeReminderAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId }) },
 };
