@@ -62,7 +62,7 @@ export async function loadRoleHome(user: SessionUser): Promise<RoleHome> {
       return { sections: [{ heading: 'Certificates to download', empty: 'No certificate has been issued yet.', items: certificates.map((c) => ({ id: c.id, title: c.number, detail: `Issued ${c.issuedAt.slice(0, 10)}`, status: c.status, href: `/api/certificates/${c.id}/pdf`, download: true })) }] };
     }
     case 'admin': {
-      const invitations = await Invitation.findAll({ where: { acceptedAt: null }, order: [['createdAt', 'DESC']], limit: 20 });
+      const invitations = await Invitation.findAll({ where: { acceptedAt: null, cancelledAt: null }, order: [['createdAt', 'DESC']], limit: 20 });
       const events = await AuditEvent.findAll({ order: [['id', 'DESC']], limit: 8 });
       return {
         sections: [
