@@ -6,6 +6,7 @@ import { longDate } from '@/lib/dates/calendar-dates';
 import type { SaveLetterTemplateInput } from '@/lib/validation/letter-schemas';
 import { buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { previewLetterAction } from './actions';
+import { fieldWords } from './template-fields';
 
 /** Shows, before any letter is made, what the template as typed says to one chosen parcel's owner. */
 export function LetterPreview({ parcels, values }: { parcels: { reference: string; ownerName: string }[]; values: () => SaveLetterTemplateInput }) {
@@ -17,7 +18,7 @@ export function LetterPreview({ parcels, values }: { parcels: { reference: strin
   const show = async () => {
     const result = await previewLetterAction({ ...values(), parcelReference });
     setPreview(result.ok ? result.data : null);
-    setProblem(result.ok ? null : result.issues.length ? `${result.error} ${result.issues.map((i) => `${i.label ?? i.path}: ${i.message}`).join('; ')}` : result.error);
+    setProblem(result.ok ? null : result.issues.length ? `${result.error} ${result.issues.map((i) => `${fieldWords(i.path)} ${i.message}`).join('; ')}` : result.error);
   };
 
   return (

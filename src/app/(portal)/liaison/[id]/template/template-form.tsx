@@ -8,14 +8,8 @@ import { type LetterParagraphs, MAX_RESPONSE_DAYS, MIN_RESPONSE_DAYS, type SaveL
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { saveLetterTemplateAction } from './actions';
 import { LetterPreview } from './letter-preview';
+import { FIELDS } from './template-fields';
 
-const FIELDS: { name: keyof LetterParagraphs; label: string; hint: string; rows: number }[] = [
-  { name: 'introduction', label: 'Who we are and why we write', hint: 'Opens the letter, after “Dear …”.', rows: 4 },
-  { name: 'scheme', label: 'The scheme', hint: 'What the scheme is, in plain words.', rows: 4 },
-  { name: 'response', label: 'How to respond', hint: 'After the figures and the caution.', rows: 4 },
-  { name: 'contact', label: 'Contact details', hint: 'One item per line: office, address, telephone, e-mail.', rows: 4 },
-  { name: 'signOff', label: 'Signed', hint: 'Name and position under “Yours sincerely”.', rows: 2 },
-];
 
 export function TemplateForm({ schemeId, paragraphs, responseDays, version, readOnly, parcels }: { schemeId: string; paragraphs: LetterParagraphs; responseDays: number; version: number; readOnly: boolean; parcels: { reference: string; ownerName: string }[] }) {
   const router = useRouter();
