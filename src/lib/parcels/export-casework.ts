@@ -1,6 +1,8 @@
 import 'server-only';
 import type { SessionUser } from '@/lib/auth/current-session';
+import { portalTimeZone } from '@/lib/config/portal-time-zone';
 import { LetterResponse } from '@/lib/db';
+import { calendarDateIn } from '@/lib/dates/calendar-dates';
 import type { ResponseChannel, ResponseType } from '@/lib/db/models/letter';
 import { listLetterTracking } from '@/lib/letters/list-letter-tracking';
 import { RESPONSE_CHANNELS, RESPONSE_TYPES } from '@/lib/validation/letter-schemas';
@@ -22,6 +24,7 @@ export async function exportCasework({ user, schemeId, table, revisionId }: { us
     return { csv: impactCsv(impact), fileName: name(`impact-revision-${impact.revision?.number ?? 'none'}`) };
   }
   const tracking = await listLetterTracking({ user, schemeId });
+  const timeZone = portalTimeZone();
   const ids = tracking.parcels.flatMap((p) => p.letters.map((l) => l.id));
   const responses = await LetterResponse.findAll({ where: { letterId: ids }, order: [['receivedAt', 'DESC'], ['createdAt', 'DESC']] });
   const rows = tracking.parcels.flatMap((p) =>
@@ -31,7 +34,7 @@ export async function exportCasework({ user, schemeId, table, revisionId }: { us
       letterVersion: l.version,
       revisionNumber: l.revisionNumber,
       status: STATUS_WORDS[l.status] ?? l.status,
-      sentOn: l.sentAt?.slice(0, 10) ?? null,
+      sentOn: l.postedOn ?? (l.sentAt ? calendarDateIn(timeZone, l.sentAt) : null),
       dueOn: l.responseDueOn,
       responses: responses.filter((r) => r.letterId === l.id).map((r) => ({ receivedOn: r.receivedAt.slice(0, 10), type: RESPONSE_TYPES[r.responseType as ResponseType], channel: RESPONSE_CHANNELS[r.channel as ResponseChannel], summary: r.summary })),
     })),

@@ -17,7 +17,7 @@ export function TrackingTable({ schemeId, parcels }: { schemeId: string; parcels
             <td className="py-2 pr-3"><Link className="text-accent underline" href={`/liaison/${schemeId}/letters/${l.id}`}>Version <span className="num">{l.version}</span>, revision <span className="num">{l.revisionNumber}</span></Link>{l.preliminary ? <span className="ml-1 text-xs font-semibold text-verdict-caution">PRELIMINARY</span> : null}</td>
             <td className="py-2 pr-3">{l.recipient}</td>
             <td className="py-2 pr-3"><LetterStatusLabel status={l.status} />{l.failureReason ? <span className="block text-xs text-verdict-fail">{l.failureReason}</span> : null}</td>
-            <td className="py-2 pr-3"><LocalTime iso={l.sentAt} /></td>
+            <td className="py-2 pr-3">{l.postedOn ? <span className="num">{l.postedOn} (posted)</span> : <LocalTime iso={l.sentAt} />}</td>
             <td className="num py-2 pr-3">{l.responseDueOn ?? '—'}</td>
             <td className="num py-2">{l.responses}</td>
           </tr>
