@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { previewLetterAction, saveLetterTemplateAction } from '@/app/(portal)/liaison/[id]/template/actions';
 import { LetterTemplate, database } from '@/lib/db';
-import { DEFAULT_PARAGRAPHS, loadLetterTemplate } from '@/lib/letters/letter-template';
+import { DEFAULT_PARAGRAPHS, listTemplateVersions, loadLetterTemplate } from '@/lib/letters/letter-template';
 import { createTestRevision, createTestScheme, demoParcelsCsv } from './support/liaison-fixtures';
 import { callRoute } from './support/scheme-requests';
 import { signedInAs } from './support/session-double';
@@ -40,6 +40,7 @@ describe('the letter template', () => {
     expect(await saveLetterTemplateAction({ schemeId, responseDays: 35, ...DEFAULT_PARAGRAPHS })).toMatchObject({ ok: true, data: { version: 2 } });
     expect((await LetterTemplate.findAll({ where: { schemeId }, order: [['version', 'ASC']] })).map((t) => [t.version, t.responseDays])).toEqual([[1, 21], [2, 35]]);
     expect((await loadLetterTemplate(schemeId)).responseDays).toBe(35);
+    expect((await listTemplateVersions(schemeId)).map((v) => [v.version, v.responseDays, v.savedBy])).toEqual([[2, 35, liaison.name], [1, 21, liaison.name]]);
   });
 
   it('previews the letter for a chosen parcel, unsaved wording and all, with every placeholder filled in and nothing stored', async () => {

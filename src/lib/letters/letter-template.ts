@@ -1,6 +1,6 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
-import { LetterTemplate, database } from '@/lib/db';
+import { LetterTemplate, User, database } from '@/lib/db';
 import type { LetterParagraphs } from '@/lib/validation/letter-schemas';
 import { DEFAULT_RESPONSE_DAYS, letterParagraphsSchema } from '@/lib/validation/letter-schemas';
 
@@ -31,4 +31,12 @@ export async function loadLetterTemplate(schemeId: string, transaction?: Transac
   if (!latest) return { id: null, version: 0, paragraphs: DEFAULT_PARAGRAPHS, responseDays: DEFAULT_RESPONSE_DAYS, updatedAt: null };
   const parsed = letterParagraphsSchema.safeParse(JSON.parse(latest.paragraphsJson));
   return { id: latest.id, version: latest.version, paragraphs: parsed.success ? parsed.data : DEFAULT_PARAGRAPHS, responseDays: latest.responseDays, updatedAt: latest.createdAt };
+}
+
+/** Every saved version of the scheme's template, newest first, with who saved it: versions are kept, never overwritten. */
+export async function listTemplateVersions(schemeId: string) {
+  database();
+  const versions = await LetterTemplate.findAll({ where: { schemeId }, order: [['version', 'DESC']] });
+  const names = new Map((await User.findAll({ where: { id: versions.map((v) => v.updatedBy) }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
+  return versions.map((v) => ({ version: v.version, savedAt: v.createdAt, savedBy: names.get(v.updatedBy) ?? 'unknown user', responseDays: v.responseDays }));
 }

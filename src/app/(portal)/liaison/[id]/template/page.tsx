@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
-import { loadLetterTemplate } from '@/lib/letters/letter-template';
+import { listTemplateVersions, loadLetterTemplate } from '@/lib/letters/letter-template';
+import { LocalTime } from '@/components/ui/local-time';
 import { loadParcelRegister } from '@/lib/parcels/load-parcel-register';
 import { PLACEHOLDERS, PLACEHOLDER_NAMES } from '@/lib/validation/letter-placeholders';
 import { requireLiaisonPage } from '../../_components/scheme-page-access';
@@ -12,6 +13,7 @@ export default async function TemplatePage({ params }: { params: Promise<{ id: s
   const { user, access } = await requireLiaisonPage(id, `/liaison/${id}/template`);
   const template = await loadLetterTemplate(id);
   const { parcels } = await loadParcelRegister({ user, schemeId: id });
+  const versions = await listTemplateVersions(id);
   return (
     <div className="grid gap-10 lg:grid-cols-[2fr_1fr]">
       <TemplateForm schemeId={id} paragraphs={template.paragraphs} responseDays={template.responseDays} version={template.version} readOnly={access !== 'manage'} parcels={parcels.map((p) => ({ reference: p.reference, ownerName: p.ownerName }))} />
@@ -29,7 +31,15 @@ export default async function TemplatePage({ params }: { params: Promise<{ id: s
             </div>
           ))}
         </dl>
-        <p className="mt-4">{template.version === 0 ? 'The standard paragraphs are in use; saving makes version 1.' : <>Version <span className="num">{template.version}</span>, saved <span className="num">{template.updatedAt?.slice(0, 10)}</span>. Letters already made keep the version they used; earlier versions stay in the audit trail.</>}</p>
+        <p className="mt-4">{template.version === 0 ? 'The standard paragraphs are in use; saving makes version 1.' : 'Letters already made keep the version they used.'}</p>
+        {versions.length > 0 ? (
+          <>
+            <h3 className="mt-4 font-semibold text-ink">Saved versions</h3>
+            <ul className="mt-1 space-y-1" data-testid="template-versions">
+              {versions.map((v) => <li key={v.version}>Version <span className="num">{v.version}</span>: <LocalTime iso={v.savedAt} />, by {v.savedBy}; <span className="num">{v.responseDays}</span> days to respond</li>)}
+            </ul>
+          </>
+        ) : null}
       </aside>
     </div>
   );
