@@ -4,17 +4,19 @@ import { navigationFor } from '@/lib/auth/navigation';
 import { requirePageRole } from '@/lib/auth/page-guard';
 import { ANY_ROLE } from '@/lib/auth/authorize';
 import { ROLE_LABELS } from '@/lib/auth/roles';
+import { portalTimeZone } from '@/lib/config/portal-time-zone';
+import { TimeZoneProvider } from '@/components/ui/time-zone-context';
 
 export default async function PortalLayout({ children }: { children: ReactNode }) {
   const user = await requirePageRole(ANY_ROLE);
   return (
-    <>
+    <TimeZoneProvider timeZone={portalTimeZone()}>
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-white focus:p-2">Skip to content</a>
       <PortalHeader links={navigationFor(user.role)} userName={user.name} roleLabel={ROLE_LABELS[user.role]} />
       <main id="main" className="mx-auto max-w-sheet px-6 py-8">{children}</main>
       <footer className="mx-auto max-w-sheet px-6 pb-10 text-xs text-ink-faint">
         Sillmark supports, and never replaces, a licensed engineer’s judgement and the local codes and regulations.
       </footer>
-    </>
+    </TimeZoneProvider>
   );
 }

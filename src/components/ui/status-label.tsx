@@ -10,6 +10,9 @@ const STYLES: Record<string, { icon: string; className: string }> = {
   active: { icon: '●', className: 'text-verdict-pass border-verdict-pass' },
   invited: { icon: '✉', className: 'text-accent border-accent' },
   disabled: { icon: '○', className: 'text-ink-faint border-paper-edge' },
+  deactivated: { icon: '○', className: 'text-ink-faint border-paper-edge' },
+  overdue: { icon: '!', className: 'text-verdict-fail border-verdict-fail' },
+  'due soon': { icon: '⧗', className: 'text-verdict-caution border-verdict-caution' },
 };
 
 export function StatusLabel({ status }: { status: string }) {

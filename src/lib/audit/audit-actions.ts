@@ -8,6 +8,10 @@ export const AUDIT_ACTIONS = {
   'user.invited': 'Invited a user',
   'user.invitation-accepted': 'Accepted an invitation',
   'user.role-changed': 'Changed a role',
+  'user.deactivated': 'Deactivated a user',
+  'user.reactivated': 'Reactivated a user',
+  'user.invitation-resent': 'Resent an invitation',
+  'user.invitation-cancelled': 'Cancelled an invitation',
   'user.countersign-password-failed': 'Wrong password when countersigning',
   'user.countersign-locked-out': 'Countersigning locked',
   'user.revoke-password-failed': 'Wrong password when revoking',
@@ -40,6 +44,12 @@ export const AUDIT_ACTIONS = {
   'letter.send-failed': 'A letter failed to send',
   'letter.requeued': 'Put a letter back in the queue',
   'letter.response-logged': 'Logged a reply to a letter',
+  'letters.batch-withdrawn': 'Withdrew a batch of letters',
+  'letter.resend': 'Put a failed letter back to be sent',
+  'letter.posted': 'Marked a letter posted',
+  'letters.printed': 'Printed the letters to post',
+  'letter.response-edited': 'Edited a reply to a letter',
+  'letter.reminder-made': 'Made a reminder',
   'audit.exported': 'Exported the audit trail',
 } as const satisfies Record<string, string>;
 

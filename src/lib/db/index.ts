@@ -34,7 +34,7 @@ export { closeSequelize } from './sequelize';
 export { AuditEvent } from './models/audit-event';
 export { Certificate } from './models/certificate';
 export { Invitation } from './models/invitation';
-export { Letter, LetterBatch, LetterResponse, LetterTemplate } from './models/letter';
+export { Letter, LetterBatch, LetterReminder, LetterResponse, LetterResponseEdit, LetterTemplate } from './models/letter';
 export { OutboundMessage } from './models/outbound-message';
 export { OutboxMessage } from './models/outbox-message';
 export { Parcel, ParcelRegister } from './models/parcel';

@@ -22,6 +22,7 @@ export const ROUTE_ACCESS: Record<string, Partial<Record<'GET' | 'POST' | 'PATCH
   'api/admin/users': { GET: ['admin'], POST: ['admin'] },
   'api/admin/users/[id]': { PATCH: ['admin'] },
   'api/admin/audit/csv': { GET: ['admin'] },
+  'api/admin/outbox/[id]/attachment': { GET: ['admin'] },
   'api/certificates': { GET: ['planning', 'admin', 'checker', 'liaison'] },
   'api/certificates/[id]/pdf': { GET: ALL },
   'api/certificates/verification': { POST: ALL },
@@ -31,16 +32,19 @@ export const ROUTE_ACCESS: Record<string, Partial<Record<'GET' | 'POST' | 'PATCH
   'api/parcels/[id]/csv-preview': { POST: ['liaison'] },
   'api/parcels/[id]/impact': { GET: ['liaison', 'admin', 'designer', 'checker'] },
   'api/parcels/[id]/plan': { POST: ['liaison'] },
+  'api/parcels/[id]/export': { GET: ['liaison', 'admin', 'designer', 'checker'] },
   'api/letters/[id]': { GET: ['liaison', 'admin', 'designer', 'checker'] },
   'api/letters/batches/[id]': { GET: ['liaison', 'admin', 'designer', 'checker'] },
   'api/letters/batches/[id]/send': { POST: ['liaison'] },
+  'api/letters/batches/[id]/print': { GET: ['liaison'] },
+  'api/letters/reminders/[id]': { GET: ['liaison'] },
 };
 
 export const ACTION_ACCESS: Record<string, Record<string, Access>> = {
   '(auth)/sign-in': { signInAction: 'public' },
   '(auth)/invitation/[token]': { acceptInvitationAction: 'public' },
   '(portal)': { signOutAction: ALL },
-  '(portal)/admin/users': { inviteUserAction: ['admin'], changeRoleAction: ['admin'] },
+  '(portal)/admin/users': { inviteUserAction: ['admin'], changeRoleAction: ['admin'], setUserActiveAction: ['admin'], resendInvitationAction: ['admin'], cancelInvitationAction: ['admin'] },
   '(portal)/revisions/[id]': { submitForCheckAction: ['designer'] },
   '(portal)/checks/[id]': { addReviewCommentAction: ['checker'], returnRevisionAction: ['checker'], countersignRevisionAction: ['checker'] },
   '(portal)/admin/certificates': { revokeCertificateAction: ['admin'] },
@@ -48,9 +52,9 @@ export const ACTION_ACCESS: Record<string, Record<string, Access>> = {
   '(portal)/schemes/[id]': { startDraftAction: ['designer'], adoptSizedCrestAction: ['designer'] },
   '(portal)/liaison/[id]/register': { saveParcelEditsAction: ['liaison'] },
   '(portal)/liaison/[id]/register/history': { restoreRegisterVersionAction: ['liaison'] },
-  '(portal)/liaison/[id]/template': { saveLetterTemplateAction: ['liaison'] },
-  '(portal)/liaison/[id]/letters': { generateLettersAction: ['liaison'] },
-  '(portal)/liaison/[id]/letters/[letterId]': { logLetterResponseAction: ['liaison'] },
+  '(portal)/liaison/[id]/template': { saveLetterTemplateAction: ['liaison'], previewLetterAction: ['liaison', 'admin', 'designer', 'checker'] },
+  '(portal)/liaison/[id]/letters': { generateLettersAction: ['liaison'], withdrawBatchAction: ['liaison'], resendLetterAction: ['liaison'], markPostedAction: ['liaison'] },
+  '(portal)/liaison/[id]/letters/[letterId]': { logLetterResponseAction: ['liaison'], editLetterResponseAction: ['liaison'], makeReminderAction: ['liaison'] },
 };
 
 /**
@@ -83,6 +87,7 @@ export const ROUTE_OWNERSHIP: Record<string, Partial<Record<'GET' | 'POST' | 'PA
   'api/admin/users': { GET: 'shared', POST: 'shared' },
   'api/admin/users/[id]': { PATCH: 'shared' },
   'api/admin/audit/csv': { GET: 'shared' },
+  'api/admin/outbox/[id]/attachment': { GET: 'shared' },
   'api/certificates': { GET: 'none' },
   'api/certificates/[id]/pdf': { GET: 'certificate-reader' },
   'api/certificates/verification': { POST: 'none' },
@@ -92,16 +97,19 @@ export const ROUTE_OWNERSHIP: Record<string, Partial<Record<'GET' | 'POST' | 'PA
   'api/parcels/[id]/csv-preview': { POST: 'shared' },
   'api/parcels/[id]/impact': { GET: 'parcels-reader' },
   'api/parcels/[id]/plan': { POST: 'shared' },
+  'api/parcels/[id]/export': { GET: 'parcels-reader' },
   'api/letters/[id]': { GET: 'parcels-reader' },
   'api/letters/batches/[id]': { GET: 'parcels-reader' },
   'api/letters/batches/[id]/send': { POST: 'shared' },
+  'api/letters/batches/[id]/print': { GET: 'shared' },
+  'api/letters/reminders/[id]': { GET: 'shared' },
 };
 
 export const ACTION_OWNERSHIP: Record<string, Record<string, Ownership>> = {
   '(auth)/sign-in': { signInAction: 'none' },
   '(auth)/invitation/[token]': { acceptInvitationAction: 'none' },
   '(portal)': { signOutAction: 'none' },
-  '(portal)/admin/users': { inviteUserAction: 'shared', changeRoleAction: 'shared' },
+  '(portal)/admin/users': { inviteUserAction: 'shared', changeRoleAction: 'shared', setUserActiveAction: 'shared', resendInvitationAction: 'shared', cancelInvitationAction: 'shared' },
   '(portal)/revisions/[id]': { submitForCheckAction: 'scheme-designer' },
   '(portal)/checks/[id]': { addReviewCommentAction: 'assigned-checker', returnRevisionAction: 'assigned-checker', countersignRevisionAction: 'assigned-checker' },
   '(portal)/admin/certificates': { revokeCertificateAction: 'shared' },
@@ -109,7 +117,7 @@ export const ACTION_OWNERSHIP: Record<string, Record<string, Ownership>> = {
   '(portal)/schemes/[id]': { startDraftAction: 'scheme-designer', adoptSizedCrestAction: 'scheme-designer' },
   '(portal)/liaison/[id]/register': { saveParcelEditsAction: 'shared' },
   '(portal)/liaison/[id]/register/history': { restoreRegisterVersionAction: 'shared' },
-  '(portal)/liaison/[id]/template': { saveLetterTemplateAction: 'shared' },
-  '(portal)/liaison/[id]/letters': { generateLettersAction: 'shared' },
-  '(portal)/liaison/[id]/letters/[letterId]': { logLetterResponseAction: 'shared' },
+  '(portal)/liaison/[id]/template': { saveLetterTemplateAction: 'shared', previewLetterAction: 'parcels-reader' },
+  '(portal)/liaison/[id]/letters': { generateLettersAction: 'shared', withdrawBatchAction: 'shared', resendLetterAction: 'shared', markPostedAction: 'shared' },
+  '(portal)/liaison/[id]/letters/[letterId]': { logLetterResponseAction: 'shared', editLetterResponseAction: 'shared', makeReminderAction: 'shared' },
 };

@@ -21,7 +21,7 @@ const impact: LetterImpact = {
   events: [{ event: '1% AEP', dischargeM3s: 38, affluxAtFrom: 0.3, affluxAtTo: 0.1, maxAfflux: 0.3, maxAffluxAt: 160, withScheme: { inundatedLength: 90, maxDepth: 0.1, maxWaterLevel: 34.2 }, withoutScheme: { inundatedLength: 0, maxDepth: 0, maxWaterLevel: 33.9 }, floodingJudgedBy: 'ground-level', assessed: { from: 160, to: 720 }, category: 'affected' }],
 };
 const letter: LetterDocument = {
-  reference: 'SM-0001/HM-02/R1-L1', version: 1, date: '2026-11-30T09:00:00.000Z', preliminary: false, organisation: 'Wendle Valley Drainage Board',
+  reference: 'SM-0001/HM-02/R1-L1', version: 1, date: '2026-11-30T09:00:00.000Z', letterDate: '2026-11-30', respondBy: '2026-12-28', preliminary: false, organisation: 'Wendle Valley Drainage Board',
   recipient: { name: 'Edith Lowther', address: 'Weir Meadow Farm, Harrowfield' }, scheme: { name: 'Harrowfield Mill weir renewal', reference: 'SM-0001' },
   paragraphs: DEFAULT_PARAGRAPHS, impact, plan: { drawing, coordinateSystem: 'Harrowfield site grid (invented, metres)', event: '1% AEP' },
 };

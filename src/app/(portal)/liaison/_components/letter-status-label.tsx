@@ -7,6 +7,9 @@ const STATUSES: Record<LetterStatus, { icon: string; label: string; className: s
   failed: { icon: '✖', label: 'Failed', className: 'text-verdict-fail border-verdict-fail' },
   acknowledged: { icon: '✉', label: 'Acknowledged', className: 'text-verdict-pass border-verdict-pass' },
   held: { icon: '⏸', label: 'Held, not sent', className: 'text-verdict-fail border-verdict-fail' },
+  'to-post': { icon: '✎', label: 'To post', className: 'text-verdict-caution border-verdict-caution' },
+  posted: { icon: '✔', label: 'Posted', className: 'text-verdict-pass border-verdict-pass' },
+  withdrawn: { icon: '⊘', label: 'Withdrawn', className: 'text-ink-soft border-paper-edge' },
 };
 
 export function LetterStatusLabel({ status }: { status: LetterStatus }) {

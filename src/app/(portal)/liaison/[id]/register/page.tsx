@@ -37,7 +37,10 @@ export default async function RegisterPage({ params, searchParams }: { params: P
           Version <span className="num">{loaded.register.version}</span>{loaded.register.isLatest ? ' (current)' : ' (earlier version, read only)'}
           <span className="ml-2 text-sm font-normal text-ink-soft">{loaded.register.note} · <span className="num">{loaded.register.createdAt.replace('T', ' ').slice(0, 16)}</span> UTC</span>
         </h2>
-        <Link className="text-sm text-accent underline" href={`/liaison/${id}/register/history`}>History of the register</Link>
+        <span className="flex gap-4 text-sm">
+          <Link className="text-accent underline" href={`/liaison/${id}/register/history`}>History of the register</Link>
+          <a className="text-accent underline" href={`/api/parcels/${id}/export?table=register`} download>Export as CSV<span className="sr-only"> (the parcels register)</span></a>
+        </span>
       </div>
       <p className="mb-4 text-sm text-ink-soft">Distances are measured upstream from the structure along the river, in metres; ground levels in metres above the survey datum. Leave the ground level empty to judge flooding by the top of the bank.</p>
       <RegisterSearchForm search={search} version={version} clearHref={plainHref} />
