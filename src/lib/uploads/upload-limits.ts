@@ -13,3 +13,6 @@ export function describeBytes(bytes: number): string {
   if (bytes >= 1024) return `${Math.ceil(bytes / 1024)} KB`;
   return `${bytes} bytes`;
 }
+
+/** A hydrograph or storage-table CSV, read for the reservoir step and never stored (a few thousand rows at most). */
+export const ROUTING_CSV_LIMIT_BYTES = 256 * 1024;
