@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { multiLineText, singleLineText } from './plain-text';
+import { hydrographSchema, tablePeak } from './case-schema-routing';
 import { MAX_POINTS_PER_SECTION, MAX_RATING_TABLE_ROWS, MAX_SURVEYED_SECTIONS } from './input-limits';
 
 // Building blocks of the case-file schema: one schema per part of the file, with messages in the case's units.
@@ -7,13 +8,15 @@ import { MAX_POINTS_PER_SECTION, MAX_RATING_TABLE_ROWS, MAX_SURVEYED_SECTIONS } 
 export interface UnitLabels {
   length: string;
   discharge: string;
+  area: string;
+  volume: string;
 }
 
 export type CaseUnits = 'SI' | 'US';
 
 export const UNIT_LABELS: Record<CaseUnits, UnitLabels> = {
-  SI: { length: 'm', discharge: 'm³/s' },
-  US: { length: 'ft', discharge: 'ft³/s' },
+  SI: { length: 'm', discharge: 'm³/s', area: 'm²', volume: 'm³' },
+  US: { length: 'ft', discharge: 'ft³/s', area: 'ft²', volume: 'ft³' },
 };
 
 export const missingOr = (kind: string) => (issue: { input: unknown }) => (issue.input === undefined ? 'is required' : `must be ${kind}`);
@@ -105,13 +108,26 @@ export function surveyedReachSchema(u: UnitLabels) {
 }
 
 export function eventSchema(u: UnitLabels) {
-  return z.object({
-    name: text('the event name'),
-    discharge: positive(u.discharge),
-    annualExceedanceProbability: finite().gt(0, { error: 'must be greater than 0' }).lte(1, { error: 'must be at most 1' }).optional(),
-    returnPeriod: finite('years').gte(1, { error: 'must be at least 1 year' }).optional(),
-    climateChangeAllowance: finite('%').gte(0, { error: 'must be 0 % or more' }).lte(200, { error: 'must be at most 200 %' }).optional(),
-  });
+  return z
+    .object({
+      name: text('the event name'),
+      /** With a hydrograph table it may be left out of the file: it is then the table's peak (see withDischargeFromHydrograph). */
+      discharge: positive(u.discharge),
+      annualExceedanceProbability: finite().gt(0, { error: 'must be greater than 0' }).lte(1, { error: 'must be at most 1' }).optional(),
+      returnPeriod: finite('years').gte(1, { error: 'must be at least 1 year' }).optional(),
+      climateChangeAllowance: finite('%').gte(0, { error: 'must be 0 % or more' }).lte(200, { error: 'must be at most 200 %' }).optional(),
+      hydrograph: hydrographSchema(u).optional(),
+    })
+    .superRefine((event, ctx) => {
+      const peak = event.hydrograph?.kind === 'table' ? tablePeak(event.hydrograph.points) : null;
+      if (peak !== null && peak > 0 && Math.abs(event.discharge - peak) > 0.01 * peak) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['discharge'],
+          message: `differs from the peak of the inflow hydrograph (${peak} ${u.discharge}) by more than 1 %: give the same peak in both, or leave the discharge out to use the hydrograph's`,
+        });
+      }
+    });
 }
 
 const WEIR_KINDS = ['sharp-crested', 'broad-crested', 'ogee', 'rating-table'] as const;

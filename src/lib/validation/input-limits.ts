@@ -15,3 +15,9 @@ export const MAX_RATING_TABLE_ROWS = 200;
 export const MAX_PARCELS = 2000;
 /** A JSON request body, in bytes (1 MiB). */
 export const MAX_JSON_BYTES = 1024 * 1024;
+/** Points of one event's inflow hydrograph. */
+export const MAX_HYDROGRAPH_POINTS = 2000;
+/** Rows of a reservoir's level–area or level–volume table. */
+export const MAX_STORAGE_ROWS = 200;
+/** Time steps one routing may take after refinement (each a solution of the storage-indication equation). */
+export const ROUTING_STEP_LIMIT = 20_000;
