@@ -23,6 +23,8 @@ export function drawRoutingSections(doc: Doc, results: CaseResult, datum: string
     doc.x = MARGIN;
     doc.y = box.y + box.height + 6;
     for (const line of routingChartLegend(routing, { lengthUnit: units.length, dischargeUnit: units.discharge, datum })) paragraph(doc, line, { size: 7.5, colour: SOFT });
+    const inReservoir = event.limits.filter((l) => l.source === 'reservoir').map((l) => l.label);
+    if (inReservoir.length > 0) paragraph(doc, `Limits within the reservoir, checked against the peak reservoir level: ${inReservoir.join('; ')}.`);
     if (routing.assumptions.length > 0) {
       paragraph(doc, `Assumptions of the routing, ${event.name}:`, { font: 'sansSemiBold' });
       bullets(doc, routing.assumptions);

@@ -3,7 +3,7 @@ import type { RoutingResult, Seconds } from '@/lib/hydraulics/routing/routing-re
 
 /** The routing of one event, or null: results stored before routing existed carry no `routing` at all. */
 export function eventRouting(event: EventResult): RoutingResult | null {
-  return (event as EventResult & { routing?: RoutingResult | null }).routing ?? null;
+  return event.routing ?? null;
 }
 
 /** The sheets give times in hours, as the designer enters them; the engine keeps seconds. */
