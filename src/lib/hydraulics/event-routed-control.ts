@@ -31,5 +31,8 @@ export function routedHeldControl(input: CaseInput, model: ReachModel, adjust: C
       warnings: held?.warnings ?? [],
     };
   }
-  return { structure: { ...structure, depth: peakDepth }, startDepth: peakDepth, controls: true, explanation: null, warnings: held?.warnings ?? [] };
+  // The head is read off the peak level itself; the rating gives it to within its interpolation (well below 1 µm).
+  const head = peakDepth - sill;
+  const atPeakLevel = { ...structure, head, depth: peakDepth, weir: structure.weir && { ...structure.weir, head } };
+  return { structure: atPeakLevel, startDepth: peakDepth, controls: true, explanation: null, warnings: held?.warnings ?? [] };
 }
