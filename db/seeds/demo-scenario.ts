@@ -7,13 +7,18 @@ import { Revision, Scheme, User, database } from '@/lib/db';
 import { DEMO_USERS } from './demo-users';
 
 const DEMO_CASE = path.resolve('db', 'seeds', 'cases', 'wendle-harrowfield-broad-crested.json');
+const ROUTED_DEMO_CASE = path.resolve('db', 'seeds', 'cases', 'wendle-harrowfield-reservoir-spillway.json');
 
-/** The demo: five users, one per role, and the Harrowfield Mill weir scheme with a draft revision. Idempotent. */
+/**
+ * The demo: five users, one per role, the Harrowfield Mill weir scheme and the Harrowfield Upper Pond spillway scheme
+ * (a flood routed through a reservoir), each with a draft revision. Idempotent.
+ */
 export async function seedDemoScenario() {
   const sequelize = database();
   if ((await User.count()) > 0) return { seeded: false, users: [] };
   const hashes = await Promise.all(DEMO_USERS.map((u) => hashPassword(u.password)));
   const inputsJson = await readFile(DEMO_CASE, 'utf8').catch(() => null);
+  const routedInputsJson = await readFile(ROUTED_DEMO_CASE, 'utf8').catch(() => null);
   await sequelize.transaction(async (transaction) => {
     const ids = new Map<string, string>();
     for (const [i, u] of DEMO_USERS.entries()) {
@@ -38,6 +43,25 @@ export async function seedDemoScenario() {
     if (inputsJson) {
       await Revision.create(
         { id: randomUUID(), schemeId, number: 1, wizardStep: 'results', inputsJson, resultsJson: null, inputsSha256: null, resultsSha256: null, revisionSha256: null, engineVersion: null, authorId: designerId, checkerId: null, basedOnRevisionId: null, submittedAt: null, countersignedAt: null },
+        { transaction },
+      );
+    }
+    if (routedInputsJson) {
+      const pondId = randomUUID();
+      await Scheme.create(
+        {
+          id: pondId,
+          reference: 'SM-0002',
+          name: 'Harrowfield Upper Pond spillway',
+          watercourse: 'River Wendle',
+          site: 'Upper Pond dam, above Harrowfield',
+          description: 'A flood-storage dam with an ogee spillway on the Wendle above Harrowfield: floods routed through the pond (demo scenario, invented).',
+          designerId,
+        },
+        { transaction },
+      );
+      await Revision.create(
+        { id: randomUUID(), schemeId: pondId, number: 1, wizardStep: 'results', inputsJson: routedInputsJson, resultsJson: null, inputsSha256: null, resultsSha256: null, revisionSha256: null, engineVersion: null, authorId: designerId, checkerId: null, basedOnRevisionId: null, submittedAt: null, countersignedAt: null },
         { transaction },
       );
     }
