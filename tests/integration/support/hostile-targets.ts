@@ -51,6 +51,7 @@ export const RAW_BODY_TARGETS: Record<string, RawBodyTarget> = {
   'POST api/schemes/import': { role: 'designer', contentType: 'application/json', validJson: () => json(demoCase()) },
   'POST api/uploads/survey': { role: 'designer', query: (w) => `revision=${w.draft.revisionId}`, contentType: 'text/csv' },
   'POST api/uploads/survey-preview': { role: 'designer', query: (w) => `revision=${w.draft.revisionId}`, contentType: 'text/csv' },
+  'POST api/uploads/routing-csv-preview': { role: 'designer', query: (w) => `revision=${w.draft.revisionId}&table=hydrograph`, contentType: 'text/csv' },
   'POST api/parcels/[id]/csv': { role: 'liaison', id: (w) => w.certified.schemeId, contentType: 'text/csv' },
   'POST api/parcels/[id]/csv-preview': { role: 'liaison', id: (w) => w.certified.schemeId, contentType: 'text/csv', previewReportsIssues: true },
   'POST api/certificates/verification': { role: 'planning', contentType: 'multipart/form-data; boundary=----sillmark' },

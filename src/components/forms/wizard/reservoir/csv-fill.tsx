@@ -3,7 +3,13 @@
 import { useState } from 'react';
 import { ROUTING_CSV_LIMIT_BYTES, describeBytes } from '@/lib/uploads/upload-limits';
 
-export type CsvTable = 'hydrograph' | 'level-area' | 'level-volume';
+export type CsvTable = 'hydrograph' | 'storage';
+
+/** What the server read from the file: its rows, and for a storage table whether it gives areas or volumes. */
+export interface CsvRows {
+  rows: Record<string, number>[];
+  kind?: 'level-area' | 'level-volume';
+}
 
 type Issue = { path: string; message: string };
 type State = { kind: 'idle' } | { kind: 'checking'; name: string } | { kind: 'refused'; name: string; error: string; issues: Issue[] } | { kind: 'filled'; name: string; rows: number };
@@ -12,7 +18,7 @@ type State = { kind: 'idle' } | { kind: 'checking'; name: string } | { kind: 're
  * Reads a CSV file on the server (the same checks as the case file, line by line) and puts its rows in the table
  * above; nothing is stored until the step is saved.
  */
-export function CsvFill({ idPrefix, revisionId, table, hint, onRows }: { idPrefix: string; revisionId: string; table: CsvTable; hint: string; onRows: (rows: Record<string, number>[]) => void }) {
+export function CsvFill({ idPrefix, revisionId, table, hint, onRows }: { idPrefix: string; revisionId: string; table: CsvTable; hint: string; onRows: (read: CsvRows) => void }) {
   const [state, setState] = useState<State>({ kind: 'idle' });
   const id = `${idPrefix}-csv`;
   const read = async (file: File | undefined) => {
@@ -21,9 +27,9 @@ export function CsvFill({ idPrefix, revisionId, table, hint, onRows }: { idPrefi
     setState({ kind: 'checking', name: file.name });
     try {
       const response = await fetch(`/api/uploads/routing-csv-preview?revision=${encodeURIComponent(revisionId)}&table=${table}`, { method: 'POST', body: file, headers: { 'content-type': 'text/csv', 'x-file-name': encodeURIComponent(file.name) } });
-      const body = (await response.json().catch(() => ({ error: `The server answered HTTP ${response.status}.` }))) as { error?: string; issues?: Issue[]; rows?: Record<string, number>[] };
+      const body = (await response.json().catch(() => ({ error: `The server answered HTTP ${response.status}.` }))) as { error?: string; issues?: Issue[]; rows?: Record<string, number>[]; kind?: CsvRows['kind'] };
       if (response.ok && body.rows) {
-        onRows(body.rows);
+        onRows({ rows: body.rows, kind: body.kind });
         setState({ kind: 'filled', name: file.name, rows: body.rows.length });
       } else setState({ kind: 'refused', name: file.name, error: body.error ?? 'The file was refused.', issues: body.issues ?? [] });
     } catch {

@@ -4,7 +4,7 @@ import { type Control, type FieldValues, type Path, type UseFormRegister, useFie
 import { inputClassName } from '@/components/ui/form-field';
 import { asNumber, errorAt, numberInputProps } from '../../form-values';
 import { describedBy } from '../../wizard-field';
-import { CsvFill, type CsvTable } from './csv-fill';
+import { CsvFill, type CsvRows, type CsvTable } from './csv-fill';
 
 export interface RowColumn {
   key: string;
@@ -21,7 +21,8 @@ type Props<T extends FieldValues> = {
   control: Control<T>;
   register: UseFormRegister<T>;
   errors: FieldErrors<T>;
-  csv: { revisionId: string; table: CsvTable; hint: string };
+  /** `onFill` takes over when the file may change more than the rows (a storage file of volumes in an area table). */
+  csv: { revisionId: string; table: CsvTable; hint: string; onFill?: (read: CsvRows) => boolean };
 };
 
 /** A table of typed number pairs (time and discharge, level and area …), rows added and removed, or filled from a CSV file. */
@@ -64,7 +65,7 @@ export function RowsEditor<T extends FieldValues>({ idPrefix, caption, name, col
       </table>
       <div className="mt-2 flex flex-wrap items-start gap-6 text-sm">
         <button type="button" className="text-accent underline" onClick={() => rows.append(empty as never)}>+ Add a row</button>
-        <CsvFill idPrefix={idPrefix} revisionId={csv.revisionId} table={csv.table} hint={csv.hint} onRows={(values) => rows.replace(values as never)} />
+        <CsvFill idPrefix={idPrefix} revisionId={csv.revisionId} table={csv.table} hint={csv.hint} onRows={(read) => { if (!csv.onFill?.(read)) rows.replace(read.rows as never); }} />
       </div>
     </div>
   );

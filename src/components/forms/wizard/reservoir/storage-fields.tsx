@@ -5,6 +5,7 @@ import type { ReservoirStepInput } from '@/lib/validation/reservoir-step-schema'
 import { inputClassName } from '@/components/ui/form-field';
 import { asNumber, errorAt, numberInputProps } from '../../form-values';
 import { WizardField, describedBy } from '../../wizard-field';
+import type { CsvRows } from './csv-fill';
 import { RowsEditor } from './rows-editor';
 
 type Form = UseFormReturn<ReservoirStepInput>;
@@ -21,6 +22,12 @@ export function StorageFields({ form, units, revisionId, crestLevel, levelWords 
   const { register, control, formState, watch, setValue } = form;
   const kind = watch('reservoir.storage.kind');
   const e = (path: string) => errorAt(formState.errors, path);
+  // A file of volumes read into the area table (or the other way) switches the table to what the file gives.
+  const switchKind = (read: CsvRows): boolean => {
+    if (!read.kind || read.kind === kind) return false;
+    setValue('reservoir.storage', { kind: read.kind, rows: read.rows } as NonNullable<ReservoirStepInput['reservoir']>['storage']);
+    return true;
+  };
   const number = (name: 'reservoir.startLevel' | 'reservoir.length' | 'reservoir.storage.area', label: string, hint: string, noun: string) => {
     const id = name.replace(/\./g, '-');
     return (
@@ -50,7 +57,7 @@ export function StorageFields({ form, units, revisionId, crestLevel, levelWords 
           control={control}
           register={register}
           errors={formState.errors}
-          csv={{ revisionId, table: kind, hint: `Two columns with a heading row: level (${levelWords}) and ${kind === 'level-area' ? `surface area (${units.area})` : `volume stored (${units.volume})`}, lowest level first.` }}
+          csv={{ revisionId, table: 'storage', hint: `Two columns with a heading row: level (${levelWords}) and either area (${units.area}) or volume (${units.volume}), lowest level first.`, onFill: (read) => switchKind(read) }}
         />
       ) : null}
       {kind === 'constant-area' ? <div className="max-w-sm">{number('reservoir.storage.area', `Surface area (${units.area})`, 'The water surface, taken as the same at every level.', 'The surface area')}</div> : null}
