@@ -26,17 +26,18 @@ type Props = {
 export function ReservoirStepForm({ schemeId, revisionId, units, datum, events, crestLevel, defaults, backHref }: Props) {
   const u = units === 'US' ? { length: 'ft', area: 'ft²', volume: 'ft³', discharge: 'ft³/s' } : { length: 'm', area: 'm²', volume: 'm³', discharge: 'm³/s' };
   const levelWords = `${u.length} above ${datum?.trim() ? datum.trim() : 'the datum'}`;
-  const form = useForm<ReservoirStepInput, unknown, ReservoirStepValues>({ resolver: zodResolver(reservoirStepSchema(units)), shouldUnregister: true, defaultValues: defaults });
+  const form = useForm<ReservoirStepInput, unknown, ReservoirStepValues>({ resolver: zodResolver(reservoirStepSchema(units)), defaultValues: defaults });
   const { handleSubmit, setError, formState, setValue } = form;
   const [routed, setRouted] = useState(defaults.reservoir !== undefined);
   const { save, failure } = useStepSave({ schemeId, revisionId, step: 'reservoir', setError });
   const e = (path: string) => errorAt(formState.errors, path);
   const route = (on: boolean) => {
     setRouted(on);
-    if (on) setValue('reservoir', { storage: { kind: 'level-area', rows: [] } });
-    else events.forEach((_, i) => setValue(`hydrographs.${i}`, null));
+    // Hidden parts are set, not unregistered: each choice replaces its whole part, so nothing stale is sent.
+    setValue('reservoir', on ? { storage: { kind: 'level-area', rows: [] } } : undefined);
+    if (!on) events.forEach((_, i) => setValue(`hydrographs.${i}`, null));
   };
-  const submit = async (values: ReservoirStepValues) => void (await save(routed ? values : { hydrographs: events.map(() => null) }));
+  const submit = async (values: ReservoirStepValues) => void (await save(values));
   return (
     <form onSubmit={handleSubmit(submit)} noValidate>
       <p className="mb-4 max-w-3xl text-sm text-ink-soft">Where the structure holds back a reservoir, a flood is stored as it rises and leaves over the crest lower and later. Give the storage and, for each event to be routed, its inflow hydrograph. Events without one are checked at their steady design discharge.</p>

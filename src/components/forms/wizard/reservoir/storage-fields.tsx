@@ -20,7 +20,8 @@ const KINDS = [
 /** The reservoir's storage, its level at the start of the flood and its length along the valley. */
 export function StorageFields({ form, units, revisionId, crestLevel, levelWords }: { form: Form; units: Units; revisionId: string; crestLevel: number | null; levelWords: string }) {
   const { register, control, formState, watch, setValue } = form;
-  const kind = watch('reservoir.storage.kind');
+  // Watched as a whole: the choices below replace the whole storage, and RHF tells a watcher of the path it sets.
+  const kind = watch('reservoir.storage')?.kind;
   const e = (path: string) => errorAt(formState.errors, path);
   // A file of volumes read into the area table (or the other way) switches the table to what the file gives.
   const switchKind = (read: CsvRows): boolean => {
