@@ -1,5 +1,5 @@
 import type { RoutingResult } from '@/lib/hydraulics/routing/routing-result';
-import { areaUnit, durationWords, hoursOf, volumeUnit } from '@/lib/routing-sheet/event-routing';
+import { areaUnit, durationWords, fixedWithoutNegativeZero, hoursOf, volumeUnit } from '@/lib/routing-sheet/event-routing';
 import { fixed, levelText, levelUnit } from './certificate-text';
 import type { FieldRow } from './pdf-layout';
 
@@ -18,7 +18,7 @@ export function routingInputRows(r: RoutingResult, u: Units, datum: string | nul
     ['Reservoir storage', `${STORAGE_KINDS[s.kind]}${range}; surface area at the start level ${fixed(s.areaAtStart, 0)} ${areaUnit(u.length)}`],
     ['Level at the start of the flood', levelText(s.startLevel, u.length, datum)],
     ['Reservoir length along the valley', s.reservoirLength !== null ? `${fixed(s.reservoirLength, 0)} ${u.length} upstream of the structure: limits within it are checked against the peak reservoir level` : 'not given: every limit is checked against the profile upstream'],
-    ['Routing method', `level-pool routing (modified Puls), after ${r.methodSource}`],
+    ['Routing method', r.methodSource],
   ];
 }
 
@@ -32,7 +32,7 @@ export function routingPeakRows(r: RoutingResult, u: Units, datum: string | null
     ['Peak outflow', `${fixed(r.outflowPeak.discharge)} ${u.discharge} at ${fixed(hoursOf(r.outflowPeak.time), 2)} h`],
     ['Attenuation and lag', `${fixed(r.attenuation)} ${u.discharge} lower, ${durationWords(r.lag)} later`],
     ['Peak reservoir level', `${levelText(r.peakLevel.level, u.length, datum)} at ${fixed(hoursOf(r.peakLevel.time), 2)} h`],
-    ['Volume balance', `inflow ${fixed(b.inflow, 0)} ${v}, outflow ${fixed(b.outflow, 0)} ${v}, change in storage ${fixed(b.storageChange, 0)} ${v}; left over ${fixed(b.residual, 1)} ${v}`],
+    ['Volume balance', `inflow ${fixed(b.inflow, 0)} ${v}, outflow ${fixed(b.outflow, 0)} ${v}, change in storage ${fixed(b.storageChange, 0)} ${v}; left over ${fixedWithoutNegativeZero(b.residual, 1)} ${v}`],
     ['Time step', `${durationWords(r.refinement.timeStep)} after ${r.refinement.halvings} halvings; last change in peak level ${fixed(r.refinement.peakLevelChangeOnHalving, 4)} ${u.length} (tolerance ${fixed(r.refinement.tolerance, 4)} ${u.length})${r.refinement.converged ? '' : ', NOT settled'}`],
     ['Independent check', check ? `${check.method}: peak level differs by ${fixed(check.peakLevelDifference, 4)} ${u.length}, peak outflow by ${fixed(check.peakOutflowDifference, 3)} ${u.discharge}` : 'not run for this event'],
   ];

@@ -18,6 +18,12 @@ export function durationWords(time: Seconds): string {
   return `${hours.toFixed(2)} h`;
 }
 
+/** x.toFixed(d) without the minus of a value that rounds to zero ("-0.0" reads as a loss). */
+export function fixedWithoutNegativeZero(x: number, digits: number): string {
+  const text = x.toFixed(digits);
+  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
+}
+
 export function volumeUnit(length: string): string {
   return `${length}³`;
 }

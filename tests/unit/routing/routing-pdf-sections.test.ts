@@ -37,7 +37,7 @@ describe('routing on the calculation sheet', () => {
     expect(text).toContain('Flood routed through the reservoir');
     expect(text).toContain('9 points entered by the designer');
     expect(text).toContain('table of surface area by level, 5 rows from 60.500 to 63.500 m above Ordnance Datum Newlyn');
-    expect(text).toContain('level-pool routing (modified Puls)');
+    expect(text).toContain('Routing method Fixture Author, A Hydrology Text, 2000, section 1 (invented for the tests)');
     expect(text).toContain('Peak outflow 30.000 m³/s at 8.00 h');
     expect(text).toContain('Peak reservoir level 61.760 m above Ordnance Datum Newlyn at 8.00 h');
     expect(text).toContain('12.000 m³/s lower, 2.00 h later');

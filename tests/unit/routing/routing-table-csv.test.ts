@@ -1,7 +1,7 @@
 import { parse } from 'csv-parse/sync';
 import { describe, expect, it } from 'vitest';
 import type { EventResult } from '@/lib/hydraulics/case-result';
-import { durationWords, eventRouting } from '@/lib/routing-sheet/event-routing';
+import { durationWords, eventRouting, fixedWithoutNegativeZero } from '@/lib/routing-sheet/event-routing';
 import { routingTableCsv } from '@/lib/routing-sheet/routing-table-csv';
 import { routingResultFixture } from '../../fixtures/routing/routing-result-fixture';
 
@@ -46,5 +46,11 @@ describe('event routing', () => {
     expect(durationWords(900)).toBe('15.0 min');
     expect(durationWords(2 * 3600)).toBe('2.00 h');
     expect(durationWords(0)).toBe('0.00 h');
+  });
+
+  it('writes a residual that rounds to zero without a minus', () => {
+    expect(fixedWithoutNegativeZero(-0.04, 1)).toBe('0.0');
+    expect(fixedWithoutNegativeZero(-0.06, 1)).toBe('-0.1');
+    expect(fixedWithoutNegativeZero(-0, 0)).toBe('0');
   });
 });

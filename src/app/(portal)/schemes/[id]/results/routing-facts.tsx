@@ -1,5 +1,5 @@
 import type { RoutingResult } from '@/lib/hydraulics/routing/routing-result';
-import { durationWords, hoursOf, volumeUnit } from '@/lib/routing-sheet/event-routing';
+import { durationWords, fixedWithoutNegativeZero, hoursOf, volumeUnit } from '@/lib/routing-sheet/event-routing';
 
 const f = (x: number, d = 3) => x.toFixed(d);
 
@@ -22,7 +22,7 @@ export function RoutingFacts({ routing: r, units: u, levelUnit }: { routing: Rou
     ['Attenuation', `${f(r.attenuation)} ${u.discharge}`, r.inflowPeak.discharge > 0 ? `the peak is ${f((100 * r.attenuation) / r.inflowPeak.discharge, 1)} % lower leaving the reservoir` : undefined],
     ['Lag of the peak', durationWords(r.lag), 'from peak inflow to peak outflow'],
     ['Peak reservoir level', `${f(r.peakLevel.level)} ${levelUnit}`, `at ${f(hoursOf(r.peakLevel.time), 2)} h; ${f(r.peakLevel.level - r.storage.startLevel)} ${u.length} above the level at the start of the flood`],
-    ['Volume balance', `${f(balance.residual, 1)} ${volume} left over`, `inflow ${f(balance.inflow, 0)} ${volume} = outflow ${f(balance.outflow, 0)} ${volume} + change in storage ${f(balance.storageChange, 0)} ${volume}`],
+    ['Volume balance', `${fixedWithoutNegativeZero(balance.residual, 1)} ${volume} left over`, `inflow ${f(balance.inflow, 0)} ${volume} = outflow ${f(balance.outflow, 0)} ${volume} + change in storage ${f(balance.storageChange, 0)} ${volume}`],
     ['Time step', durationWords(refinement.timeStep), `${refinement.halvings} halving${refinement.halvings === 1 ? '' : 's'}; the last changed the peak level by ${f(refinement.peakLevelChangeOnHalving, 4)} ${u.length} (tolerance ${f(refinement.tolerance, 4)} ${u.length})${refinement.converged ? '' : ' — NOT settled: treat the peak level with care'}`],
     selfCheckWords(r, u),
   ];

@@ -19,7 +19,7 @@ export function RoutingInputs({ routing: r, units: u, levelUnit }: { routing: Ro
       <li>{inflow}: peak {f(h.peakInflow)} {u.discharge} at {f(hoursOf(h.timeToPeak), 2)} h, volume {f(h.volume, 0)} {volumeUnit(u.length)}.</li>
       <li>Storage from {STORAGE_KINDS[s.kind]}{range}; surface area {f(s.areaAtStart, 0)} {areaUnit(u.length)} at the start level of {f(s.startLevel)} {levelUnit}.</li>
       <li>{s.reservoirLength !== null ? `The reservoir reaches ${f(s.reservoirLength, 0)} ${u.length} upstream of the structure; limits within that length are checked against the peak reservoir level.` : 'The reservoir’s length along the valley was not given; every limit is checked against the profile upstream.'}</li>
-      <li>Routed through the storage by level-pool routing (modified Puls), after {r.methodSource}.</li>
+      <li>Routing method: {r.methodSource}.</li>
     </ul>
   );
 }
