@@ -1,33 +1,12 @@
 import { z } from 'zod';
-import { multiLineText, singleLineText } from './plain-text';
-import { hydrographSchema, tablePeak } from './case-schema-routing';
+import { atMost, finite, missingOr, nonNegative, positive, text, type UnitLabels } from './case-schema-primitives';
+import { multiLineText } from './plain-text';
+import { dischargeMatchesHydrograph, hydrographSchema } from './case-schema-routing';
 import { MAX_POINTS_PER_SECTION, MAX_RATING_TABLE_ROWS, MAX_SURVEYED_SECTIONS } from './input-limits';
 
 // Building blocks of the case-file schema: one schema per part of the file, with messages in the case's units.
 
-export interface UnitLabels {
-  length: string;
-  discharge: string;
-  area: string;
-  volume: string;
-}
-
-export type CaseUnits = 'SI' | 'US';
-
-export const UNIT_LABELS: Record<CaseUnits, UnitLabels> = {
-  SI: { length: 'm', discharge: 'm³/s', area: 'm²', volume: 'm³' },
-  US: { length: 'ft', discharge: 'ft³/s', area: 'ft²', volume: 'ft³' },
-};
-
-export const missingOr = (kind: string) => (issue: { input: unknown }) => (issue.input === undefined ? 'is required' : `must be ${kind}`);
-
-export const finite = (unit?: string) => z.number({ error: missingOr(unit ? `a number (${unit})` : 'a number') });
-export const positive = (unit?: string) => finite(unit).positive({ error: `must be greater than 0${unit ? ` ${unit}` : ''}` });
-export const nonNegative = (unit?: string) => finite(unit).nonnegative({ error: `must be 0${unit ? ` ${unit}` : ''} or more` });
-/** A list too long for the engine: the message says how many are allowed and how many were sent. */
-export const atMost = (max: number, per: string) => (issue: { input: unknown }) =>
-  `are too many: at most ${max} ${per}${Array.isArray(issue.input) ? ` (this one has ${issue.input.length}); reduce them to ${max} or fewer` : ''}`;
-export const text = (what: string) => singleLineText(what, { missing: 'is required' }).min(1, { error: `must not be empty (${what})` });
+export { atMost, type CaseUnits, finite, missingOr, nonNegative, positive, text, UNIT_LABELS, type UnitLabels } from './case-schema-primitives';
 
 function sectionSchema(u: UnitLabels) {
   const slope = nonNegative().optional();
@@ -118,16 +97,7 @@ export function eventSchema(u: UnitLabels) {
       climateChangeAllowance: finite('%').gte(0, { error: 'must be 0 % or more' }).lte(200, { error: 'must be at most 200 %' }).optional(),
       hydrograph: hydrographSchema(u).optional(),
     })
-    .superRefine((event, ctx) => {
-      const peak = event.hydrograph?.kind === 'table' ? tablePeak(event.hydrograph.points) : null;
-      if (peak !== null && peak > 0 && Math.abs(event.discharge - peak) > 0.01 * peak) {
-        ctx.addIssue({
-          code: 'custom',
-          path: ['discharge'],
-          message: `differs from the peak of the inflow hydrograph (${peak} ${u.discharge}) by more than 1 %: give the same peak in both, or leave the discharge out to use the hydrograph's`,
-        });
-      }
-    });
+    .superRefine(dischargeMatchesHydrograph(u));
 }
 
 const WEIR_KINDS = ['sharp-crested', 'broad-crested', 'ogee', 'rating-table'] as const;

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { atMost, finite, missingOr, nonNegative, positive, type UnitLabels } from './case-schema-parts';
+import { atMost, finite, missingOr, nonNegative, positive, type UnitLabels } from './case-schema-primitives';
 import { MAX_HYDROGRAPH_POINTS, MAX_STORAGE_ROWS } from './input-limits';
 
 // The parts of the case file for routing a flood through a reservoir: an event's inflow hydrograph and the reservoir's
@@ -47,6 +47,20 @@ export function tablePeak(points: readonly { discharge: unknown }[]): number | n
   return Math.max(...discharges);
 }
 
+/** An event's discharge, when it has a hydrograph table, is the table's peak (within 1 %). */
+export function dischargeMatchesHydrograph(u: UnitLabels) {
+  return (event: { discharge: number; hydrograph?: { kind: string; points?: readonly { discharge: unknown }[] } }, ctx: z.RefinementCtx) => {
+    const peak = event.hydrograph?.kind === 'table' && event.hydrograph.points ? tablePeak(event.hydrograph.points) : null;
+    if (peak !== null && peak > 0 && Math.abs(event.discharge - peak) > 0.01 * peak) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['discharge'],
+        message: `differs from the peak of the inflow hydrograph (${peak} ${u.discharge}) by more than 1 %: give the same peak in both, or leave the discharge out to use the hydrograph's`,
+      });
+    }
+  };
+}
+
 const isRecord = (v: unknown): v is Record<string, unknown> => v !== null && typeof v === 'object' && !Array.isArray(v);
 
 /** An event with a hydrograph table and no discharge takes the table's peak as its discharge. */
@@ -63,16 +77,21 @@ export function withEventDischargesFromHydrographs(raw: Record<string, unknown>)
   return Array.isArray(raw.events) ? { ...raw, events: raw.events.map(withDischargeFromHydrograph) } : raw;
 }
 
-function rising<T extends { level: number }>(value: (row: T) => number, what: string) {
+/** Levels rising down the table, and the column beside them valid for its kind. */
+function storageRows<T extends { level: number }>(checkValue: (row: T, before: T) => { field: string; message: string } | null) {
   return (rows: T[], ctx: z.RefinementCtx) => {
     rows.forEach((row, i) => {
       if (i === 0) return;
       if (!(row.level > rows[i - 1].level)) ctx.addIssue({ code: 'custom', path: [i, 'level'], message: 'must be higher than the level of the row before it' });
-      if (what === 'volume' && !(value(row) > value(rows[i - 1]))) ctx.addIssue({ code: 'custom', path: [i, 'volume'], message: 'must be greater than the volume of the row before it' });
-      if (what === 'area' && !(value(row) > 0)) ctx.addIssue({ code: 'custom', path: [i, 'area'], message: 'must be greater than 0 above the lowest row' });
+      const problem = checkValue(row, rows[i - 1]);
+      if (problem) ctx.addIssue({ code: 'custom', path: [i, problem.field], message: problem.message });
     });
   };
 }
+
+const areaAboveZero = (row: { level: number; area: number }) => (row.area > 0 ? null : { field: 'area', message: 'must be greater than 0 above the lowest row' });
+const volumeGrowing = (row: { level: number; volume: number }, before: { level: number; volume: number }) =>
+  row.volume > before.volume ? null : { field: 'volume', message: 'must be greater than the volume of the row before it' };
 
 function storageSchema(u: UnitLabels) {
   const rows = <T extends z.ZodRawShape>(shape: T) =>
@@ -85,11 +104,11 @@ function storageSchema(u: UnitLabels) {
     [
       z.object({
         kind: z.literal('level-area'),
-        rows: rows({ level: finite(`${u.length} above the datum`), area: nonNegative(u.area) }).superRefine(rising((r: { level: number; area: number }) => r.area, 'area')),
+        rows: rows({ level: finite(`${u.length} above the datum`), area: nonNegative(u.area) }).superRefine(storageRows<{ level: number; area: number }>(areaAboveZero)),
       }),
       z.object({
         kind: z.literal('level-volume'),
-        rows: rows({ level: finite(`${u.length} above the datum`), volume: nonNegative(u.volume) }).superRefine(rising((r: { level: number; volume: number }) => r.volume, 'volume')),
+        rows: rows({ level: finite(`${u.length} above the datum`), volume: nonNegative(u.volume) }).superRefine(storageRows<{ level: number; volume: number }>(volumeGrowing)),
       }),
       z.object({ kind: z.literal('constant-area'), area: positive(u.area) }),
     ],
@@ -105,4 +124,17 @@ export function reservoirSchema(u: UnitLabels) {
     /** Length along the valley from the structure; limits within it are checked against the peak level. */
     length: nonNegative(u.length).optional(),
   });
+}
+
+/** A hydrograph needs a reservoir to be routed through, and a reservoir needs a structure with a rating. */
+export function routingCrossChecks(v: { events: { hydrograph?: unknown }[]; reservoir?: unknown; control: { type: string } }, ctx: z.RefinementCtx): void {
+  if (v.reservoir === undefined) {
+    v.events.forEach((e, i) => {
+      if (e.hydrograph !== undefined) {
+        ctx.addIssue({ code: 'custom', path: ['events', i, 'hydrograph'], message: 'needs a reservoir to route it through: give the reservoir (its storage) as well, or remove the hydrograph to check the steady peak discharge' });
+      }
+    });
+  } else if (v.control.type === 'depth') {
+    ctx.addIssue({ code: 'custom', path: ['reservoir'], message: 'needs a weir or rating-table control: a fixed depth at the control has no rating to pass the outflow through' });
+  }
 }

@@ -14,7 +14,7 @@ import {
   UNIT_LABELS,
   weirControlSchema,
 } from './case-schema-parts';
-import { reservoirSchema, withEventDischargesFromHydrographs } from './case-schema-routing';
+import { reservoirSchema, routingCrossChecks, withEventDischargesFromHydrographs } from './case-schema-routing';
 import { singleLineText } from './plain-text';
 import { MAX_EVENTS, MAX_LIMITS } from './input-limits';
 
@@ -89,19 +89,6 @@ function caseObject(units: CaseUnits) {
       })
       .optional(),
   });
-}
-
-/** A hydrograph needs a reservoir to be routed through, and a reservoir needs a structure with a rating. */
-function routingCrossChecks(v: { events: { hydrograph?: unknown }[]; reservoir?: unknown; control: { type: string } }, ctx: z.RefinementCtx): void {
-  if (v.reservoir === undefined) {
-    v.events.forEach((e, i) => {
-      if (e.hydrograph !== undefined) {
-        ctx.addIssue({ code: 'custom', path: ['events', i, 'hydrograph'], message: 'needs a reservoir to route it through: give the reservoir (its storage) as well, or remove the hydrograph to check the steady peak discharge' });
-      }
-    });
-  } else if (v.control.type === 'depth') {
-    ctx.addIssue({ code: 'custom', path: ['reservoir'], message: 'needs a weir or rating-table control: a fixed depth at the control has no rating to pass the outflow through' });
-  }
 }
 
 /** `units` defaults to SI, and an event given by its hydrograph table alone takes the table's peak as its discharge. */

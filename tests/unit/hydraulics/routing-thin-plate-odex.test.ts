@@ -42,17 +42,20 @@ describe('a pool of constant area with a thin-plate weir, against odex', () => {
   const model = { curve: storageCurve({ kind: 'constant-area', area: AREA }), rating, storageField: 'reservoir.storage' };
   const routed = routeReservoir({ model, hydrograph, hydrographKind: 'table', shapeSource: null, startLevel: crest, reservoirLength: null, hydrographField: 'events[0].hydrograph', skipSelfCheck: false });
 
-  it('reads the tabulated outflow rating within 0.05 % of the forward weir equation', () => {
-    for (const head of [0.05, 0.2, 0.5, 0.9]) {
+  it('reads the tabulated outflow rating within 0.001 % of the forward weir equation from 3 cm of head up', () => {
+    // Below that the Kindsvater–Carter head correction kh (about 1 mm) bends Q^(2/3) away from linear near the crest.
+    for (const head of [0.03, 0.05, 0.13, 0.2, 0.37, 0.5, 0.71, 0.9]) {
       const direct = weirDischarge(spec, head, approach);
-      expect(Math.abs(rating.dischargeAt(crest + head) - direct)).toBeLessThan(5e-4 * direct);
+      expect(Math.abs(rating.dischargeAt(crest + head) - direct)).toBeLessThan(1e-5 * direct);
     }
   });
 
-  it('peaks within 1 mm of the odex integration of dh/dt = (I − Q(h))/A', () => {
+  it('peaks within the 1 mm refinement tolerance of the odex integration of dh/dt = (I − Q(h))/A', () => {
     const reference = odexPeakLevel();
+    // The march samples the level at its steps and is refined to 1 mm (about 0.2 mm here).
     expect(Math.abs(routed.result.peakLevel.level - reference)).toBeLessThan(1e-3);
-    expect(Math.abs(routed.result.selfCheck!.peakLevel - reference)).toBeLessThan(1e-4);
+    // The engine's own odex self-check, on the tabulated rating, agrees with the forward weir equation to 10 µm (about 1 µm here).
+    expect(Math.abs(routed.result.selfCheck!.peakLevel - reference)).toBeLessThan(1e-5);
     expect(routed.result.outflowPeak.discharge).toBeLessThan(18);
   });
 

@@ -32,7 +32,7 @@ type CaseEvent = CaseInput['events'][number];
 const HOUR = 3600;
 
 /** The event's hydrograph in seconds and m³/s, its ordinates scaled like the event's discharge. */
-function eventHydrograph(event: CaseEvent, ctx: EventRoutingContext, field: string): { hydrograph: InflowHydrograph; shapeSource: string | null } {
+function eventHydrograph(event: CaseEvent, index: number, ctx: EventRoutingContext, field: string): { hydrograph: InflowHydrograph; shapeSource: string | null } {
   const shape = event.hydrograph;
   const stretch = ctx.factors.hydrographVolume;
   if (shape === undefined) throw new InvalidInputError(field, 'is required to route the event');
@@ -40,7 +40,7 @@ function eventHydrograph(event: CaseEvent, ctx: EventRoutingContext, field: stri
     return { hydrograph: { times: shape.points.map((p) => p.time * HOUR * stretch), discharges: shape.points.map((p) => p.discharge * ctx.dischargeScale) }, shapeSource: null };
   }
   const peak: CubicMetresPerSecond = event.discharge * ctx.dischargeScale;
-  return { hydrograph: unitShapeHydrograph(shape.shape, peak, shape.timeToPeak * HOUR * stretch, field), shapeSource: NRCS_SHAPE_SOURCE };
+  return { hydrograph: unitShapeHydrograph(shape.shape, peak, shape.timeToPeak * HOUR * stretch, field, `events[${index}].discharge`), shapeSource: NRCS_SHAPE_SOURCE };
 }
 
 /** The event routed through the reservoir, or null when the event has no hydrograph (or the case no reservoir). */
@@ -48,7 +48,7 @@ export function routeCaseEvent(event: CaseEvent, index: number, ctx: EventRoutin
   const reservoir = ctx.input.reservoir;
   if (event.hydrograph === undefined || reservoir === undefined) return null;
   const field = `events[${index}].hydrograph`;
-  const { hydrograph, shapeSource } = eventHydrograph(event, ctx, field);
+  const { hydrograph, shapeSource } = eventHydrograph(event, index, ctx, field);
   const curve = storageCurve(scaledStorage(reservoir.storage, ctx.factors.storage), 'reservoir.storage');
   const startLevel = reservoir.startLevel ?? crestLevelOf(ctx.input, ctx.model, ctx.adjust);
   if (curve.lowest !== null && curve.highest !== null && (startLevel < curve.lowest || startLevel > curve.highest)) {

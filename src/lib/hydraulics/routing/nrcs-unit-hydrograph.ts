@@ -21,10 +21,10 @@ export const NRCS_ORDINATES: readonly (readonly [number, number])[] = TIME_RATIO
 
 export type UnitShape = 'nrcs-dimensionless';
 
-/** The shaped hydrograph: peak `peak` at `timeToPeak`, lasting 5 Tp. */
-export function unitShapeHydrograph(shape: UnitShape, peak: CubicMetresPerSecond, timeToPeak: Seconds, field: string): InflowHydrograph {
+/** The shaped hydrograph: peak `peak` at `timeToPeak`, lasting 5 Tp. `field` names the hydrograph, `peakField` its peak. */
+export function unitShapeHydrograph(shape: UnitShape, peak: CubicMetresPerSecond, timeToPeak: Seconds, field: string, peakField = `${field}.peak`): InflowHydrograph {
   if (shape !== 'nrcs-dimensionless') throw new InvalidInputError(`${field}.shape`, 'must be nrcs-dimensionless');
-  requirePositive(peak, `${field}.peak`);
+  requirePositive(peak, peakField);
   requirePositive(timeToPeak, `${field}.timeToPeak`);
   return { times: TIME_RATIOS.map((r) => r * timeToPeak), discharges: DISCHARGE_RATIOS.map((r) => r * peak) };
 }

@@ -30,8 +30,8 @@ function integratedPeak(model: ReservoirModel, hydrograph: InflowHydrograph, sta
   for (let i = 1; i < hydrograph.times.length; i++) {
     const solver = new Solver(1);
     solver.denseOutput = true;
-    solver.relativeTolerance = 1e-12;
-    solver.absoluteTolerance = 1e-12 * scale;
+    solver.relativeTolerance = 1e-10;
+    solver.absoluteTolerance = 1e-10 * scale;
     solver.maxSteps = MAX_SOLVER_STEPS;
     const result = solver.solve((t, y) => [rate(t, y[0])], hydrograph.times[i - 1], [volume], hydrograph.times[i], (_n, tOld, t, y, dense) => {
       if (y[0] > peak.volume) peak = { time: t, volume: y[0] };
