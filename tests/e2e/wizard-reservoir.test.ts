@@ -4,17 +4,18 @@ import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeSequelize } from '@/lib/db';
-import { createTestScheme } from '../integration/support/scheme-factory';
+import { createTestScheme, demoCase } from '../integration/support/scheme-factory';
 import { createTestUser } from '../integration/support/user-factory';
 import { accessibilityViolations } from './support/accessibility';
 import { ARTIFACTS, useServedPortal } from './support/served-portal';
 import { canvasInk } from './support/wizard-helpers';
 
-// Issue 17: a designer routes the demo scheme's floods through the reservoir behind the Harrowfield weir (crest
-// 32.4 m), reads the peak level and the chart, and the countersigned certificate carries the routing summary.
-// The storage and the inflow are invented for the demo scenario.
+// Issue 17: a designer routes the floods of the Upper Pond spillway (the demo case, crest 55.0 m) through its reservoir,
+// entering the storage and the 10% AEP inflow from CSV files as the seed holds them, reads the peak level and the chart,
+// and the countersigned certificate carries the routing summary. The scheme starts with the reservoir taken out.
 
 type Person = Awaited<ReturnType<typeof createTestUser>>;
+type Seed = { reservoir: { storage: { rows: { level: number; area: number }[] } }; events: { hydrograph: { points?: { time: number; discharge: number }[] } }[] };
 
 const portal = useServedPortal();
 let people: { designer: Person; checker: Person };
@@ -27,11 +28,17 @@ const BAD_INFLOW = path.join(ARTIFACTS, 'harrowfield-inflow-bad.csv');
 beforeAll(async () => {
   process.env.DATABASE_PATH = portal.app.databasePath;
   people = { designer: await createTestUser('designer'), checker: await createTestUser('checker') };
-  const created = await createTestScheme(people.designer.user.id);
+  const seed = demoCase('wendle-harrowfield-reservoir-spillway.json') as unknown as Seed;
+  const steady = demoCase('wendle-harrowfield-reservoir-spillway.json', (value) => {
+    delete value.reservoir;
+    // Without the reservoir no event carries a hydrograph; the 10% AEP is checked steadily at its hydrograph's peak.
+    value.events = (value.events as Record<string, unknown>[]).map(({ hydrograph: _h, ...e }, i) => (i === 0 ? { ...e, discharge: 30 } : e));
+  });
+  const created = await createTestScheme(people.designer.user.id, steady);
   schemeId = created.scheme.id;
   revisionId = created.revision.id;
-  writeFileSync(STORAGE, ['level,area', '31.4,20000', '32.4,60000', '33.4,85000', '34.4,120000', '35.4,160000', '36.4,210000'].join('\n'));
-  writeFileSync(INFLOW, ['time,discharge', '0,3', '2,9', '4,14', '8,9', '12,5', '18,3'].join('\n'));
+  writeFileSync(STORAGE, ['level,area', ...seed.reservoir.storage.rows.map((row) => `${row.level},${row.area}`)].join('\n'));
+  writeFileSync(INFLOW, ['time,discharge', ...seed.events[0].hydrograph.points!.map((p) => `${p.time},${p.discharge}`)].join('\n'));
   writeFileSync(BAD_INFLOW, ['time,discharge', '0,3', '2,nine', '1,14'].join('\n'));
 });
 
@@ -56,7 +63,7 @@ describe('a designer routes the design floods through the reservoir', () => {
     await designer.goto(`${portal.app.baseUrl}/schemes/${schemeId}/wizard/reservoir`);
     await designer.getByLabel('Route the design floods through a reservoir behind the structure').check();
     await designer.locator('#storage-level-area-csv').setInputFiles(STORAGE);
-    await designer.getByText('harrowfield-reservoir-storage.csv: 6 rows put in the table').waitFor();
+    await designer.getByText('harrowfield-reservoir-storage.csv: 8 rows put in the table').waitFor();
 
     await designer.getByLabel('Inflow hydrograph').first().selectOption('table');
     await designer.locator('#inflow-0-csv').setInputFiles(BAD_INFLOW);
@@ -64,9 +71,9 @@ describe('a designer routes the design floods through the reservoir', () => {
     await errors.waitFor();
     expect(await errors.textContent()).toMatch(/Line 3/);
     await designer.locator('#inflow-0-csv').setInputFiles(INFLOW);
-    await designer.getByText('harrowfield-inflow.csv: 6 rows put in the table').waitFor();
+    await designer.getByText('harrowfield-inflow.csv: 10 rows put in the table').waitFor();
     await designer.getByLabel('Inflow hydrograph').nth(1).selectOption('unit-shape');
-    await designer.getByLabel('Time to peak (hours)').fill('5');
+    await designer.getByLabel('Time to peak (hours)').fill('3');
     expect(await accessibilityViolations(designer)).toEqual([]);
     await designer.screenshot({ path: path.join(ARTIFACTS, 'wizard-reservoir.png'), fullPage: true });
     await designer.getByRole('button', { name: 'Save and continue' }).click();
@@ -76,7 +83,7 @@ describe('a designer routes the design floods through the reservoir', () => {
 
     const facts = (await designer.getByTestId('routing-facts').textContent()) ?? '';
     const peak = facts.match(/Peak reservoir level(\d+\.\d{3}) m above/);
-    expect(Number(peak?.[1])).toBeGreaterThan(32.4);
+    expect(Number(peak?.[1])).toBeGreaterThan(55);
     expect(facts).toMatch(/Peak outflow\d+\.\d{3} m³\/s/);
     const chart = await canvasInk(designer, '[data-testid="routing-chart"]');
     expect(chart.inked / chart.total).toBeGreaterThan(0.02);
@@ -107,12 +114,12 @@ describe('a designer routes the design floods through the reservoir', () => {
     const saved = path.join(ARTIFACTS, 'routing-certificate.pdf');
     await download.saveAs(saved);
     const text = execFileSync('pdftotext', ['-layout', saved, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
-    expect(text).toContain('Flood routed through the reservoir, 50% AEP');
-    expect(text).toContain('6 points entered by the designer');
-    expect(text).toContain('table of surface area by level, 6 rows from 31.400 to 36.400 m above');
+    expect(text).toContain('Flood routed through the reservoir, 10% AEP');
+    expect(text).toContain('10 points entered by the designer');
+    expect(text).toContain('table of surface area by level, 8 rows from 50.000 to 60.000 m above');
     expect(text).toMatch(/Peak reservoir level \d+\.\d{3} m above .* at \d+\.\d{2} h/);
     expect(text).toContain(`${peak?.[1]} m above`);
     expect(text).toMatch(/Routing method [^.]*modified Puls/);
-    expect(text).toContain('Inflow, outflow and reservoir level, 1% AEP');
+    expect(text).toContain('Inflow, outflow and reservoir level, 1% AEP with climate allowance');
   });
 });
