@@ -32,7 +32,7 @@ afterEach(() => {
 });
 afterAll(() => server.close());
 
-const EVENTS = [{ name: '50% AEP', discharge: 14 }, { name: '1% AEP', discharge: 38 }];
+const EVENTS = [{ name: '50% AEP', discharge: 14, climateChangeAllowance: null }, { name: '1% AEP', discharge: 38, climateChangeAllowance: 20 }];
 const form = (defaults = { hydrographs: [null, null] }) => render(<ReservoirStepForm schemeId="s1" revisionId="r1" units="SI" datum="Wendle Valley local datum" events={EVENTS} crestLevel={32.4} defaults={defaults} backHref="/back" />);
 const csvFile = (text: string) => new File([text], 'inflow.csv', { type: 'text/csv' });
 
@@ -62,6 +62,7 @@ describe('the reservoir and inflow step', () => {
     await user.upload(document.getElementById('inflow-0-csv') as HTMLInputElement, csvFile('time,discharge\n0,3\n2,9\n6,4\n'));
     await screen.findByText('Inflow hydrograph of 50% AEP: 3 rows');
     await user.selectOptions(second, 'unit-shape');
+    expect(screen.getByText('The NRCS dimensionless unit hydrograph, scaled to peak at the design discharge: 38 m³/s plus its 20 % climate-change allowance.')).toBeTruthy();
     await user.type(screen.getByLabelText('Time to peak (hours)'), '5');
     await user.type(screen.getByLabelText('Length of the reservoir along the valley (m)'), '400');
     await user.click(screen.getByRole('button', { name: 'Save and continue' }));

@@ -13,12 +13,13 @@ type Choice = 'none' | 'table' | 'unit-shape';
 const PEAK_HINT = 'From the start of the rise to the peak.';
 
 /** One design event's inflow: none (its steady design discharge), a table of time and discharge, or a published shape. */
-export function HydrographFields({ form, index, event, dischargeUnit, revisionId }: { form: Form; index: number; event: { name: string; discharge: number | null }; dischargeUnit: string; revisionId: string }) {
+export function HydrographFields({ form, index, event, dischargeUnit, revisionId }: { form: Form; index: number; event: { name: string; discharge: number | null; climateChangeAllowance: number | null }; dischargeUnit: string; revisionId: string }) {
   const { register, control, formState, watch, setValue } = form;
   const name = `hydrographs.${index}` as const;
   const value = watch(name);
   const choice: Choice = value ? value.kind : 'none';
   const e = (path: string) => errorAt(formState.errors, path);
+  const allowance = event.climateChangeAllowance ? ` plus its ${event.climateChangeAllowance} % climate-change allowance` : '';
   const choose = (next: Choice) => setValue(name, next === 'none' ? null : next === 'table' ? { kind: 'table', points: [] } : { kind: 'unit-shape', shape: 'nrcs-dimensionless', timeToPeak: undefined as unknown as number });
   const selectId = `inflow-${index}-kind`;
   const peakId = `inflow-${index}-time-to-peak`;
@@ -34,6 +35,7 @@ export function HydrographFields({ form, index, event, dischargeUnit, revisionId
       </select>
       {choice === 'table' ? (
         <div className="mt-4">
+          {event.climateChangeAllowance ? <p className="mb-2 text-xs text-ink-faint">Enter the discharges before the allowance: each is raised by the event’s {event.climateChangeAllowance} % climate-change allowance.</p> : null}
           <RowsEditor<ReservoirStepInput>
             idPrefix={`inflow-${index}`}
             caption={`Inflow hydrograph of ${event.name}`}
@@ -48,7 +50,7 @@ export function HydrographFields({ form, index, event, dischargeUnit, revisionId
       ) : null}
       {choice === 'unit-shape' ? (
         <div className="mt-4 max-w-sm">
-          <p className="mb-2 text-xs text-ink-faint">The NRCS dimensionless unit hydrograph, scaled to peak at the design discharge{event.discharge !== null ? ` of ${event.discharge} ${dischargeUnit}` : ''}.</p>
+          <p className="mb-2 text-xs text-ink-faint">The NRCS dimensionless unit hydrograph, scaled to peak at the design discharge{event.discharge !== null ? `: ${event.discharge} ${dischargeUnit}${allowance}` : ''}.</p>
           <WizardField id={peakId} label="Time to peak (hours)" hint={PEAK_HINT} error={peakError}>
             <input id={peakId} className={`${inputClassName} num`} {...numberInputProps} {...describedBy(peakId, { hint: PEAK_HINT, error: peakError })} {...register(`${name}.timeToPeak` as never, { setValueAs: asNumber })} />
           </WizardField>

@@ -16,7 +16,7 @@ type Props = {
   revisionId: string;
   units: CaseUnits;
   datum: string | null;
-  events: { name: string; discharge: number | null }[];
+  events: { name: string; discharge: number | null; climateChangeAllowance: number | null }[];
   crestLevel: number | null;
   defaults: ReservoirStepInput;
   backHref: string;

@@ -2,9 +2,15 @@ import 'server-only';
 import type { DraftInputs } from '@/lib/revisions/draft-inputs';
 import type { ReservoirStepInput } from '@/lib/validation/reservoir-step-schema';
 
+export interface ReservoirEvent {
+  name: string;
+  discharge: number | null;
+  climateChangeAllowance: number | null;
+}
+
 type ReservoirStepOpening =
   | { unavailable: { reason: string; go: { step: 'flows' | 'limits'; label: string } } }
-  | { unavailable: null; defaults: ReservoirStepInput; events: { name: string; discharge: number | null }[]; crestLevel: number | null };
+  | { unavailable: null; defaults: ReservoirStepInput; events: ReservoirEvent[]; crestLevel: number | null };
 
 /** What the reservoir step opens with, or why it cannot be used yet (no events; a structure that holds no storage). */
 export function reservoirDefaults(draft: DraftInputs): ReservoirStepOpening {
@@ -16,7 +22,7 @@ export function reservoirDefaults(draft: DraftInputs): ReservoirStepOpening {
   const crestLevel = control?.type === 'weir' && control.kind !== 'rating-table' && bed !== undefined ? bed + control.sillHeight : null;
   return {
     unavailable: null,
-    events: events.map((e) => ({ name: e.name, discharge: e.discharge ?? null })),
+    events: events.map((e) => ({ name: e.name, discharge: e.discharge ?? null, climateChangeAllowance: e.climateChangeAllowance ?? null })),
     crestLevel,
     defaults: { ...(draft.reservoir ? { reservoir: draft.reservoir } : {}), hydrographs: events.map((e) => e.hydrograph ?? null) },
   };
