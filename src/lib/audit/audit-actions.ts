@@ -31,6 +31,8 @@ export const AUDIT_ACTIONS = {
   'certificate.downloaded': 'Downloaded a certificate',
   'parcels.register-imported': 'Imported a parcels register',
   'parcels.register-edited': 'Edited a parcels register',
+  'parcels.register-restored': 'Restored an earlier parcels register',
+  'parcels.plan-imported': 'Uploaded a plan of the parcels',
   'letters.template-saved': 'Saved a letter template',
   'letters.generated': 'Generated letters',
   'letters.retry': 'Retried failed letters',

@@ -8,6 +8,7 @@ import { citableCertificate } from '@/lib/certificates/revision-revocation';
 import { UnprocessableError } from '@/lib/http/app-errors';
 import { type ParcelImpactRow, impactForRevision } from '@/lib/parcels/compute-parcel-impact';
 import { isPreliminary } from '@/lib/parcels/select-revision';
+import { letterPlans } from '@/lib/plan/letter-plan';
 import { writeLetterPdf } from './letter-files';
 import type { LetterImpact } from './letter-impact';
 import { namedMethods } from './letter-methods';
@@ -68,6 +69,7 @@ export async function prepareLetters({ user, scheme, revision, written, baseUrl 
   const shared = { impactThresholdM: results.impactThreshold, methods: namedMethods(results.caseInput), engineVersion: results.engineVersion, certificate: certificate ? { number: certificate.number, verificationUrl: certificateVerificationUrl(baseUrl, certificate.number) } : null };
   const discharges = new Map(results.events.map((e) => [e.name, e.discharge]));
   const versions = await latestVersions(revision.id);
+  const planOf = await letterPlans(scheme.id, results);
   const preliminary = isPreliminary(revision);
   const letters: PreparedLetter[] = [];
   for (const row of affected) {
@@ -88,6 +90,7 @@ export async function prepareLetters({ user, scheme, revision, written, baseUrl 
       scheme: { name: scheme.name, reference: scheme.reference },
       paragraphs: { introduction: fill(p.introduction), scheme: fill(p.scheme), response: fill(p.response), contact: fill(p.contact), signOff: fill(p.signOff) },
       impact,
+      plan: planOf ? planOf(row) : null,
     });
     const pdfPath = await writeLetterPdf(id, pdf);
     written.push(pdfPath);

@@ -3,6 +3,8 @@ import PDFDocument from 'pdfkit';
 import { discharge, distance, metres } from '@/lib/parcels/format-quantity';
 import { registerPdfFonts } from '@/lib/pdf/fonts';
 import type { LetterParagraphs } from '@/lib/validation/letter-schemas';
+import { drawPlanPdf } from '@/lib/plan/draw-plan-pdf';
+import { LETTER_PLAN_SIZE, type LetterPlan } from '@/lib/plan/letter-plan';
 import { drawLetterDiagram } from './draw-letter-diagram';
 import { cautionText, eventParagraph } from './letter-content';
 import type { LetterImpact } from './letter-impact';
@@ -22,6 +24,8 @@ export interface LetterDocument {
   /** The template's paragraphs with the placeholders already filled in. */
   paragraphs: LetterParagraphs;
   impact: LetterImpact;
+  /** The plan cropped round the parcel, when the scheme has a plan with its outline. */
+  plan?: LetterPlan | null;
 }
 
 const INK = '#1f2a2e';
@@ -104,6 +108,17 @@ function certificateCheck(doc: Doc, certificate: NonNullable<LetterImpact['certi
   doc.font('sans').fontSize(10).fillColor(INK).text(letterText(certificate.verificationUrl), { link: certificate.verificationUrl, underline: true }).moveDown(0.5);
 }
 
+/** The plan round the parcel: the same drawing the portal shows, cropped, with a key in words. */
+function planOfTheLand(doc: Doc, plan: LetterPlan, reference: string): void {
+  if (doc.y + LETTER_PLAN_SIZE.height + 70 > 842 - MARGIN) doc.addPage();
+  doc.moveDown(0.8).font('sansSemiBold').fontSize(9).fillColor(INK).text(letterText(`Plan: where your land (${reference}) lies`));
+  const top = doc.y + 4;
+  const used = drawPlanPdf(doc, plan.drawing, { x: MARGIN, y: top, ...LETTER_PLAN_SIZE }, reference);
+  doc.x = MARGIN;
+  doc.y = top + used + 8;
+  doc.font('sansItalic').fontSize(8).fillColor(SOFT).text(letterText(`Your land has the heavy outline. Grid north is up (${plan.coordinateSystem}). The river marks show the flood "${plan.event}".`));
+}
+
 function footers(doc: Doc, letter: LetterDocument): void {
   const range = doc.bufferedPageRange();
   for (let i = 0; i < range.count; i++) {
@@ -139,6 +154,7 @@ function body(doc: Doc, letter: LetterDocument): void {
     doc.y += 168;
     doc.font('sansItalic').fontSize(8).fillColor(SOFT).text(letterText(`Distance upstream of the structure across, level above datum up. Your land is the shaded band from ${distance(impact.strip.from)} to ${distance(impact.strip.to)}.`));
   }
+  if (letter.plan) planOfTheLand(doc, letter.plan, impact.parcel.reference);
   cautionBox(doc, impact);
   if (impact.certificate) certificateCheck(doc, impact.certificate);
   heading(doc, 'How to respond');

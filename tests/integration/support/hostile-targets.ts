@@ -54,6 +54,7 @@ export const RAW_BODY_TARGETS: Record<string, RawBodyTarget> = {
   'POST api/uploads/routing-csv-preview': { role: 'designer', query: (w) => `revision=${w.draft.revisionId}&table=hydrograph`, contentType: 'text/csv' },
   'POST api/parcels/[id]/csv': { role: 'liaison', id: (w) => w.certified.schemeId, contentType: 'text/csv' },
   'POST api/parcels/[id]/csv-preview': { role: 'liaison', id: (w) => w.certified.schemeId, contentType: 'text/csv', previewReportsIssues: true },
+  'POST api/parcels/[id]/plan': { role: 'liaison', id: (w) => w.certified.schemeId, contentType: 'application/geo+json' },
   'POST api/certificates/verification': { role: 'planning', contentType: 'multipart/form-data; boundary=----sillmark' },
 };
 
@@ -111,6 +112,7 @@ export const ACTION_TARGETS: Record<string, ActionTarget> = {
   '(portal)/schemes/[id] startDraftAction': { role: 'designer', valid: (w) => json({ revisionId: w.certified.revisionId }) },
   '(portal)/schemes/[id] adoptSizedCrestAction': { role: 'designer', valid: (w) => json({ revisionId: w.draft.revisionId }) },
   '(portal)/liaison/[id]/register saveParcelEditsAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, baseRegisterId: w.certified.registerId ?? 'none', note: 'fuzz', parcels: [parcel] }) },
+  '(portal)/liaison/[id]/register/history restoreRegisterVersionAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, baseRegisterId: w.certified.registerId ?? 'none', version: 1, note: '' }) },
   '(portal)/liaison/[id]/template saveLetterTemplateAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, ...paragraphs }) },
   '(portal)/liaison/[id]/letters generateLettersAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, revisionId: w.certified.revisionId }) },
   '(portal)/liaison/[id]/letters/[letterId] logLetterResponseAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId, receivedOn: '2026-01-12', summary: 'Owner telephoned; no objection.' }) },

@@ -5,10 +5,13 @@ import { storageCurve } from '@/lib/hydraulics/routing/storage-curve';
 import { volumeBalance } from '@/lib/hydraulics/routing/volume-balance';
 
 // A worked example of level-pool routing from a published text, RECALLED FROM MEMORY (data and answer may be imperfect):
-// Chow, Maidment and Mays, Applied Hydrology, 1988, Example 8.2.1 (storage-indication routing): a detention pond of 1 acre
-// with vertical sides, a pipe outlet rated at 0.5 ft steps of depth, an inflow hydrograph at 10-minute intervals rising to
-// 360 cfs at 60 min. Routed at the example's own Δt = 10 min, the recalled answer is a peak outflow of about 270 cfs at
-// 80 min, the pond then about 9.8 ft deep; the recollection is uncertain, so this is the weakest of the routing checks.
+// Chow, Maidment and Mays, Applied Hydrology, 1988, §8.2 (storage-indication routing): a detention pond of 1 acre with
+// vertical sides, a pipe outlet rated at 0.5 ft steps of depth, an inflow hydrograph at 10-minute intervals rising to
+// 360 cfs at 60 min, routed at Δt = 10 min. The inflow and rating tables below are as recalled; the answer (a peak outflow
+// of about 270 cfs at 80 min, the pond then about 9.8 ft deep) is recalled less surely, and was confirmed by the lead
+// engineer with a separate 20-line hand tabulation of the book's storage-indication table (written outside this project's
+// code, linear interpolation in 2S/Δt + Q): 270.0 cfs at 80 min, 9.77 ft. The weakest of the routing checks; the analytic
+// and odex checks beside it are the independent ones.
 // Units are US customary here because the example is; the engine is unit-free in this use.
 const DEPTHS_FT = Array.from({ length: 21 }, (_, i) => i * 0.5);
 const OUTFLOW_CFS = [0, 3, 8, 17, 30, 43, 60, 78, 97, 117, 137, 156, 173, 190, 205, 218, 231, 242, 253, 264, 275];

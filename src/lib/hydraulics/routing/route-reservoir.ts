@@ -5,6 +5,7 @@ import { PEAK_LEVEL_TOLERANCE, refinedPulsMarch } from './routing-refinement';
 import type { HydrographSummary, RoutingResult } from './routing-result';
 import { routingSelfCheck } from './routing-self-check';
 import type { ReservoirModel } from './storage-indication';
+import { routingTableRows } from './routing-table-rows';
 import { volumeBalance } from './volume-balance';
 
 export const MODIFIED_PULS_SOURCE = 'Storage-indication (modified Puls) level-pool routing: Chow, Maidment and Mays, Applied Hydrology, 1988, ch. 8 (§8.2)';
@@ -76,7 +77,7 @@ export function routeReservoir(input: RoutingInput): RoutingOutcome {
     lag: march.outflowPeak.time - inflowPeak.time,
     peakLevel: march.peakLevel,
     volumeBalance: volumeBalance(march.steps),
-    steps: march.steps,
+    steps: routingTableRows(march.steps, [march.peakLevel.time, march.outflowPeak.time]),
     assumptions,
   };
   return { result, warnings };
