@@ -104,6 +104,9 @@ describe('the wizard by keyboard alone, from signing in to adopting the sized cr
     expect(await page.getByTestId('preview-head').first().textContent()).toMatch(/^\d+\.\d{3} m$/);
     await tabToButton(page, 'Save and continue');
     await page.keyboard.press('Enter');
+    await page.waitForURL(/\/wizard\/reservoir$/);
+    await tabToButton(page, 'Save and continue');
+    await page.keyboard.press('Enter');
     await page.waitForURL(/\/wizard\/limits$/);
   });
 

@@ -58,6 +58,8 @@ describe('a designer builds a scheme on surveyed cross-sections from a CSV file'
     await fillByLabel(page, 'Crest breadth (m)', '3.5');
     await page.getByTestId('preview-head').first().waitFor();
     await save(page);
+    await page.waitForURL(/\/wizard\/reservoir$/);
+    await save(page);
     await page.waitForURL(/\/wizard\/limits$/);
 
     expect(await page.getByRole('table').locator('tbody tr').count()).toBe(6);

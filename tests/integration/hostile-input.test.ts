@@ -131,6 +131,7 @@ describe('query strings', () => {
     ['parcels/[id]/impact', 'liaison', (w) => w.certified.schemeId, ['revision']],
     ['schemes/[id]/case-file', 'designer', (w) => w.certified.schemeId, ['revision']],
     ['schemes/[id]/step-table', 'designer', (w) => w.certified.schemeId, ['revision', 'event']],
+    ['schemes/[id]/routing-table', 'designer', (w) => w.certified.schemeId, ['revision', 'event']],
   ];
   for (const [route, person, id, params] of GETS) {
     it(`GET api/${route}: hostile parameters get an answer or a 4xx that says why, never a 500`, async () => {

@@ -177,7 +177,7 @@ export const CASE_FIELDS = {
   'events[].annualExceedanceProbability': { label: 'annual exceedance probability (a fraction, 0 to 1)', unit: 'none' },
   'events[].returnPeriod': { label: 'return period', unit: 'years' },
   'events[].climateChangeAllowance': { label: 'climate-change allowance', unit: 'percent' },
-  'events[].hydrograph': { label: 'inflow hydrograph', heading: true },
+  'events[].hydrograph': { label: 'inflow hydrograph', heading: true, step: 'reservoir' },
   'events[].hydrograph.kind': { label: 'how the hydrograph is given (a table, or a shape from the peak)' },
   'events[].hydrograph.points': { label: 'time and discharge points' },
   'events[].hydrograph.points[]': { label: 'point', item: {} },
@@ -214,7 +214,7 @@ export const CASE_FIELDS = {
   'existingControl.type': { label: 'kind of control' },
   'existingControl.depth': { label: 'depth at the structure without the scheme', unit: 'depth' },
 
-  reservoir: { label: 'reservoir behind the spillway', step: 'structure', heading: true },
+  reservoir: { label: 'reservoir behind the spillway', step: 'reservoir', heading: true },
   'reservoir.storage': { label: 'storage' },
   'reservoir.storage.kind': { label: 'how the storage is given (level and area, level and volume, or a constant area)' },
   'reservoir.storage.rows': { label: 'storage table' },

@@ -17,6 +17,7 @@ const WIZARD_ONLY: Record<string, string> = {
 const RENAMED: Partial<Record<EditableStep, Record<string, string>>> = {
   scheme: { bedLevelAtControl: 'reach.bedLevelAtControl', reachLength: 'reach.length' },
   limits: { bankHeight: 'reach.bankHeight', sectionBankLevels: 'reach.sections' },
+  reservoir: { hydrographs: 'events' },
 };
 
 /** A step form's field path as the case file's (the channel step's `section.width` is `reach.section.width`). */
@@ -25,7 +26,8 @@ export function casePathOfStepField(step: EditableStep, path: string): string {
   if (first === undefined) return path;
   const renamed = RENAMED[step]?.[String(first)];
   const prefix = renamed ?? (step === 'channel' ? `reach.${String(first)}` : String(first));
-  const tail = step === 'limits' && first === 'sectionBankLevels' && typeof rest[0] === 'number' ? [rest[0], 'bankLevel', ...rest.slice(1)] : rest;
+  const inserted = step === 'limits' && first === 'sectionBankLevels' ? 'bankLevel' : step === 'reservoir' && first === 'hydrographs' ? 'hydrograph' : null;
+  const tail = inserted && typeof rest[0] === 'number' ? [rest[0], inserted, ...rest.slice(1)] : rest;
   return [prefix, ...tail].reduce<string>((acc, s) => (typeof s === 'number' ? `${acc}[${s}]` : `${acc}.${s}`), '').replace(/^\./, '');
 }
 

@@ -37,7 +37,7 @@ export function drawEventResults(doc: Doc, e: EventResult, units: CaseInput['uni
       { title: `Margin (${u.length})`, width: 1.2, align: 'right', mono: true },
       { title: 'Result', width: 0.9 },
     ],
-    e.limits.map((l) => ({ colour: l.pass ? INK : FAIL, cells: [l.label, fixed(l.distanceUpstream, 1), fixed(l.maxLevel), fixed(l.freeboard), fixed(l.waterLevel), fixed(l.margin), l.pass ? 'pass' : 'FAIL'] })),
+    e.limits.map((l) => ({ colour: l.pass ? INK : FAIL, cells: [l.source === 'reservoir' ? `${l.label} (within the reservoir: its peak level)` : l.label, fixed(l.distanceUpstream, 1), fixed(l.maxLevel), fixed(l.freeboard), fixed(l.waterLevel), fixed(l.margin), l.pass ? 'pass' : 'FAIL'] })),
   );
 }
 

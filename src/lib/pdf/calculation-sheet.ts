@@ -9,6 +9,7 @@ import { datumName, fixed, lengthUnit, utcDateTime } from './certificate-text';
 import { registerPdfFonts } from './fonts';
 import { drawInputSummary } from './input-summary';
 import { drawLongSections } from './long-sections';
+import { drawRoutingSections } from './routing-sections';
 import { ACCENT, CAUTION, INK, MARGIN, SOFT, bullets, footers, heading, paragraph, watermarkEveryPage } from './pdf-layout';
 import { drawSensitivity } from './sensitivity-table';
 
@@ -52,6 +53,7 @@ export function renderCalculationSheet(o: CalculationSheetOptions): Promise<Buff
   }
   drawSensitivity(doc, r, o.datum);
   drawLongSections(doc, o.input, r, o.datum);
+  drawRoutingSections(doc, r, o.datum);
   if (r.warnings.length > 0) {
     heading(doc, 'Warnings from the calculation');
     bullets(doc, r.warnings.map((w) => engineTextInWords(w, o.input)));

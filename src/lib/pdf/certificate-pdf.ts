@@ -9,6 +9,7 @@ import { eventsTable, limitsTable } from './certificate-results';
 import { datumName, pdfText, utcDateTime } from './certificate-text';
 import { drawInputSummary } from './input-summary';
 import { drawLongSections } from './long-sections';
+import { drawRoutingSections } from './routing-sections';
 import { ACCENT, CAUTION, type Doc, FAIL, INK, MARGIN, PASS, SOFT, bullets, contentWidth, fields, footers, heading, keepTogether, paragraph } from './pdf-layout';
 import { drawSensitivity } from './sensitivity-table';
 
@@ -89,6 +90,7 @@ export function renderCertificatePdf(c: CertificateContent): Promise<Buffer> {
   limitsTable(doc, c.results, c.datum);
   drawSensitivity(doc, c.results, c.datum);
   drawLongSections(doc, c.inputs, c.results, c.datum);
+  drawRoutingSections(doc, c.results, c.datum);
   heading(doc, 'Assumptions');
   bullets(doc, certificateAssumptions(c.inputs, c.results));
   heading(doc, 'Methods and their published sources');

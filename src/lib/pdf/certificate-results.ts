@@ -48,7 +48,7 @@ export function limitsTable(doc: Doc, results: CaseResult, datum: string | null)
   const rows = results.events.flatMap((e) =>
     e.limits.map((l) => ({
       colour: l.pass ? INK : FAIL,
-      cells: [e.name, l.label, withUnit(l.distanceUpstream, L, 0), fixed(l.maxLevel), withUnit(l.freeboard, L), fixed(l.waterLevel), `${l.margin >= 0 ? '+' : ''}${fixed(l.margin)} ${L}`, l.pass ? 'met' : 'NOT MET'],
+      cells: [e.name, l.source === 'reservoir' ? `${l.label} (within the reservoir: its peak level)` : l.label, withUnit(l.distanceUpstream, L, 0), fixed(l.maxLevel), withUnit(l.freeboard, L), fixed(l.waterLevel), `${l.margin >= 0 ? '+' : ''}${fixed(l.margin)} ${L}`, l.pass ? 'met' : 'NOT MET'],
     })),
   );
   if (rows.length === 0) return;

@@ -5,6 +5,7 @@ import { dischargeUnit, fixed, lengthUnit, levelUnit, percent, withUnit } from '
 import { channelRows } from './input-summary-channel';
 import { structureRows } from './input-summary-structure';
 import { type Doc, type FieldRow, fields, heading, table } from './pdf-layout';
+import { drawReservoirInputs } from './input-summary-reservoir';
 
 // Every input of the check, in one place for the certificate and the calculation sheet alike, so that a reader of
 // either can rebuild the check from the page.
@@ -95,6 +96,7 @@ export function drawInputSummary(doc: Doc, source: InputSummarySource): void {
   fields(doc, channelRows(source.inputs, source.results, source.datum));
   heading(doc, 'Design flood events', 50);
   eventsTable(doc, source);
+  drawReservoirInputs(doc, source.inputs, source.datum);
   heading(doc, 'Flood-level limits and freeboard', 50);
   limitsTable(doc, source);
   heading(doc, 'Method settings');

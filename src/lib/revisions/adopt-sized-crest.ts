@@ -14,7 +14,7 @@ export async function adoptSizedCrest({ revisionId, user }: { revisionId: string
   const evaluation = await evaluateDraft({ revisionId, user });
   if (evaluation.status !== 'evaluated') throw new UnprocessableError('The draft cannot be evaluated yet, so there is no sized crest to adopt.', evaluation.issues);
   const sizing = evaluation.result.sizing;
-  if (!sizing) throw new UnprocessableError('Crest sizing was not asked for: choose what to size in step 5, thresholds and limits.', [{ path: 'sizing', message: 'is not set' }]);
+  if (!sizing) throw new UnprocessableError('Crest sizing was not asked for: choose what to size in step 6, thresholds and limits.', [{ path: 'sizing', message: 'is not set' }]);
   if (sizing.value === null) throw new UnprocessableError(`No crest in the range searched passes every limit: ${sizing.reason}.`, [{ path: 'sizing', message: sizing.reason }]);
   const value = sizing.value;
   const sequelize = database();

@@ -1,3 +1,4 @@
+import type { ReservoirStepValues } from '@/lib/validation/reservoir-step-schema';
 import type { ChannelStepValues, EditableStep, FlowsStepValues, LimitsStepValues, SchemeStepValues, StructureStepValues } from '@/lib/validation/scheme-schemas';
 import type { SurveySection } from '@/lib/validation/survey-csv';
 import type { DraftInputs, DraftReach, WizardNotes } from './draft-inputs';
@@ -9,6 +10,7 @@ export type StepValues =
   | { step: 'channel'; values: ChannelStepValues }
   | { step: 'flows'; values: FlowsStepValues }
   | { step: 'structure'; values: StructureStepValues }
+  | { step: 'reservoir'; values: ReservoirStepValues }
   | { step: 'limits'; values: LimitsStepValues };
 
 function withCompleted(wizard: WizardNotes | undefined, step: EditableStep): WizardNotes {
@@ -36,6 +38,14 @@ function limitsIntoReach(reach: DraftReach | undefined, values: LimitsStepValues
   return { ...rest, kind: 'prismatic', ...(values.bankHeight !== undefined ? { bankHeight: values.bankHeight } : {}) };
 }
 
+/** The flows step does not show the inflow hydrographs: an event keeps its own while its name stays the same. */
+function withHydrographsKept(before: DraftInputs['events'], after: NonNullable<DraftInputs['events']>): NonNullable<DraftInputs['events']> {
+  return after.map((event) => {
+    const hydrograph = before?.find((old) => old.name === event.name)?.hydrograph;
+    return hydrograph ? { ...event, hydrograph } : event;
+  });
+}
+
 export function applyWizardStep(draft: DraftInputs, input: StepValues): DraftInputs {
   const wizard = withCompleted(draft.wizard, input.step);
   switch (input.step) {
@@ -51,7 +61,15 @@ export function applyWizardStep(draft: DraftInputs, input: StepValues): DraftInp
       return { ...draft, reach: siteIntoReach(reach, wizard.site), wizard: notes };
     }
     case 'flows':
-      return { ...draft, events: input.values.events, wizard: { ...wizard, governing: input.values.governing } };
+      return { ...draft, events: withHydrographsKept(draft.events, input.values.events), wizard: { ...wizard, governing: input.values.governing } };
+    case 'reservoir': {
+      const { reservoir: _old, ...rest } = draft;
+      const events = (draft.events ?? []).map(({ hydrograph: _h, ...event }, i) => {
+        const hydrograph = input.values.hydrographs[i];
+        return hydrograph ? { ...event, hydrograph } : event;
+      });
+      return { ...rest, events, ...(input.values.reservoir ? { reservoir: input.values.reservoir } : {}), wizard };
+    }
     case 'structure': {
       const { existingControl: _old, ...rest } = draft;
       return { ...rest, control: input.values.control, ...(input.values.existingControl ? { existingControl: input.values.existingControl } : {}), wizard };

@@ -27,6 +27,7 @@ export interface DraftInputs {
   events?: CaseInput['events'];
   control?: CaseInput['control'];
   existingControl?: CaseInput['existingControl'];
+  reservoir?: CaseInput['reservoir'];
   profile?: CaseInput['profile'];
   impactThreshold?: number;
   minimumMargin?: number;
@@ -61,7 +62,7 @@ export function caseFileOf(draft: DraftInputs): Omit<DraftInputs, 'wizard'> {
 /** Steps saved in the wizard; for a case that did not come through it (the demo seed), the parts it already holds. */
 export function completedSteps(draft: DraftInputs): EditableStep[] {
   if (draft.wizard?.completed) return draft.wizard.completed;
-  const held: [EditableStep, unknown][] = [['scheme', draft.title], ['channel', draft.reach], ['flows', draft.events], ['structure', draft.control], ['limits', draft.limits]];
+  const held: [EditableStep, unknown][] = [['scheme', draft.title], ['channel', draft.reach], ['flows', draft.events], ['structure', draft.control], ['reservoir', draft.reservoir], ['limits', draft.limits]];
   return held.filter(([, part]) => part !== undefined).map(([step]) => step);
 }
 

@@ -24,7 +24,7 @@ export interface RevisionHistory {
   entries: HistoryEntry[];
 }
 
-const STEP_WORDS: Record<string, string> = { scheme: 'the scheme', channel: 'the channel', flows: 'the design flows', structure: 'the structure', limits: 'the thresholds and limits' };
+const STEP_WORDS: Record<string, string> = { scheme: 'the scheme', channel: 'the channel', flows: 'the design flows', structure: 'the structure', reservoir: 'the reservoir and inflow', limits: 'the thresholds and limits' };
 
 function summary(event: AuditEvent, caseFile: unknown): string {
   const d = JSON.parse(event.detailsJson) as { step?: string; changed?: string[]; origin?: string; verdict?: string; file?: string; field?: string; from?: number; to?: number; rowCount?: number };

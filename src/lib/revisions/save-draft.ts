@@ -40,6 +40,15 @@ function checkedValues(request: SaveStepRequest, draft: DraftInputs): StepValues
       return { step, values: parse(STEP_SCHEMAS.flows(units).safeParse(values)) };
     case 'structure':
       return { step, values: parse(STEP_SCHEMAS.structure(units).safeParse(values)) };
+    case 'reservoir': {
+      const v = parse(STEP_SCHEMAS.reservoir(units).safeParse(values));
+      const events = draft.events?.length ?? 0;
+      if (v.hydrographs.length !== events) throw new InvalidRequestError([{ path: 'hydrographs', message: `must give one inflow (or none) for each of the ${events} design events` }]);
+      const control = draft.control;
+      const holdsStorage = control?.type === 'weir';
+      if (v.reservoir && !holdsStorage) throw new InvalidRequestError([{ path: 'reservoir', message: 'needs a weir, spillway or rating table at the structure: a fixed depth gives no outflow for each level' }]);
+      return { step, values: v };
+    }
     case 'limits': {
       const v = parse(STEP_SCHEMAS.limits(units).safeParse(values));
       const sections = draft.reach?.kind === 'surveyed' ? draft.reach.sections.length : 0;

@@ -13,3 +13,9 @@ export function describeBytes(bytes: number): string {
   if (bytes >= 1024) return `${Math.ceil(bytes / 1024)} KB`;
   return `${bytes} bytes`;
 }
+
+/**
+ * A hydrograph or storage-table CSV, read for the reservoir step and never stored. Its rows are capped on their own
+ * (MAX_HYDROGRAPH_POINTS, MAX_STORAGE_ROWS); this bounds the reading, with room for comments and wide number columns.
+ */
+export const ROUTING_CSV_LIMIT_BYTES = 1024 * 1024;

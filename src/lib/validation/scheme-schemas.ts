@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { type CaseUnits, caseSchema } from './case-schema';
 import { multiLineText, singleLineText } from './plain-text';
 import { missingOr } from './case-schema-parts';
+import { reservoirStepSchema } from './reservoir-step-schema';
 
 // The wizard's forms, one schema per step. Every case field is taken from the engine's own case schema
 // (a .pick() or a part of it), so the form in the browser and the server refuse exactly the same input.
@@ -21,9 +22,9 @@ function surveyedSection(units: CaseUnits) {
   return caseObject(units).shape.reach.options[1].shape.sections.element;
 }
 
-export const WIZARD_STEPS = ['scheme', 'channel', 'flows', 'structure', 'limits', 'results'] as const;
+export const WIZARD_STEPS = ['scheme', 'channel', 'flows', 'structure', 'reservoir', 'limits', 'results'] as const;
 export type WizardStep = (typeof WIZARD_STEPS)[number];
-export const EDITABLE_STEPS = ['scheme', 'channel', 'flows', 'structure', 'limits'] as const;
+export const EDITABLE_STEPS = ['scheme', 'channel', 'flows', 'structure', 'reservoir', 'limits'] as const;
 export type EditableStep = (typeof EDITABLE_STEPS)[number];
 
 export const unitsSchema = z.enum(['SI', 'US'], { error: 'must be SI (m, m³/s) or US customary (ft, ft³/s)' });
@@ -85,7 +86,7 @@ export function structureStepSchema(units: CaseUnits) {
 export type StructureStepInput = z.input<ReturnType<typeof structureStepSchema>>;
 export type StructureStepValues = z.output<ReturnType<typeof structureStepSchema>>;
 
-/** Step 5, thresholds and limits, and whether to size the crest and run the sensitivity table. */
+/** Step 6, thresholds and limits, and whether to size the crest and run the sensitivity table. */
 export function limitsStepSchema(units: CaseUnits) {
   const c = caseObject(units).shape;
   return z.object({
@@ -107,6 +108,7 @@ export const STEP_SCHEMAS = {
   channel: channelStepSchema,
   flows: flowsStepSchema,
   structure: structureStepSchema,
+  reservoir: reservoirStepSchema,
   limits: limitsStepSchema,
 } as const;
 

@@ -2,7 +2,7 @@ import type { JsonPath, JsonValue } from '../../support/hostile-json';
 import { dotted } from '../../support/hostile-json';
 import type { Person, PortalWorld } from './portal-world';
 import { demoCase } from './scheme-factory';
-import { CHANNEL_STEP, FLOWS_STEP, LIMITS_STEP, SCHEME_STEP, STRUCTURE_STEP } from './scheme-requests';
+import { CHANNEL_STEP, FLOWS_STEP, LIMITS_STEP, RESERVOIR_STEP, SCHEME_STEP, STRUCTURE_STEP } from './scheme-requests';
 
 // What the fuzzing sends where: for every route handler that reads a body and every server action, the role allowed
 // to call it and one valid body. The fuzz test checks that this list covers the access matrix, so a new route or
@@ -29,7 +29,7 @@ export const JSON_BODY_TARGETS: Record<string, JsonBodyTarget[]> = {
   'POST api/evaluate': [{ role: 'designer', valid: (w) => json({ revisionId: w.draft.revisionId }) }, { role: 'planning', valid: () => json(demoCase('wendle-harrowfield-depth-control.json')) }],
   'POST api/head-preview': [{ role: 'designer', valid: (w) => json({ revisionId: w.draft.revisionId, control: STRUCTURE_STEP.control }) }],
   'POST api/schemes': [{ role: 'designer', valid: () => json(SCHEME_STEP) }],
-  'PUT api/revisions/[id]': [saveStep('scheme', SCHEME_STEP), saveStep('channel', CHANNEL_STEP), saveStep('flows', FLOWS_STEP), saveStep('structure', STRUCTURE_STEP), saveStep('limits', LIMITS_STEP)],
+  'PUT api/revisions/[id]': [saveStep('scheme', SCHEME_STEP), saveStep('channel', CHANNEL_STEP), saveStep('flows', FLOWS_STEP), saveStep('structure', STRUCTURE_STEP), saveStep('reservoir', RESERVOIR_STEP), saveStep('limits', LIMITS_STEP)],
   'POST api/letters/batches/[id]/send': [{ role: 'liaison', id: (w) => w.letters.batchId, valid: () => json({ max: 5, retryFailed: false }), objectsAreValid: true }],
   'POST api/admin/users': [{ role: 'admin', valid: () => json({ email: 'new.engineer@wendle-valley.test', name: 'New Engineer', role: 'checker' }) }],
   'PATCH api/admin/users/[id]': [{ role: 'admin', id: (w) => w.people.otherChecker.user.id, valid: () => json({ role: 'designer' }) }],
@@ -51,6 +51,7 @@ export const RAW_BODY_TARGETS: Record<string, RawBodyTarget> = {
   'POST api/schemes/import': { role: 'designer', contentType: 'application/json', validJson: () => json(demoCase()) },
   'POST api/uploads/survey': { role: 'designer', query: (w) => `revision=${w.draft.revisionId}`, contentType: 'text/csv' },
   'POST api/uploads/survey-preview': { role: 'designer', query: (w) => `revision=${w.draft.revisionId}`, contentType: 'text/csv' },
+  'POST api/uploads/routing-csv-preview': { role: 'designer', query: (w) => `revision=${w.draft.revisionId}&table=hydrograph`, contentType: 'text/csv' },
   'POST api/parcels/[id]/csv': { role: 'liaison', id: (w) => w.certified.schemeId, contentType: 'text/csv' },
   'POST api/parcels/[id]/csv-preview': { role: 'liaison', id: (w) => w.certified.schemeId, contentType: 'text/csv', previewReportsIssues: true },
   'POST api/parcels/[id]/plan': { role: 'liaison', id: (w) => w.certified.schemeId, contentType: 'application/geo+json' },

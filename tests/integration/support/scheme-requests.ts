@@ -42,6 +42,15 @@ export const FLOWS_STEP = {
 
 export const STRUCTURE_STEP = { control: { type: 'weir', kind: 'broad-crested', crestLength: 10, sillHeight: 1.2, crestBreadth: 4, noseShape: 'round-nosed', approachVelocity: true } } as const;
 
+/** The demo reservoir behind the crest (32.4 m): invented storage, and an invented inflow for the first event only. */
+export const RESERVOIR_STEP = {
+  reservoir: {
+    storage: { kind: 'level-area', rows: [{ level: 32.4, area: 60000 }, { level: 33.4, area: 85000 }, { level: 34.4, area: 120000 }, { level: 35.4, area: 160000 }] },
+    length: 400,
+  },
+  hydrographs: [{ kind: 'table', points: [{ time: 0, discharge: 3 }, { time: 2, discharge: 9 }, { time: 4, discharge: 14 }, { time: 8, discharge: 9 }, { time: 12, discharge: 5 }, { time: 18, discharge: 3 }] }, null],
+} as const;
+
 export const LIMITS_STEP = {
   bankHeight: 3.2,
   impactThreshold: 0.01,

@@ -22,7 +22,7 @@ type Props = { schemeId: string; revisionId: string; units: CaseUnits; sections:
 
 const EMPTY_LIMIT = { label: '', distanceUpstream: undefined as unknown as number, maxLevel: undefined as unknown as number, freeboard: 0 };
 
-/** Step 5: what counts as inundation and as an impact, the flood-level limits, and the optional sizing and sensitivity runs. */
+/** Step 6: what counts as inundation and as an impact, the flood-level limits, and the optional sizing and sensitivity runs. */
 export function LimitsStepForm({ schemeId, revisionId, units, sections, defaults, backHref }: Props) {
   const u = units === 'US' ? 'ft' : 'm';
   const form = useForm<LimitsStepInput, unknown, LimitsStepValues>({

@@ -6,6 +6,7 @@ export const STEP_TITLES: Record<WizardStep, string> = {
   channel: 'Channel',
   flows: 'Design flows',
   structure: 'Structure',
+  reservoir: 'Reservoir and inflow',
   limits: 'Thresholds and limits',
   results: 'Results',
 };
@@ -14,7 +15,7 @@ export function stepHref(schemeId: string, step: WizardStep): string {
   return step === 'results' ? `/schemes/${schemeId}/results` : `/schemes/${schemeId}/wizard/${step}`;
 }
 
-/** The six steps, each a link; done steps carry a tick and the word "saved", the current one is marked for screen readers. */
+/** The steps, each a link; done steps carry a tick and the word "saved", the current one is marked for screen readers. */
 export function WizardProgress({ schemeId, current, completed }: { schemeId: string | null; current: WizardStep; completed: EditableStep[] }) {
   const steps = Object.keys(STEP_TITLES) as WizardStep[];
   return (

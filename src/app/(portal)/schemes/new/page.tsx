@@ -11,7 +11,7 @@ export default async function NewSchemePage() {
   await requirePageRole(['designer'], '/schemes/new');
   return (
     <>
-      <PageHeader eyebrow="New scheme · step 1 of 6" title="The scheme">
+      <PageHeader eyebrow="New scheme · step 1 of 7" title="The scheme">
         Name the scheme and its site, and choose the units every number will be entered in. The scheme and its first draft revision are made when you continue.
       </PageHeader>
       <WizardProgress schemeId={null} current="scheme" completed={[]} />

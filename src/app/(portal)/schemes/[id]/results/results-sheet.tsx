@@ -3,12 +3,14 @@ import Link from 'next/link';
 import { engineTextInWords } from '@/lib/case-words/case-issue-words';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import { longSectionData, sectionOutline } from '@/lib/revisions/results-sheet';
+import { eventRouting } from '@/lib/routing-sheet/event-routing';
 import { stepTableColumns } from '@/lib/revisions/step-table-csv';
 import type { CaseInput } from '@/lib/validation/case-schema';
 import type { Governing } from '@/lib/validation/scheme-schemas';
 import { CrestSizingPanel } from './crest-sizing-panel';
 import { EventFacts } from './event-facts';
 import { ProfileViews } from './profile-views';
+import { RoutingSection } from './routing-section';
 import { SensitivityTable } from './sensitivity-table';
 import { StepTable } from './step-table';
 import { VerdictSummary } from './verdict-summary';
@@ -37,6 +39,7 @@ function Section({ id, title, children }: { id: string; title: string; children:
 /** The results in the order a checker reads them: verdict, long-section, numbers, sizing, warnings, sensitivity, steps. */
 export function ResultsSheet({ scheme, revision, input, result, eventIndex, governing, datum, units, editable }: Props) {
   const event = result.events[eventIndex];
+  const routing = eventRouting(event);
   const u = units.length;
   const levelTitle = `Level (${u}${datum ? ` above ${datum}` : ''})`;
   const data = longSectionData(input, event);
@@ -61,6 +64,7 @@ export function ResultsSheet({ scheme, revision, input, result, eventIndex, gove
       <Section id="facts-heading" title={`Key numbers: ${event.name}`}>
         <EventFacts event={event} units={units} />
       </Section>
+      {routing ? <RoutingSection event={event} routing={routing} caseUnits={input.units} units={units} datum={datum} csvHref={`/api/schemes/${scheme.id}/routing-table?revision=${revision.number}&event=${eventIndex}`} /> : null}
       {result.sizing ? (
         <Section id="sizing-heading" title="Crest sizing">
           <CrestSizingPanel revisionId={revision.id} vary={result.sizing.vary} value={result.sizing.value} reason={result.sizing.reason} governing={result.sizing.governing ?? null} current={control ? (control[result.sizing.vary] ?? null) : null} lengthUnit={u} editable={editable} />

@@ -1,4 +1,5 @@
 import type { CaseResult } from '@/lib/hydraulics/case-result';
+import { ROUTED_SENSITIVITY_DEFAULTS } from '@/lib/hydraulics/design/sensitivity';
 
 const LABELS: Record<string, string> = {
   'manning-n-up': "Manning's n up",
@@ -6,14 +7,18 @@ const LABELS: Record<string, string> = {
   'discharge-up': 'Discharge up',
   'coefficient-up': 'Coefficient up',
   'coefficient-down': 'Coefficient down',
+  'storage-up': 'Reservoir storage up',
+  'storage-down': 'Reservoir storage down',
+  'volume-up': 'Flood volume up',
+  'volume-down': 'Flood volume down',
 };
 
 const signed = (x: number) => `${x >= 0 ? '+' : '−'}${Math.abs(x).toFixed(3)}`;
 
 /** How much the level at each limit and the extent of impact move when one input is changed. */
 export function SensitivityTable({ sensitivity, limits, lengthUnit: u }: { sensitivity: NonNullable<CaseResult['sensitivity']>; limits: string[]; lengthUnit: string }) {
-  const p = sensitivity.percentages;
-  const amount: Record<string, string> = { 'manning-n-up': `+${p.manningN} %`, 'manning-n-down': `−${p.manningN} %`, 'discharge-up': `+${p.discharge} %`, 'coefficient-up': `+${p.coefficient} %`, 'coefficient-down': `−${p.coefficient} %` };
+  const p = { ...ROUTED_SENSITIVITY_DEFAULTS, ...sensitivity.percentages };
+  const amount: Record<string, string> = { 'manning-n-up': `+${p.manningN} %`, 'manning-n-down': `−${p.manningN} %`, 'discharge-up': `+${p.discharge} %`, 'coefficient-up': `+${p.coefficient} %`, 'coefficient-down': `−${p.coefficient} %`, 'storage-up': `+${p.storage} %`, 'storage-down': `−${p.storage} %`, 'volume-up': `+${p.hydrographVolume} %`, 'volume-down': `−${p.hydrographVolume} %` };
   return (
     <div className="overflow-x-auto">
       <table className="w-full border-collapse text-sm">

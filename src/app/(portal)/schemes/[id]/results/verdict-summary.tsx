@@ -50,7 +50,7 @@ export function VerdictSummary({ result, lengthUnit, governingName }: { result: 
             <tbody>
               {e.limits.map((l) => (
                 <tr key={l.label} className="border-b border-paper-edge">
-                  <th scope="row" className="py-1 pr-3 text-left font-normal">{l.label}{l.source === 'beyond-profile' ? <span className="block text-xs text-ink-faint">beyond the backwater: level without the scheme</span> : null}</th>
+                  <th scope="row" className="py-1 pr-3 text-left font-normal">{l.label}{l.source === 'beyond-profile' ? <span className="block text-xs text-ink-faint">beyond the backwater: level without the scheme</span> : null}{l.source === 'reservoir' ? <span className="block text-xs text-ink-faint">within the reservoir: checked against the peak reservoir level</span> : null}</th>
                   <td className="num py-1 pr-3 text-right">{f(l.distanceUpstream, 1)}</td>
                   <td className="num py-1 pr-3 text-right">{f(l.maxLevel)}</td>
                   <td className="num py-1 pr-3 text-right">{f(l.freeboard)}</td>

@@ -30,7 +30,7 @@ export default async function WizardStepPage({ params }: { params: Promise<{ id:
   const number = EDITABLE_STEPS.indexOf(step) + 1;
   return (
     <>
-      <PageHeader eyebrow={`${scheme.reference} · revision ${revision.number} · step ${number} of 6`} title={`${STEP_TITLES[step]}: ${scheme.name}`}>
+      <PageHeader eyebrow={`${scheme.reference} · revision ${revision.number} · step ${number} of ${EDITABLE_STEPS.length + 1}`} title={`${STEP_TITLES[step]}: ${scheme.name}`}>
         <span className="flex flex-wrap items-center gap-2"><StatusLabel status={revision.status} /> {scheme.watercourse} at {scheme.site} · <Link className="text-accent underline" href={`/schemes/${scheme.id}`}>scheme page and history</Link></span>
       </PageHeader>
       <WizardProgress schemeId={scheme.id} current={step} completed={completedSteps(loaded.inputs)} />

@@ -4,13 +4,15 @@ import type { EditableStep } from '@/lib/validation/scheme-schemas';
 import { ChannelStep } from '@/components/forms/wizard/channel-step';
 import { FlowsStepForm } from '@/components/forms/wizard/flows-step-form';
 import { LimitsStepForm } from '@/components/forms/wizard/limits-step-form';
+import { ReservoirStepForm } from '@/components/forms/wizard/reservoir/reservoir-step-form';
 import { SchemeStepForm } from '@/components/forms/wizard/scheme-step-form';
 import { StructureStepForm } from '@/components/forms/wizard/structure-step-form';
 import { stepHref } from '@/components/forms/wizard/wizard-progress';
 import { CautionNote } from '@/components/ui/caution-note';
+import { reservoirDefaults } from './reservoir-defaults';
 import { schemeDefaults, structureDefaults, surveyedBanks } from './step-defaults';
 
-const PREVIOUS: Record<EditableStep, EditableStep | null> = { scheme: null, channel: 'scheme', flows: 'channel', structure: 'flows', limits: 'structure' };
+const PREVIOUS: Record<EditableStep, EditableStep | null> = { scheme: null, channel: 'scheme', flows: 'channel', structure: 'flows', reservoir: 'structure', limits: 'reservoir' };
 
 /** The form of one step, opened on the draft's saved values. */
 export function WizardStepBody({ step, loaded }: { step: EditableStep; loaded: LoadedWizard }) {
@@ -42,6 +44,17 @@ export function WizardStepBody({ step, loaded }: { step: EditableStep; loaded: L
           <StructureStepForm {...ids} units={inputs.units} defaults={defaults} backHref={backHref} />
         </>
       );
+    }
+    case 'reservoir': {
+      const r = reservoirDefaults(inputs);
+      if (r.unavailable) {
+        return (
+          <p role="note" className="border-l-4 border-verdict-caution bg-paper-deep px-4 py-3 text-sm">
+            {r.unavailable.reason} <Link className="text-accent underline" href={stepHref(scheme.id, r.unavailable.go.step)}>{r.unavailable.go.label} →</Link>
+          </p>
+        );
+      }
+      return <ReservoirStepForm {...ids} units={inputs.units} datum={inputs.wizard?.datum ?? null} events={r.events} crestLevel={r.crestLevel} defaults={r.defaults} backHref={backHref} />;
     }
     case 'limits':
       return (
