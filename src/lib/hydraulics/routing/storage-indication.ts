@@ -43,10 +43,15 @@ export function stateForIndication(model: ReservoirModel, indication: number, dt
     const limit = model.curve.highest !== null && model.curve.highest <= model.rating.highestLevel ? 'the top of the storage table' : 'the highest level the structure was rated to';
     throw new InvalidInputError(model.storageField, `runs out: the flood rises above ${limit} (${model.curve.levelAt(top).toFixed(3)} m above the datum); extend the storage table or check the spillway`);
   }
-  const lo = Math.max(hi - (dt * model.rating.dischargeAt(model.curve.levelAt(hi))) / 2, lowestVolume);
-  if (surplus(lo) > 0) {
+  const bracketLow = hi - (dt * model.rating.dischargeAt(model.curve.levelAt(hi))) / 2;
+  if (bracketLow < lowestVolume && surplus(lowestVolume) > 0) {
     throw new InvalidInputError(model.storageField, `does not reach low enough: the reservoir draws down below its lowest row (${(model.curve.lowest ?? 0).toFixed(3)} m above the datum); extend the table downwards`);
   }
-  const volume = hi === lo ? hi : brentRoot(surplus, lo, hi, { tolerance: 1e-13 * Math.max(Math.abs(hi), 1), field: model.storageField });
+  const lo = Math.max(bracketLow, lowestVolume);
+  // Where the outflow is almost nil across the bracket (a level just over the crest, or a drowned crest), surplus(lo) is
+  // O(lo) − O(hi) ≈ 0 and its sign is round-off: the root is then at either end to within that round-off.
+  if (surplus(lo) >= 0) return poolStateAtVolume(model, lo);
+  if (surplus(hi) <= 0) return poolStateAtVolume(model, hi);
+  const volume = brentRoot(surplus, lo, hi, { tolerance: 1e-13 * Math.max(Math.abs(hi), 1), field: model.storageField });
   return poolStateAtVolume(model, volume);
 }
