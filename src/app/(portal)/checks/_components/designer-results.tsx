@@ -3,10 +3,12 @@ import Link from 'next/link';
 import { engineTextInWords } from '@/lib/case-words/case-issue-words';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import { unitWords } from '@/lib/revisions/draft-inputs';
+import { eventRouting } from '@/lib/routing-sheet/event-routing';
 import { longSectionData, sectionOutline } from '@/lib/revisions/results-sheet';
 import { stepTableColumns } from '@/lib/revisions/step-table-csv';
 import type { CaseInput } from '@/lib/validation/case-schema';
 import { ProfileViews } from '../../schemes/[id]/results/profile-views';
+import { RoutingSection } from '../../schemes/[id]/results/routing-section';
 import { SensitivityTable } from '../../schemes/[id]/results/sensitivity-table';
 import { StepTable } from '../../schemes/[id]/results/step-table';
 
@@ -29,9 +31,10 @@ function Part({ id, title, children }: { id: string; title: string; children: Re
   );
 }
 
-/** The stored results as the designer saw them on the results sheet: long-section and cross-section, warnings, sensitivity and step table. */
+/** The stored results as the designer saw them on the results sheet: long-section and cross-section, the routing of a routed event, warnings, sensitivity and step table. */
 export function DesignerResults({ input, results, eventIndex, datum, href, stepTableCsvHref }: Props) {
   const event = results.events[eventIndex];
+  const routing = eventRouting(event);
   const u = unitWords(input.units).length;
   const caption = `${event.name}: stored water level with the scheme ${event.control.level.toFixed(3)} ${u} at the structure, falling back to the level without it by ${event.extent.distanceUpstream.toFixed(0)} ${u} upstream. ${event.limits.filter((l) => l.pass).length} of ${event.limits.length} limits met.`;
   return (
@@ -48,6 +51,7 @@ export function DesignerResults({ input, results, eventIndex, datum, href, stepT
       <Part id="h-stored-long-section" title={`Long-section and cross-section: ${event.name}`}>
         <ProfileViews data={longSectionData(input, event)} profile={event.profile} outline={sectionOutline(input)} lengthUnit={u} levelTitle={`Level (${u}${datum ? ` above ${datum}` : ' above datum'})`} caption={caption} />
       </Part>
+      {routing ? <RoutingSection event={event} routing={routing} caseUnits={input.units} units={unitWords(input.units)} datum={datum} csvHref={stepTableCsvHref.replace('/step-table?', '/routing-table?')} /> : null}
       <Part id="h-stored-warnings" title={`Warnings (${results.warnings.length})`}>
         {results.warnings.length === 0 ? <p className="text-sm text-ink-soft">None.</p> : <ul className="space-y-1 text-sm">{results.warnings.map((w) => <li key={w}><span aria-hidden="true" className="text-verdict-caution">⚠ </span>{engineTextInWords(w, input)}</li>)}</ul>}
       </Part>
