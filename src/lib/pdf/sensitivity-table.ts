@@ -1,5 +1,6 @@
 import type { CaseResult, LimitResult } from '@/lib/hydraulics/case-result';
 import { runWords } from '@/lib/hydraulics/design/robustness';
+import { ROUTED_SENSITIVITY_DEFAULTS } from '@/lib/hydraulics/design/sensitivity';
 import { fixed, lengthUnit, levelUnit, pdfText } from './certificate-text';
 import { FAIL, INK, type Doc, type Row, contentWidth, heading, paragraph, table } from './pdf-layout';
 
@@ -67,7 +68,9 @@ export function drawSensitivity(doc: Doc, results: CaseResult, datum: string | n
   }
   const limits = results.events.find((e) => e.name === s.event)?.limits ?? [];
   const runs = outcomes(s, limits);
-  const introduction = `Event ${s.event}, run again with Manning's n ${s.percentages.manningN} % higher and lower, the discharge ${s.percentages.discharge} % higher, and the weir coefficient ${s.percentages.coefficient} % higher and lower. The margin is the room left below the maximum level less its freeboard.`;
+  const routed = s.cases.some((c) => c.label.startsWith('storage-') || c.label.startsWith('volume-'));
+  const routedRuns = routed ? `, the reservoir's storage ${s.percentages.storage ?? ROUTED_SENSITIVITY_DEFAULTS.storage} % larger and smaller, and the flood's volume ${s.percentages.hydrographVolume ?? ROUTED_SENSITIVITY_DEFAULTS.hydrographVolume} % larger and smaller` : '';
+  const introduction = `Event ${s.event}, run again with Manning's n ${s.percentages.manningN} % higher and lower, the discharge ${s.percentages.discharge} % higher, and the weir coefficient ${s.percentages.coefficient} % higher and lower${routedRuns}. The margin is the room left below the maximum level less its freeboard.`;
   heading(doc, HEADING, doc.font('sans').fontSize(9).heightOfString(pdfText(introduction), { width: contentWidth(doc), lineGap: 1.5 }) + TABLE_START);
   paragraph(doc, introduction);
   table(

@@ -39,5 +39,6 @@ describe('the calculation sheet of the routed demo case', () => {
       expect(text).toContain(`Flood routed through the reservoir, ${e.name}`);
       expect(text).toContain(`Peak reservoir level ${e.routing!.peakLevel.level.toFixed(3)} m above Wendle Valley local datum`);
     }
+    expect(text).toContain("the reservoir's storage 20 % larger and smaller, and the flood's volume 20 % larger and smaller");
   });
 });
