@@ -11,6 +11,7 @@ import { completedSteps, unitWords } from '@/lib/revisions/draft-inputs';
 import { evaluateDraft } from '@/lib/revisions/evaluate-draft';
 import { frozenIntegrity } from '@/lib/revisions/frozen-integrity';
 import { featuredEventIndex } from '@/lib/revisions/results-sheet';
+import { listAvailableCheckers } from '@/lib/review/list-available-checkers';
 import { findSchemeRevision } from '@/lib/schemes/find-scheme-revision';
 import { isEditable } from '@/lib/schemes/scheme-access';
 import { WizardProgress } from '@/components/forms/wizard/wizard-progress';
@@ -20,6 +21,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { RevocationNotice } from '@/components/ui/revocation-notice';
 import { StatusLabel } from '@/components/ui/status-label';
 import { UnreadableAddress } from '@/components/ui/unreadable-address';
+import { SubmitForCheckForm } from '../../../revisions/[id]/submit-for-check-form';
 import { IncompleteNotice } from './incomplete-notice';
 import { ResultsSheet } from './results-sheet';
 
@@ -63,6 +65,9 @@ export default async function ResultsPage({ params, searchParams }: { params: Pr
           units={unitWords(evaluation.input.units)}
           editable={editable}
         />
+      ) : null}
+      {editable && evaluation.status === 'evaluated' ? (
+        <SubmitForCheckForm className="mt-10" revisionId={revision.id} checkers={await listAvailableCheckers(revision.authorId)} submittedHref={`/revisions/${revision.id}`} />
       ) : null}
     </>
   );
