@@ -42,11 +42,17 @@ export function SchemeStepForm({ defaults, unitsLocked, target }: { defaults: Pa
       <input id={`scheme-${name}`} className={inputClassName} {...describedBy(`scheme-${name}`, { hint, error: e(name) })} {...register(name)} />
     </WizardField>
   );
-  const number = (name: 'bedLevelAtControl' | 'reachLength', label: string, noun: string, hint: string) => (
-    <WizardField id={`scheme-${name}`} label={`${label} (${length})`} noun={noun} hint={hint} error={e(name)}>
-      <input id={`scheme-${name}`} className={`${inputClassName} num max-w-48`} {...numberInputProps} {...describedBy(`scheme-${name}`, { hint, error: e(name) })} {...register(name, { setValueAs: asNumber })} />
-    </WizardField>
-  );
+  // Blank is allowed (a surveyed reach supplies both), but never silently: once left, the field says what blank means.
+  const blankCaution = (name: 'bedLevelAtControl' | 'reachLength', noun: string) =>
+    (formState.touchedFields[name] || formState.isSubmitted) && watch(name) === undefined ? `${noun} is empty: a prismatic channel needs it (a surveyed reach takes it from the survey).` : undefined;
+  const number = (name: 'bedLevelAtControl' | 'reachLength', label: string, noun: string, hint: string) => {
+    const caution = blankCaution(name, noun);
+    return (
+      <WizardField id={`scheme-${name}`} label={`${label} (${length})`} noun={noun} hint={hint} caution={caution} error={e(name)}>
+        <input id={`scheme-${name}`} className={`${inputClassName} num max-w-48`} {...numberInputProps} {...describedBy(`scheme-${name}`, { hint, caution, error: e(name) })} {...register(name, { setValueAs: asNumber })} />
+      </WizardField>
+    );
+  };
 
   return (
     <form onSubmit={onSubmit} noValidate className="max-w-2xl">

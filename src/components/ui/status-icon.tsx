@@ -1,0 +1,32 @@
+import { ArrowRightLeft, Ban, Circle, CircleCheck, CircleDot, CircleX, Hourglass, Info, type LucideIcon, Mail, PencilLine, TriangleAlert, Undo2 } from 'lucide-react';
+
+// Every status mark comes from one icon set (Lucide, SVG), so none depends on a glyph the shipped fonts lack.
+// Each is decorative: the word beside it carries the meaning.
+const ICONS = {
+  pass: CircleCheck,
+  fail: CircleX,
+  caution: TriangleAlert,
+  note: Info,
+  draft: PencilLine,
+  returned: Undo2,
+  submitted: Hourglass,
+  countersigned: CircleCheck,
+  issued: CircleCheck,
+  superseded: ArrowRightLeft,
+  revoked: Ban,
+  active: CircleDot,
+  invited: Mail,
+  disabled: Circle,
+} satisfies Record<string, LucideIcon>;
+
+export type StatusIconName = keyof typeof ICONS;
+
+export function isStatusIconName(name: string): name is StatusIconName {
+  return Object.hasOwn(ICONS, name);
+}
+
+/** A status mark sized to the text around it; `name` outside the set draws a plain dot. */
+export function StatusIcon({ name, className = '' }: { name: string; className?: string }) {
+  const Icon = isStatusIconName(name) ? ICONS[name] : Circle;
+  return <Icon aria-hidden="true" focusable="false" className={`mt-[0.15em] inline-block h-[1em] w-[1em] shrink-0 ${className}`} strokeWidth={2.25} />;
+}
