@@ -27,3 +27,13 @@ export const CHART_COLOURS = {
 } as const;
 
 export const CHART_FONT = { size: 12 } as const;
+
+/**
+ * An axis title that stays whole on a short chart: a long one ("Level (m above Wendle Valley local datum)") is set on
+ * two lines, broken after "above", rather than running past the plot and being cut off.
+ */
+export function axisTitleLines(text: string, maxOneLine = 28): string | string[] {
+  if (text.length <= maxOneLine) return text;
+  const at = text.indexOf(' above ');
+  return at > 0 ? [text.slice(0, at + ' above'.length), text.slice(at + ' above '.length)] : text;
+}

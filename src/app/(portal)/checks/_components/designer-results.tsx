@@ -46,7 +46,7 @@ export function DesignerResults({ input, results, eventIndex, datum, href, stepT
         </nav>
       ) : null}
       <Part id="h-stored-long-section" title={`Long-section and cross-section: ${event.name}`}>
-        <ProfileViews data={longSectionData(input, event)} profile={event.profile} outline={sectionOutline(input)} lengthUnit={u} levelTitle={`Level (${u}${datum ? ` above ${datum}` : ' above datum'})`} caption={caption} />
+        <ProfileViews data={longSectionData(input, event)} profile={event.profile} outline={sectionOutline(input)} lengthUnit={u} levelTitle={`Level (${u} ${datum ? `above ${datum}` : 'above the datum'})`} levelWords={datum ? `above ${datum}` : 'above the datum'} caption={caption} />
       </Part>
       <Part id="h-stored-warnings" title={`Warnings (${results.warnings.length})`}>
         {results.warnings.length === 0 ? <p className="text-sm text-ink-soft">None.</p> : <ul className="space-y-1 text-sm">{results.warnings.map((w) => <li key={w}><span aria-hidden="true" className="text-verdict-caution">⚠ </span>{engineTextInWords(w, input)}</li>)}</ul>}

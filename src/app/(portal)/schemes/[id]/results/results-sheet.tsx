@@ -38,7 +38,8 @@ function Section({ id, title, children }: { id: string; title: string; children:
 export function ResultsSheet({ scheme, revision, input, result, eventIndex, governing, datum, units, editable }: Props) {
   const event = result.events[eventIndex];
   const u = units.length;
-  const levelTitle = `Level (${u}${datum ? ` above ${datum}` : ''})`;
+  const levelWords = datum ? `above ${datum}` : 'above the datum';
+  const levelTitle = `Level (${u} ${levelWords})`;
   const data = longSectionData(input, event);
   const base = `/schemes/${scheme.id}/results?revision=${revision.number}`;
   const caption = `${event.name}: water level with the scheme ${event.control.level.toFixed(3)} ${u} at the structure, falling back to the level without it by ${event.extent.distanceUpstream.toFixed(0)} ${u} upstream (extent of impact). ${event.limits.filter((l) => l.pass).length} of ${event.limits.length} limits met.`;
@@ -56,7 +57,7 @@ export function ResultsSheet({ scheme, revision, input, result, eventIndex, gove
         </nav>
       ) : null}
       <Section id="long-section-heading" title={`Long-section: ${event.name}`}>
-        <ProfileViews data={data} profile={event.profile} outline={sectionOutline(input)} lengthUnit={u} levelTitle={levelTitle} caption={caption} />
+        <ProfileViews data={data} profile={event.profile} outline={sectionOutline(input)} lengthUnit={u} levelTitle={levelTitle} levelWords={levelWords} caption={caption} />
       </Section>
       <Section id="facts-heading" title={`Key numbers: ${event.name}`}>
         <EventFacts event={event} units={units} />
