@@ -3,6 +3,7 @@
 import type { ChartData, ChartOptions } from 'chart.js';
 import { Scatter } from 'react-chartjs-2';
 import type { XY } from '@/lib/revisions/results-sheet';
+import { ChartNumbers } from './chart-numbers';
 import { CHART_COLOURS, CHART_FONT, axisTitleLines } from './register-charts';
 import { isWet, withWaterEdges } from './wetted-stations';
 
@@ -72,6 +73,11 @@ export function CrossSectionChart({ ground: surveyed, cover = null, waterLevel =
         <Scatter data={{ datasets }} options={options} role="img" aria-label={caption} />
       </div>
       <figcaption className="mt-2 text-xs text-ink-soft">{caption}</figcaption>
+      <ChartNumbers
+        caption={`The numbers in the cross-section (${yTitle})`}
+        columns={[{ label: `Station (${lengthUnit})`, numeric: true }, { label: `Ground (${lengthUnit})`, numeric: true }, { label: 'Note' }]}
+        rows={ground.map((p, i) => [p.x.toFixed(2), p.y.toFixed(3), stationed.added[i] ? 'water’s edge' : ''])}
+      />
     </figure>
   );
 }

@@ -10,6 +10,7 @@ import { indexQuery, numberFromOneQuery, readQuery } from '@/lib/http/query-para
 import { completedSteps, unitWords } from '@/lib/revisions/draft-inputs';
 import { evaluateDraft } from '@/lib/revisions/evaluate-draft';
 import { frozenIntegrity } from '@/lib/revisions/frozen-integrity';
+import { ratingForSheet } from '@/lib/revisions/rating-for-sheet';
 import { featuredEventIndex } from '@/lib/revisions/results-sheet';
 import { listAvailableCheckers } from '@/lib/review/list-available-checkers';
 import { findSchemeRevision } from '@/lib/schemes/find-scheme-revision';
@@ -63,6 +64,7 @@ export default async function ResultsPage({ params, searchParams }: { params: Pr
           governing={draft.wizard?.governing ?? 'all'}
           datum={draft.wizard?.datum ?? null}
           units={unitWords(evaluation.input.units)}
+          rating={await ratingForSheet(evaluation.input)}
           editable={editable}
         />
       ) : null}

@@ -3,9 +3,11 @@ import Link from 'next/link';
 import { engineTextInWords } from '@/lib/case-words/case-issue-words';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import { longSectionData, sectionOutline } from '@/lib/revisions/results-sheet';
+import type { SheetRating } from '@/lib/revisions/rating-for-sheet';
 import { stepTableColumns } from '@/lib/revisions/step-table-csv';
 import type { CaseInput } from '@/lib/validation/case-schema';
 import type { Governing } from '@/lib/validation/scheme-schemas';
+import { RatingChart } from '@/components/charts/rating-chart';
 import { CrestSizingPanel } from './crest-sizing-panel';
 import { EventFacts } from './event-facts';
 import { ProfileViews } from './profile-views';
@@ -22,6 +24,7 @@ type Props = {
   governing: Governing;
   datum: string | null;
   units: { length: string; discharge: string };
+  rating: SheetRating;
   editable: boolean;
 };
 
@@ -35,7 +38,7 @@ function Section({ id, title, children }: { id: string; title: string; children:
 }
 
 /** The results in the order a checker reads them: verdict, long-section, numbers, sizing, warnings, sensitivity, steps. */
-export function ResultsSheet({ scheme, revision, input, result, eventIndex, governing, datum, units, editable }: Props) {
+export function ResultsSheet({ scheme, revision, input, result, eventIndex, governing, datum, units, rating, editable }: Props) {
   const event = result.events[eventIndex];
   const u = units.length;
   const levelWords = datum ? `above ${datum}` : 'above the datum';
@@ -62,6 +65,11 @@ export function ResultsSheet({ scheme, revision, input, result, eventIndex, gove
       <Section id="facts-heading" title={`Key numbers: ${event.name}`}>
         <EventFacts event={event} units={units} />
       </Section>
+      {rating.status !== 'none' ? (
+        <Section id="rating-heading" title="Rating of the structure">
+          {rating.status === 'rated' ? <RatingChart rating={rating.rating} lengthUnit={u} dischargeUnit={units.discharge} levelWords={levelWords} /> : <p className="text-sm text-ink-soft">The rating could not be worked out: {rating.reason}</p>}
+        </Section>
+      ) : null}
       {result.sizing ? (
         <Section id="sizing-heading" title="Crest sizing">
           <CrestSizingPanel revisionId={revision.id} vary={result.sizing.vary} value={result.sizing.value} reason={result.sizing.reason} governing={result.sizing.governing ?? null} current={control ? (control[result.sizing.vary] ?? null) : null} lengthUnit={u} editable={editable} />
