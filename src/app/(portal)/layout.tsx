@@ -12,9 +12,9 @@ export default async function PortalLayout({ children }: { children: ReactNode }
     <>
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-white focus:p-2">Skip to content</a>
       <PortalHeader links={navigationFor(user.role)} userName={user.name} roleLabel={ROLE_LABELS[user.role]} />
-      <main id="main" className="mx-auto max-w-sheet px-6 py-8">{children}</main>
+      <main id="main" className="mx-auto max-w-sheet px-4 py-8 sm:px-6">{children}</main>
       <FocusMainHeading />
-      <footer className="mx-auto max-w-sheet px-6 pb-10 text-xs text-ink-faint">
+      <footer className="mx-auto max-w-sheet px-4 pb-10 text-xs text-ink-faint sm:px-6">
         Sillmark supports, and never replaces, a licensed engineer’s judgement and the local codes and regulations.
       </footer>
     </>

@@ -9,6 +9,10 @@ Chart.register(LineController, ScatterController, LineElement, PointElement, Lin
 if (typeof window !== 'undefined' && document.body) {
   Chart.defaults.font.family = getComputedStyle(document.body).fontFamily;
   Chart.defaults.color = '#4a5a60';
+  // A canvas keeps the screen's size when printed; redrawn to the page's width it fits A4 (Chart.js docs, "Printing").
+  const resizeAll = () => Object.values(Chart.instances).forEach((chart) => chart.resize());
+  window.addEventListener('beforeprint', resizeAll);
+  window.addEventListener('afterprint', resizeAll);
 }
 
 export const CHART_COLOURS = {

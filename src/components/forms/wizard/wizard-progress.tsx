@@ -18,7 +18,7 @@ export function stepHref(schemeId: string, step: WizardStep): string {
 export function WizardProgress({ schemeId, current, completed }: { schemeId: string | null; current: WizardStep; completed: EditableStep[] }) {
   const steps = Object.keys(STEP_TITLES) as WizardStep[];
   return (
-    <nav aria-label="Wizard steps" className="mb-8">
+    <nav aria-label="Wizard steps" className="mb-8 print:hidden">
       <ol className="flex flex-wrap gap-x-1 gap-y-2 text-sm">
         {steps.map((step, i) => {
           const done = step !== 'results' && completed.includes(step);
