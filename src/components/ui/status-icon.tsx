@@ -1,4 +1,4 @@
-import { ArrowRightLeft, Ban, Circle, CircleCheck, CircleDot, CircleX, Hourglass, Info, type LucideIcon, Mail, PencilLine, TriangleAlert, Undo2 } from 'lucide-react';
+import { ArrowRightLeft, Ban, Circle, CircleCheck, CircleDot, CirclePause, CircleX, Ellipsis, Hourglass, Info, type LucideIcon, Mail, MailCheck, OctagonAlert, PencilLine, Send, Triangle, TriangleAlert, Undo2 } from 'lucide-react';
 
 // Every status mark comes from one icon set (Lucide, SVG), so none depends on a glyph the shipped fonts lack.
 // Each is decorative: the word beside it carries the meaning.
@@ -17,6 +17,18 @@ const ICONS = {
   active: CircleDot,
   invited: Mail,
   disabled: Circle,
+  // A parcel's impact category
+  affected: OctagonAlert,
+  'below-threshold': Triangle,
+  'not-affected': Circle,
+  'outside-reach': Ellipsis,
+  // A letter's status
+  queued: Hourglass,
+  sending: Send,
+  sent: CircleCheck,
+  failed: CircleX,
+  acknowledged: MailCheck,
+  held: CirclePause,
 } satisfies Record<string, LucideIcon>;
 
 export type StatusIconName = keyof typeof ICONS;
@@ -28,5 +40,5 @@ export function isStatusIconName(name: string): name is StatusIconName {
 /** A status mark sized to the text around it; `name` outside the set draws a plain dot. */
 export function StatusIcon({ name, className = '' }: { name: string; className?: string }) {
   const Icon = isStatusIconName(name) ? ICONS[name] : Circle;
-  return <Icon aria-hidden="true" focusable="false" className={`mt-[0.15em] inline-block h-[1em] w-[1em] shrink-0 ${className}`} strokeWidth={2.25} />;
+  return <Icon aria-hidden="true" focusable="false" className={`inline-block h-[1em] w-[1em] shrink-0 align-[-0.125em] ${className}`} strokeWidth={2.25} />;
 }

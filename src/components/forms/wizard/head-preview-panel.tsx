@@ -5,6 +5,7 @@ import { coefficientWords } from '@/lib/hydraulics/weirs/coefficient-words';
 import type { HeadPreview } from '@/lib/revisions/preview-head';
 import { listInWords } from './preview-needs';
 import { useDebounced } from './use-debounced';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 export const HEAD_PREVIEW_DELAY_MS = 400;
 
@@ -41,7 +42,7 @@ export function HeadPreviewPanel({ revisionId, structureJson, waitingFor, length
         {!waiting && isValidating && !data ? <p>Working it out…</p> : null}
         {error ? (
           <div role="status" className="text-verdict-caution">
-            <p><span aria-hidden="true">⚠ </span>Not worked out yet: {error.message}</p>
+            <p><StatusIcon name="caution" className="mr-1" />Not worked out yet: {error.message}</p>
             <ul className="ml-5 list-disc">{error.issues.map((i) => <li key={`${i.path}${i.message}`}>{i.message}</li>)}</ul>
           </div>
         ) : null}
@@ -59,11 +60,11 @@ export function HeadPreviewPanel({ revisionId, structureJson, waitingFor, length
                     <dt className="text-ink-soft">Coefficient</dt>
                     <dd><span className="num">{coefficientWords(e.weir.coefficient, e.weir.coefficientForm)}</span> — {e.weir.coefficientIsDefault ? 'published default' : 'your own value'}<span className="block text-xs text-ink-faint">{e.weir.coefficientSource}</span></dd>
                     <dt className="text-ink-soft">Validity range</dt>
-                    <dd className="text-xs">{e.weir.validity.map((c) => <span key={c.name} className="block">{c.ok ? '✔' : '⚠'} {c.name} <span className="num">{c.value.toPrecision(3)}</span>{c.min !== undefined ? `, from ${c.min}` : ''}{c.max !== undefined ? ` to ${c.max}` : ''}{c.ok ? '' : ' — outside the range'}</span>)}</dd>
+                    <dd className="text-xs">{e.weir.validity.map((c) => <span key={c.name} className="block"><StatusIcon name={c.ok ? 'pass' : 'caution'} className="mr-1" />{c.name} <span className="num">{c.value.toPrecision(3)}</span>{c.min !== undefined ? `, from ${c.min}` : ''}{c.max !== undefined ? ` to ${c.max}` : ''}{c.ok ? '' : ' — outside the range'}</span>)}</dd>
                   </>
                 ) : null}
-                {e.weir?.submergence && e.weir.submergence.tailwaterHead > 0 && !e.weir.submergence.modular ? <dd className="col-span-2 text-xs text-verdict-caution">⚠ Submerged by the water downstream: ratio <span className="num">{e.weir.submergence.ratio.toFixed(3)}</span>, discharge reduced by the factor <span className="num">{e.weir.submergence.factor.toFixed(3)}</span> ({e.weir.submergence.relation}).{e.weir.submergence.extrapolated ? ' Past the data of the relation: see the warnings.' : ''}</dd> : null}
-                {!e.causesBackwater && e.explanation ? <dd className="col-span-2 text-xs text-verdict-caution">⚠ {e.explanation}</dd> : null}
+                {e.weir?.submergence && e.weir.submergence.tailwaterHead > 0 && !e.weir.submergence.modular ? <dd className="col-span-2 text-xs text-verdict-caution"><StatusIcon name="caution" className="mr-1" />Submerged by the water downstream: ratio <span className="num">{e.weir.submergence.ratio.toFixed(3)}</span>, discharge reduced by the factor <span className="num">{e.weir.submergence.factor.toFixed(3)}</span> ({e.weir.submergence.relation}).{e.weir.submergence.extrapolated ? ' Past the data of the relation: see the warnings.' : ''}</dd> : null}
+                {!e.causesBackwater && e.explanation ? <dd className="col-span-2 text-xs text-verdict-caution"><StatusIcon name="caution" className="mr-1" />{e.explanation}</dd> : null}
               </dl>
             ))}
           </div>

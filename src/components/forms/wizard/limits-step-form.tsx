@@ -11,6 +11,7 @@ import { WizardField, describedBy } from '../wizard-field';
 import { LimitsOptions } from './limits-options';
 import { StepActions } from './step-actions';
 import { useStepSave } from './use-step-save';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 export interface SurveyedSectionBank {
   distanceUpstream: number;
@@ -69,7 +70,7 @@ export function LimitsStepForm({ schemeId, revisionId, units, sections, defaults
                 <td className="py-1">
                   <label className="sr-only" htmlFor={`bank-${i}`}>Bank-top level at {s.distanceUpstream} {u}</label>
                   <input id={`bank-${i}`} className={`${inputClassName} num max-w-40`} {...numberInputProps} {...register(`sectionBankLevels.${i}`, { setValueAs: (v) => asNumber(v) ?? null })} />
-                  {e(`sectionBankLevels.${i}`) ? <p role="alert" className="text-sm text-verdict-fail">✖ The bank-top level {e(`sectionBankLevels.${i}`)}</p> : null}
+                  {e(`sectionBankLevels.${i}`) ? <p role="alert" className="text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />The bank-top level {e(`sectionBankLevels.${i}`)}</p> : null}
                 </td>
               </tr>
             ))}

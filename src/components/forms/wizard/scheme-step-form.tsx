@@ -11,6 +11,7 @@ import { asNumber, errorAt, numberInputProps } from '../form-values';
 import { WizardField, describedBy } from '../wizard-field';
 import { StepActions } from './step-actions';
 import { type SaveFailure, useStepSave } from './use-step-save';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 type CreateAction = (values: unknown) => Promise<ActionResult<{ schemeId: string }>>;
 
@@ -77,7 +78,7 @@ export function SchemeStepForm({ defaults, unitsLocked, target }: { defaults: Pa
             <label className="flex items-center gap-2"><input type="radio" value="US" {...register('units')} /> US customary: feet and ft³/s</label>
           </div>
         )}
-        {e('units') ? <p role="alert" className="mt-1 text-sm text-verdict-fail"><span aria-hidden="true">✖ </span>Units {e('units')}</p> : null}
+        {e('units') ? <p role="alert" className="mt-1 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />Units {e('units')}</p> : null}
       </fieldset>
       <div className="grid gap-x-6 sm:grid-cols-2">
         {number('bedLevelAtControl', 'Bed level at the structure', 'The bed level at the structure', 'Above the datum. For a prismatic channel; a surveyed reach takes it from the survey.')}

@@ -1,5 +1,6 @@
 import Link from 'next/link';
 import type { EditableStep, WizardStep } from '@/lib/validation/scheme-schemas';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 export const STEP_TITLES: Record<WizardStep, string> = {
   scheme: 'Scheme',
@@ -27,7 +28,7 @@ export function WizardProgress({ schemeId, current, completed }: { schemeId: str
           const content = (
             <>
               <span className="num">{i + 1}</span> {STEP_TITLES[step]}
-              {done && !here ? <span aria-hidden="true"> ✔</span> : null}
+              {done && !here ? <StatusIcon name="pass" className="ml-1" /> : null}
               {done ? <span className="sr-only"> (saved)</span> : null}
             </>
           );

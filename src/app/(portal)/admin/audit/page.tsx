@@ -10,6 +10,7 @@ import { AuditChainStatus } from './audit-chain-status';
 import { AuditEventList } from './audit-event-list';
 import { AuditFilterForm } from './audit-filter-form';
 import { trailCsvHref, trailHref } from './audit-links';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 export const metadata: Metadata = { title: 'Audit trail' };
 
@@ -23,7 +24,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
       <AuditChainStatus check={view.chain} alarm={view.chainAlarm} />
       <AuditFilterForm values={raw} issues={view.issues} choices={view} />
       {view.issues.length ? (
-        <p role="alert" className="mb-4 text-sm text-verdict-fail"><span aria-hidden="true">✖ </span>The filters above need attention, so no events are shown.</p>
+        <p role="alert" className="mb-4 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />The filters above need attention, so no events are shown.</p>
       ) : view.entries.length === 0 ? (
         <EmptyState title="No event matches these filters." />
       ) : (

@@ -3,6 +3,7 @@
 import { useState, useTransition } from 'react';
 import { ROLES, ROLE_LABELS, type Role } from '@/lib/auth/roles';
 import { changeRoleAction } from './actions';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 export function RoleSelect({ userId, role, userName }: { userId: string; role: Role; userName: string }) {
   const [pending, startTransition] = useTransition();
@@ -22,7 +23,7 @@ export function RoleSelect({ userId, role, userName }: { userId: string; role: R
       >
         {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABELS[r as Role]}</option>)}
       </select>
-      {error ? <span role="alert" className="ml-2 text-verdict-fail">✖ {error}</span> : null}
+      {error ? <span role="alert" className="ml-2 text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{error}</span> : null}
     </span>
   );
 }

@@ -9,6 +9,7 @@ import type { CaseInput } from '@/lib/validation/case-schema';
 import { ProfileViews } from '../../schemes/[id]/results/profile-views';
 import { SensitivityTable } from '../../schemes/[id]/results/sensitivity-table';
 import { StepTable } from '../../schemes/[id]/results/step-table';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 type Props = {
   input: CaseInput;
@@ -40,7 +41,7 @@ export function DesignerResults({ input, results, eventIndex, datum, href, stepT
         <nav aria-label="Events of the stored results" className="mb-4 flex flex-wrap gap-2 text-sm">
           {results.events.map((e, i) => (
             <Link key={e.name} href={`${href}?event=${i}`} scroll={false} aria-current={i === eventIndex ? 'page' : undefined} className={`rounded border px-3 py-1 ${i === eventIndex ? 'border-accent bg-accent-wash font-semibold' : 'border-paper-edge'}`}>
-              {e.name} {e.verdict === 'pass' ? '✔' : '✖'}<span className="sr-only"> {e.verdict}</span>
+              {e.name} <StatusIcon name={e.verdict === 'pass' ? 'pass' : 'fail'} className="ml-1" /><span className="sr-only"> {e.verdict}</span>
             </Link>
           ))}
         </nav>
@@ -49,7 +50,7 @@ export function DesignerResults({ input, results, eventIndex, datum, href, stepT
         <ProfileViews data={longSectionData(input, event)} profile={event.profile} outline={sectionOutline(input)} lengthUnit={u} levelTitle={`Level (${u} ${datum ? `above ${datum}` : 'above the datum'})`} levelWords={datum ? `above ${datum}` : 'above the datum'} caption={caption} />
       </Part>
       <Part id="h-stored-warnings" title={`Warnings (${results.warnings.length})`}>
-        {results.warnings.length === 0 ? <p className="text-sm text-ink-soft">None.</p> : <ul className="space-y-1 text-sm">{results.warnings.map((w) => <li key={w}><span aria-hidden="true" className="text-verdict-caution">⚠ </span>{engineTextInWords(w, input)}</li>)}</ul>}
+        {results.warnings.length === 0 ? <p className="text-sm text-ink-soft">None.</p> : <ul className="space-y-1 text-sm">{results.warnings.map((w) => <li key={w}><StatusIcon name="caution" className="mr-1 text-verdict-caution" />{engineTextInWords(w, input)}</li>)}</ul>}
       </Part>
       <Part id="h-stored-sensitivity" title="Sensitivity">
         {results.sensitivity ? <SensitivityTable sensitivity={results.sensitivity} limits={input.limits.map((l) => l.label)} lengthUnit={u} /> : <p className="text-sm text-ink-soft">The designer did not ask for sensitivity runs.</p>}

@@ -1,9 +1,10 @@
 import { CautionNote } from '@/components/ui/caution-note';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import { quantity, unitsOf } from './quantities';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 function Verdict({ pass }: { pass: boolean }) {
-  return pass ? <span className="text-verdict-pass"><span aria-hidden="true">✔ </span>pass</span> : <span className="font-semibold text-verdict-fail"><span aria-hidden="true">✖ </span>fail</span>;
+  return pass ? <span className="text-verdict-pass"><StatusIcon name="pass" className="mr-1" />pass</span> : <span className="font-semibold text-verdict-fail"><StatusIcon name="fail" className="mr-1" />fail</span>;
 }
 
 /** The governing results of a revision: verdict, each event's control and extents, and each flood-level limit. */
@@ -73,7 +74,7 @@ export function ResultsSummary({ results, caption = 'Results' }: { results: Case
                     <td className="num whitespace-nowrap py-2 pr-3 text-right">{quantity(l.maxLevel, u.length)}</td>
                     <td className="num whitespace-nowrap py-2 pr-3 text-right">{quantity(l.waterLevel, u.length)}</td>
                     <td className="num whitespace-nowrap py-2 pr-3 text-right">{quantity(l.margin, u.length)}</td>
-                    <td className="py-2">{l.pass ? <span className="text-verdict-pass"><span aria-hidden="true">✔ </span>met</span> : <span className="font-semibold text-verdict-fail"><span aria-hidden="true">✖ </span>not met</span>}</td>
+                    <td className="py-2">{l.pass ? <span className="text-verdict-pass"><StatusIcon name="pass" className="mr-1" />met</span> : <span className="font-semibold text-verdict-fail"><StatusIcon name="fail" className="mr-1" />not met</span>}</td>
                   </tr>
                 )),
               )}

@@ -15,6 +15,7 @@ import { ReviewThread } from '../../checks/_components/review-thread';
 import { SchemeHistory } from '../../checks/_components/scheme-history';
 import { StartDraftButton } from '../../schemes/[id]/start-draft-button';
 import { SubmitForCheckForm } from './submit-for-check-form';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 export const metadata: Metadata = { title: 'Revision' };
 
@@ -75,7 +76,7 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
           ) : null}
           {revision.status === 'returned' && isDesigner ? (
             <p role="note" className="mt-3 border-l-4 border-verdict-caution bg-paper-deep px-3 py-2">
-              <span aria-hidden="true">↩ </span>The checker returned this revision. It stays frozen as it was submitted: revise the scheme in a new draft started from it, which shows the checker’s comments beside the fields they concern.
+              <StatusIcon name="returned" className="mr-1" />The checker returned this revision. It stays frozen as it was submitted: revise the scheme in a new draft started from it, which shows the checker’s comments beside the fields they concern.
               <span className="mt-2 block">
                 {openDraft ? (
                   <Link className="text-accent underline" href={`/schemes/${scheme.id}/wizard/scheme`}>Continue draft revision {openDraft.number}</Link>

@@ -8,6 +8,7 @@ import type { z } from 'zod';
 import { submitForCheckSchema } from '@/lib/validation/check-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { submitForCheckAction } from './actions';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 type FormInput = z.input<typeof submitForCheckSchema>;
 type Checker = { id: string; name: string; organisation: string | null };
@@ -33,7 +34,7 @@ export function SubmitForCheckForm({ revisionId, checkers, submittedHref, classN
       <p className="mb-3 text-sm text-ink-soft">Submitting freezes this revision: the engine evaluates it once more and its inputs, results and their SHA-256 hashes are kept unchanged from then on. The checker is told by e-mail.</p>
       {failure ? (
         <div role="alert" className="mb-3 border-l-4 border-verdict-fail bg-paper-deep px-3 py-2 text-sm">
-          <p><span aria-hidden="true">✖ </span>{failure.message}</p>
+          <p><StatusIcon name="fail" className="mr-1" />{failure.message}</p>
           {failure.fields.length ? <ul className="num mt-1 list-disc pl-5 text-xs">{failure.fields.map((f) => <li key={f}>{f}</li>)}</ul> : null}
         </div>
       ) : null}

@@ -14,6 +14,7 @@ import { StripLegend } from '../../_components/parcel-strip-svg';
 import { orNotFound, requireLiaisonPage } from '../../_components/scheme-page-access';
 import { ImpactTable } from './impact-table';
 import { ReachImpactChart } from './reach-impact-chart';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 export const metadata: Metadata = { title: 'Impact on parcels' };
 
@@ -40,7 +41,7 @@ export default async function ImpactPage({ params, searchParams }: { params: Pro
         <button type="submit" className={buttonClassName}>Show</button>
       </form>
       {table.revision.preliminary ? (
-        <p role="note" className="mb-6 border-l-4 border-verdict-caution bg-paper-deep px-4 py-3 text-sm"><span aria-hidden="true">⚠ </span><strong>Preliminary.</strong> Revision {table.revision.number} is {table.revision.status}, not countersigned: these figures may change, and letters made from it are watermarked PRELIMINARY.</p>
+        <p role="note" className="mb-6 border-l-4 border-verdict-caution bg-paper-deep px-4 py-3 text-sm"><StatusIcon name="caution" className="mr-1" /><strong>Preliminary.</strong> Revision {table.revision.number} is {table.revision.status}, not countersigned: these figures may change, and letters made from it are watermarked PRELIMINARY.</p>
       ) : null}
       <p className="mb-4 text-sm text-ink-soft">
         Computed from revision <span className="num">{table.revision.number}</span>’s {table.revision.resultsStored ? 'stored' : 'freshly evaluated'} with- and without-scheme profiles (engine <span className="num">{table.revision.engineVersion}</span>), parcels register version <span className="num">{table.register?.version ?? '—'}</span>.

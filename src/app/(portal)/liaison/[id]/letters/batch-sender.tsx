@@ -6,6 +6,7 @@ import useSWR from 'swr';
 import type { BatchProgress } from '@/lib/letters/batch-progress';
 import { buttonClassName } from '@/components/ui/form-field';
 import { LetterStatusLabel } from '../../_components/letter-status-label';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 const LETTERS_PER_REQUEST = 3;
 
@@ -49,7 +50,7 @@ export function BatchSender({ batchId, manage, initiallyOpen }: { batchId: strin
     }
   };
 
-  if (error) return <p role="alert" className="text-sm text-verdict-fail">✖ {error.message}</p>;
+  if (error) return <p role="alert" className="text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{error.message}</p>;
   if (!data) return <p className="text-sm text-ink-soft">Reading the batch…</p>;
   const done = data.counts.sent + data.counts.acknowledged + data.counts.failed + data.counts.held;
   const retryable = data.letters.some((l) => l.status === 'failed' && l.recipientEmail);
@@ -72,7 +73,7 @@ export function BatchSender({ batchId, manage, initiallyOpen }: { batchId: strin
           <span className="num">{data.counts.sent + data.counts.acknowledged}</span> of <span className="num">{data.total}</span> sent, <span className="num">{data.counts.failed}</span> failed, <span className="num">{data.counts.queued + data.counts.sending}</span> waiting.
           {data.counts.held > 0 ? <> <span className="num">{data.counts.held}</span> held and not sent: the certificate of revision <span className="num">{data.revisionNumber}</span> was revoked.</> : null}
         </p>
-        {problem ? <p role="alert" className="mt-1 text-sm text-verdict-fail">✖ {problem}</p> : null}
+        {problem ? <p role="alert" className="mt-1 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{problem}</p> : null}
       </div>
       <details open={initiallyOpen} className="mt-3">
         <summary className="cursor-pointer text-sm text-accent">The letters of this batch</summary>

@@ -7,6 +7,7 @@ import { useForm } from 'react-hook-form';
 import { type LetterParagraphs, type SaveLetterTemplateInput, saveLetterTemplateSchema } from '@/lib/validation/letter-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { saveLetterTemplateAction } from './actions';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 const FIELDS: { name: keyof LetterParagraphs; label: string; hint: string; rows: number }[] = [
   { name: 'introduction', label: 'Who we are and why we write', hint: 'Opens the letter, after “Dear …”.', rows: 4 },
@@ -34,7 +35,7 @@ export function TemplateForm({ schemeId, paragraphs, version, readOnly }: { sche
   return (
     <form onSubmit={onSubmit} noValidate>
       <h2 className="mb-3 text-lg font-semibold">Letter paragraphs{version ? <span className="num ml-2 text-sm font-normal text-ink-soft">version {version}</span> : null}</h2>
-      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-3 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}>{message.ok ? '✔ ' : '✖ '}{message.text}</p> : null}
+      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-3 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}><StatusIcon name={message.ok ? 'pass' : 'fail'} className="mr-1" />{message.text}</p> : null}
       {FIELDS.map((f) => (
         <FormField key={f.name} id={`template-${f.name}`} label={f.label} hint={f.hint} error={formState.errors[f.name]?.message}>
           <textarea id={`template-${f.name}`} rows={f.rows} readOnly={readOnly} aria-describedby={`template-${f.name}-hint${formState.errors[f.name] ? ` template-${f.name}-error` : ''}`} aria-invalid={formState.errors[f.name] ? true : undefined} className={inputClassName} {...register(f.name)} />

@@ -14,6 +14,7 @@ import { ProfileViews } from './profile-views';
 import { SensitivityTable } from './sensitivity-table';
 import { StepTable } from './step-table';
 import { VerdictSummary } from './verdict-summary';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 type Props = {
   scheme: { id: string; reference: string };
@@ -54,7 +55,7 @@ export function ResultsSheet({ scheme, revision, input, result, eventIndex, gove
         <nav aria-label="Events" className="mb-4 flex flex-wrap gap-2 text-sm">
           {result.events.map((e, i) => (
             <Link key={e.name} href={`${base}&event=${i}`} aria-current={i === eventIndex ? 'page' : undefined} className={`rounded border px-3 py-1 ${i === eventIndex ? 'border-accent bg-accent-wash font-semibold' : 'border-paper-edge'}`}>
-              {e.name} {e.verdict === 'pass' ? '✔' : '✖'}<span className="sr-only"> {e.verdict}</span>
+              {e.name} <StatusIcon name={e.verdict === 'pass' ? 'pass' : 'fail'} className="ml-1" /><span className="sr-only"> {e.verdict}</span>
             </Link>
           ))}
         </nav>
@@ -76,7 +77,7 @@ export function ResultsSheet({ scheme, revision, input, result, eventIndex, gove
         </Section>
       ) : null}
       <Section id="warnings-heading" title={`Warnings (${result.warnings.length})`}>
-        {result.warnings.length === 0 ? <p className="text-sm text-ink-soft">None.</p> : <ul className="space-y-1 text-sm">{result.warnings.map((w) => <li key={w}><span aria-hidden="true" className="text-verdict-caution">⚠ </span>{engineTextInWords(w, input)}</li>)}</ul>}
+        {result.warnings.length === 0 ? <p className="text-sm text-ink-soft">None.</p> : <ul className="space-y-1 text-sm">{result.warnings.map((w) => <li key={w}><StatusIcon name="caution" className="mr-1 text-verdict-caution" />{engineTextInWords(w, input)}</li>)}</ul>}
       </Section>
       {result.sensitivity ? (
         <Section id="sensitivity-heading" title="Sensitivity">

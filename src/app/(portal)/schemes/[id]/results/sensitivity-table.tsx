@@ -1,4 +1,5 @@
 import type { CaseResult } from '@/lib/hydraulics/case-result';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 const LABELS: Record<string, string> = {
   'manning-n-up': "Manning's n up",
@@ -29,7 +30,7 @@ export function SensitivityTable({ sensitivity, limits, lengthUnit: u }: { sensi
           {sensitivity.cases.map((c) => (
             <tr key={c.label} className="border-b border-paper-edge">
               <th scope="row" className="py-1 pr-3 text-left font-normal">{LABELS[c.label] ?? c.label} <span className="num">{amount[c.label]}</span></th>
-              {c.levelChanges ? c.levelChanges.map((d, i) => <td key={i} className="num py-1 pr-3 text-right">{signed(d)}</td>) : <td colSpan={limits.length} className="py-1 pr-3 text-verdict-caution">⚠ not computed: {c.error}</td>}
+              {c.levelChanges ? c.levelChanges.map((d, i) => <td key={i} className="num py-1 pr-3 text-right">{signed(d)}</td>) : <td colSpan={limits.length} className="py-1 pr-3 text-verdict-caution"><StatusIcon name="caution" className="mr-1" />not computed: {c.error}</td>}
               <td className="num py-1 text-right">{c.extentChange === null ? '—' : signed(c.extentChange)}</td>
             </tr>
           ))}

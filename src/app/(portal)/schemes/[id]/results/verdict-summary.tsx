@@ -1,12 +1,13 @@
 import type { ReactNode } from 'react';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 const f = (x: number, d = 3) => x.toFixed(d);
 
 export function VerdictWord({ pass, children }: { pass: boolean; children?: ReactNode }) {
   return (
     <span className={`inline-flex items-center gap-1 font-semibold ${pass ? 'text-verdict-pass' : 'text-verdict-fail'}`}>
-      <span aria-hidden="true">{pass ? '✔' : '✖'}</span>
+      <StatusIcon name={pass ? 'pass' : 'fail'} />
       {children ?? (pass ? 'Pass' : 'Fail')}
     </span>
   );
@@ -24,7 +25,7 @@ export function VerdictSummary({ result, lengthUnit, governingName }: { result: 
       </h2>
       {result.robustness?.status === 'not-robust' ? (
         <p className="mt-2 text-sm font-semibold text-verdict-caution" data-testid="robustness">
-          <span aria-hidden="true">⚠ </span>Passes, but not robustly: {result.robustness.reasons.join('; ')}.
+          <StatusIcon name="caution" className="mr-1" />Passes, but not robustly: {result.robustness.reasons.join('; ')}.
         </p>
       ) : result.robustness?.status === 'robust' && !noLimits ? (
         <p className="mt-2 text-sm" data-testid="robustness">Robust: the least margin is at least the minimum margin of <span className="num">{f(result.robustness.minimumMargin)} {u}</span>{result.sensitivity ? ', and every sensitivity run passes' : ' (no sensitivity runs were asked for)'}.</p>

@@ -7,6 +7,7 @@ import { useForm } from 'react-hook-form';
 import { type LogResponseInput, logResponseSchema } from '@/lib/validation/letter-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { logLetterResponseAction } from './actions';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 export function ResponseForm({ letterId }: { letterId: string }) {
   const router = useRouter();
@@ -27,7 +28,7 @@ export function ResponseForm({ letterId }: { letterId: string }) {
   return (
     <form onSubmit={onSubmit} noValidate className="mt-6">
       <h3 className="mb-2 font-semibold">Log a response</h3>
-      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-3 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}>{message.ok ? '✔ ' : '✖ '}{message.text}</p> : null}
+      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-3 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}><StatusIcon name={message.ok ? 'pass' : 'fail'} className="mr-1" />{message.text}</p> : null}
       <FormField id="response-received" label="Received on" error={formState.errors.receivedOn?.message}>
         <input id="response-received" type="date" className={inputClassName} aria-invalid={formState.errors.receivedOn ? true : undefined} {...register('receivedOn')} />
       </FormField>
