@@ -7,7 +7,7 @@ import { StatusIcon } from './status-icon';
  */
 export function FormField({ id, label, hint, caution, error, children }: { id: string; label: string; hint?: string; caution?: string; error?: string; children: ReactNode }) {
   return (
-    <div className="mb-4">
+    <div className="mb-4 min-w-0">
       <label htmlFor={id} className="block text-sm font-semibold">{label}</label>
       <div className="mt-1">{children}</div>
       {error ? <p id={`${id}-error`} role="alert" className="mt-1 flex items-start gap-1 text-sm text-verdict-fail"><StatusIcon name="fail" />{error}</p> : null}

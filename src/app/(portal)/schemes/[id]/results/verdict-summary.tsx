@@ -34,16 +34,16 @@ export function VerdictSummary({ result, lengthUnit, governingName }: { result: 
         <p className="mt-1 text-sm">Governing event (least margin): <strong>{result.governingEvent.name}</strong>, margin <span className="num">{f(result.governingEvent.leastMargin)} {u}</span>.{governingName && governingName !== result.governingEvent.name ? ` You marked ${governingName} as the design event.` : ''}</p>
       ) : null}
       {result.events.map((e) => (e.limits.length === 0 ? null : (
-        <div key={e.name} className="mt-4 overflow-x-auto">
+        <div key={e.name} className="scroll-cue mt-4 overflow-x-auto">
           <table className="w-full border-collapse text-sm">
             <caption className="mb-1 text-left font-semibold">{e.name}: <VerdictWord pass={e.verdict === 'pass'} /></caption>
             <thead>
               <tr className="border-b border-paper-edge text-left text-ink-soft">
                 <th scope="col" className="py-1 pr-3">Limit</th>
-                <th scope="col" className="py-1 pr-3 text-right">Distance ({u})</th>
-                <th scope="col" className="py-1 pr-3 text-right">Maximum level ({u})</th>
-                <th scope="col" className="py-1 pr-3 text-right">Freeboard ({u})</th>
-                <th scope="col" className="py-1 pr-3 text-right">Water level with / without ({u})</th>
+                <th scope="col" className="hidden py-1 pr-3 text-right sm:table-cell">Distance ({u})</th>
+                <th scope="col" className="hidden py-1 pr-3 text-right sm:table-cell">Maximum level ({u})</th>
+                <th scope="col" className="hidden py-1 pr-3 text-right sm:table-cell">Freeboard ({u})</th>
+                <th scope="col" className="hidden py-1 pr-3 text-right sm:table-cell">Water level with / without ({u})</th>
                 <th scope="col" className="py-1 pr-3 text-right">Margin ({u})</th>
                 <th scope="col" className="py-1">Result</th>
               </tr>
@@ -51,11 +51,15 @@ export function VerdictSummary({ result, lengthUnit, governingName }: { result: 
             <tbody>
               {e.limits.map((l) => (
                 <tr key={l.label} className="border-b border-paper-edge">
-                  <th scope="row" className="py-1 pr-3 text-left font-normal">{l.label}{l.source === 'beyond-profile' ? <span className="block text-xs text-ink-faint">beyond the backwater: level without the scheme</span> : null}</th>
-                  <td className="num py-1 pr-3 text-right">{f(l.distanceUpstream, 1)}</td>
-                  <td className="num py-1 pr-3 text-right">{f(l.maxLevel)}</td>
-                  <td className="num py-1 pr-3 text-right">{f(l.freeboard)}</td>
-                  <td className="num py-1 pr-3 text-right">{f(l.waterLevel)} / {f(l.withoutSchemeLevel)}</td>
+                  <th scope="row" className="py-1 pr-3 text-left font-normal">
+                    {l.label}{l.source === 'beyond-profile' ? <span className="block text-xs text-ink-faint">beyond the backwater: level without the scheme</span> : null}
+                    {/* On a phone the key columns (margin, result) stay; the rest are stacked under the limit's name. */}
+                    <span className="num block text-xs text-ink-soft sm:hidden">{f(l.distanceUpstream, 1)} {u} upstream · maximum {f(l.maxLevel)} · freeboard {f(l.freeboard)} · water {f(l.waterLevel)} / {f(l.withoutSchemeLevel)} without</span>
+                  </th>
+                  <td className="num hidden py-1 pr-3 text-right sm:table-cell">{f(l.distanceUpstream, 1)}</td>
+                  <td className="num hidden py-1 pr-3 text-right sm:table-cell">{f(l.maxLevel)}</td>
+                  <td className="num hidden py-1 pr-3 text-right sm:table-cell">{f(l.freeboard)}</td>
+                  <td className="num hidden py-1 pr-3 text-right sm:table-cell">{f(l.waterLevel)} / {f(l.withoutSchemeLevel)}</td>
                   <td className="num py-1 pr-3 text-right">{f(l.margin)}</td>
                   <td className="py-1"><VerdictWord pass={l.pass} /></td>
                 </tr>
