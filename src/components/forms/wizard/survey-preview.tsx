@@ -14,7 +14,7 @@ export function SurveyPreview({ sections, lengthUnit }: { sections: SurveySectio
   const u = lengthUnit;
   return (
     <div className="mt-4">
-      <div className="scroll-cue overflow-x-auto">
+      <div role="region" aria-label="Cross-sections found in the file" tabIndex={0} className="scroll-cue relative overflow-x-auto">
         <table className="w-full border-collapse text-sm">
           <caption className="mb-2 text-left text-sm font-semibold">Cross-sections found in the file</caption>
           <thead>

@@ -19,7 +19,7 @@ export function RerunComparison({ stored, check }: { stored: CaseResult; check: 
           <><StatusIcon name="fail" className="mr-1" /><strong>Countersigning is blocked.</strong> {check.blockers.join(' ')}</>
         )}
       </p>
-      <div className="scroll-cue overflow-x-auto">
+      <div role="region" aria-label="The independent re-run beside the stored results" tabIndex={0} className="scroll-cue relative overflow-x-auto">
         <table className="w-full border-collapse text-sm">
           <caption className="mb-1 text-left text-xs text-ink-faint">Key results: stored at submission and from the re-run now</caption>
           <thead>

@@ -18,7 +18,7 @@ export function ResultsSummary({ results, caption = 'Results' }: { results: Case
         <span className="text-ink-soft">{pass ? 'every flood-level limit is met for every design event.' : 'at least one flood-level limit is not met.'}</span>
         {results.governingEvent ? <span className="text-ink-soft"> Governing event: {results.governingEvent.name}, least margin <span className="num">{quantity(results.governingEvent.leastMargin, u.length)}</span>.</span> : null}
       </p>
-      <div className="scroll-cue overflow-x-auto">
+      <div role="region" aria-label="Results by event" tabIndex={0} className="scroll-cue relative overflow-x-auto">
         <table className="w-full border-collapse text-sm">
           <caption className="mb-1 text-left text-xs text-ink-faint">{caption}: each design event (engine {results.engineVersion})</caption>
           <thead>
@@ -50,7 +50,7 @@ export function ResultsSummary({ results, caption = 'Results' }: { results: Case
         </table>
       </div>
       {results.events.some((e) => e.limits.length) ? (
-        <div className="scroll-cue overflow-x-auto">
+        <div role="region" aria-label="Limits by event" tabIndex={0} className="scroll-cue relative overflow-x-auto">
           <table className="w-full border-collapse text-sm">
             <caption className="mb-1 text-left text-xs text-ink-faint">Flood-level limits (water level with the scheme against each limit less its freeboard)</caption>
             <thead>

@@ -16,7 +16,7 @@ export function SensitivityTable({ sensitivity, limits, lengthUnit: u }: { sensi
   const p = sensitivity.percentages;
   const amount: Record<string, string> = { 'manning-n-up': `+${p.manningN} %`, 'manning-n-down': `−${p.manningN} %`, 'discharge-up': `+${p.discharge} %`, 'coefficient-up': `+${p.coefficient} %`, 'coefficient-down': `−${p.coefficient} %` };
   return (
-    <div className="scroll-cue overflow-x-auto">
+    <div role="region" aria-label="Sensitivity table" tabIndex={0} className="scroll-cue relative overflow-x-auto">
       <table className="w-full border-collapse text-sm">
         <caption className="mb-2 text-left text-sm text-ink-soft">Event {sensitivity.event}. Change in water level at each limit, and in the extent of impact, against the base run ({u}).</caption>
         <thead>

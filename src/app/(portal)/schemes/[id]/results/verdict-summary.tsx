@@ -34,7 +34,7 @@ export function VerdictSummary({ result, lengthUnit, governingName }: { result: 
         <p className="mt-1 text-sm">Governing event (least margin): <strong>{result.governingEvent.name}</strong>, margin <span className="num">{f(result.governingEvent.leastMargin)} {u}</span>.{governingName && governingName !== result.governingEvent.name ? ` You marked ${governingName} as the design event.` : ''}</p>
       ) : null}
       {result.events.map((e) => (e.limits.length === 0 ? null : (
-        <div key={e.name} className="scroll-cue mt-4 overflow-x-auto">
+        <div key={e.name} role="region" aria-label={`Limits in ${e.name}`} tabIndex={0} className="scroll-cue relative mt-4 overflow-x-auto">
           <table className="w-full border-collapse text-sm">
             <caption className="mb-1 text-left font-semibold">{e.name}: <VerdictWord pass={e.verdict === 'pass'} /></caption>
             <thead>
