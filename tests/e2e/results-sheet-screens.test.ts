@@ -65,6 +65,16 @@ describe('the results sheet', () => {
     expect(csv).toContain('Level datum,not given');
     expect(csv.find((l) => l.startsWith('Event,Distance'))).toContain('Water level without the scheme (m above the datum),Afflux (m)');
 
+    // Printed on A4 (about 794 px wide at 96 dpi): no navigation or form controls, nothing wider than the page.
+    await page.emulateMedia({ media: 'print' });
+    await page.setViewportSize({ width: 794, height: 1123 });
+    expect(await page.getByRole('navigation', { name: 'Main' }).isVisible()).toBe(false);
+    expect(await page.getByRole('button', { name: 'Submit for check' }).isVisible()).toBe(false);
+    expect(await widths(page)).toEqual({ document: 794, viewport: 794 });
+    await page.screenshot({ path: `${ARTIFACTS}/screens-results-print.png`, fullPage: true });
+    await page.emulateMedia({ media: 'screen' });
+    await page.setViewportSize({ width: 1280, height: 900 });
+
     // Submitting from the sheet, with the checker chosen there.
     await page.getByLabel('Checker').selectOption(people.checker.user.id);
     await page.getByRole('button', { name: 'Submit for check' }).click();
@@ -88,6 +98,8 @@ describe('the results sheet', () => {
     expect(box!.x + box!.width).toBeLessThanOrEqual(390);
     const result = await designer.getByRole('columnheader', { name: 'Result' }).first().boundingBox();
     expect(result!.x + result!.width).toBeLessThanOrEqual(390);
+    const clipped = await designer.getByRole('region', { name: /^Limits in / }).evaluateAll((regions) => regions.filter((r) => r.scrollWidth > r.clientWidth).length);
+    expect(clipped).toBe(0);
     // The navigation is a menu.
     await designer.getByRole('button', { name: 'Menu' }).click();
     await designer.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Schemes' }).waitFor();

@@ -38,7 +38,7 @@ export function LongSectionChart({ data, lengthUnit, levelTitle, levelWords, cap
     line('Water level without the scheme', data.withoutScheme, CHART_COLOURS.without, { borderDash: [6, 4] }),
     line('Water level with the scheme', data.withScheme, CHART_COLOURS.accent, { borderWidth: 3 }),
     ...(showEnergyLine ? [line('Energy line (water level plus velocity head)', data.energyLine, CHART_COLOURS.critical, { borderDash: [12, 3, 2, 3, 2, 3], borderWidth: 1 })] : []),
-    ...(data.structure ? [line('Structure: sill up to the crest level', structure, CHART_COLOURS.ink, { borderWidth: 7, borderCapStyle: 'butt' })] : []),
+    ...(data.structure ? [line('Structure: sill up to the crest level', structure, CHART_COLOURS.ink, { borderWidth: 7, borderCapStyle: 'butt', clip: 8 })] : []),
     {
       label: 'Flood-level limit: maximum level (bar)',
       data: data.limits.map((l) => ({ x: l.x, y: l.maxLevel })),
@@ -82,7 +82,7 @@ export function LongSectionChart({ data, lengthUnit, levelTitle, levelWords, cap
       },
     },
     scales: {
-      x: { type: 'linear', min: data.structure ? -Math.max(1, 0.01 * Math.max(...data.bed.map((p) => p.x))) : 0, title: { display: true, text: `Distance upstream of the structure (${lengthUnit})`, font: CHART_FONT } },
+      x: { type: 'linear', min: 0, title: { display: true, text: `Distance upstream of the structure (${lengthUnit})`, font: CHART_FONT } },
       y: { type: 'linear', min: low - pad, max: high + pad, title: { display: true, text: axisTitleLines(levelTitle, 44), font: CHART_FONT } },
     },
   };
