@@ -6,9 +6,9 @@ import { verifyNumberSchema } from '@/lib/validation/certificate-schemas';
 import { CautionNote } from '@/components/ui/caution-note';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { PageHeader } from '@/components/ui/page-header';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { CertificateStatusCard } from './certificate-status-card';
 import { VerifyUploadForm } from './verify-upload-form';
-import { StatusIcon } from '@/components/ui/status-icon';
 
 export const metadata: Metadata = { title: 'Verify a certificate' };
 

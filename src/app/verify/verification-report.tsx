@@ -1,6 +1,6 @@
 import type { PdfVerification } from '@/lib/certificates/verify-certificate-pdf';
-import { CertificateStatusCard } from './certificate-status-card';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { CertificateStatusCard } from './certificate-status-card';
 
 function Check({ ok, label }: { ok: boolean; label: string }) {
   return (

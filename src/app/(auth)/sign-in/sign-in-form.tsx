@@ -6,8 +6,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { signInSchema, type SignInInput } from '@/lib/validation/auth-schemas';
-import { signInAction } from './actions';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { signInAction } from './actions';
 
 export function SignInForm({ next }: { next?: string }) {
   const router = useRouter();

@@ -5,11 +5,11 @@ import { Controller, useFieldArray, useForm } from 'react-hook-form';
 import type { CaseUnits } from '@/lib/validation/case-schema';
 import { type FlowsStepInput, type FlowsStepValues, flowsStepSchema } from '@/lib/validation/scheme-schemas';
 import { inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { asNumber, errorAt, numberInputProps } from '../form-values';
 import { WizardField, describedBy } from '../wizard-field';
 import { StepActions } from './step-actions';
 import { useStepSave } from './use-step-save';
-import { StatusIcon } from '@/components/ui/status-icon';
 
 type Props = { schemeId: string; revisionId: string; units: CaseUnits; defaults?: Partial<FlowsStepInput>; backHref: string };
 

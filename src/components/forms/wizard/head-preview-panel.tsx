@@ -3,9 +3,9 @@
 import useSWR from 'swr';
 import { coefficientWords } from '@/lib/hydraulics/weirs/coefficient-words';
 import type { HeadPreview } from '@/lib/revisions/preview-head';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { listInWords } from './preview-needs';
 import { useDebounced } from './use-debounced';
-import { StatusIcon } from '@/components/ui/status-icon';
 
 export const HEAD_PREVIEW_DELAY_MS = 400;
 

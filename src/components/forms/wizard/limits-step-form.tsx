@@ -6,12 +6,12 @@ import { useFieldArray, useForm } from 'react-hook-form';
 import type { CaseUnits } from '@/lib/validation/case-schema';
 import { type LimitsStepInput, type LimitsStepValues, limitsStepSchema } from '@/lib/validation/scheme-schemas';
 import { inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { asNumber, errorAt, numberInputProps } from '../form-values';
 import { WizardField, describedBy } from '../wizard-field';
 import { LimitsOptions } from './limits-options';
 import { StepActions } from './step-actions';
 import { useStepSave } from './use-step-save';
-import { StatusIcon } from '@/components/ui/status-icon';
 
 export interface SurveyedSectionBank {
   distanceUpstream: number;

@@ -7,11 +7,11 @@ import { type Resolver, useForm } from 'react-hook-form';
 import type { ActionResult } from '@/lib/actions/action-result';
 import { type SchemeStepInput, type SchemeStepValues, schemeStepSchema } from '@/lib/validation/scheme-schemas';
 import { inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { asNumber, errorAt, numberInputProps } from '../form-values';
 import { WizardField, describedBy } from '../wizard-field';
 import { StepActions } from './step-actions';
 import { type SaveFailure, useStepSave } from './use-step-save';
-import { StatusIcon } from '@/components/ui/status-icon';
 
 type CreateAction = (values: unknown) => Promise<ActionResult<{ schemeId: string }>>;
 

@@ -1,7 +1,7 @@
 import Link from 'next/link';
 import { buttonClassName } from '@/components/ui/form-field';
-import type { SaveFailure } from './use-step-save';
 import { StatusIcon } from '@/components/ui/status-icon';
+import type { SaveFailure } from './use-step-save';
 
 /** The foot of every step: what the server refused, "Back", and "Save and continue". */
 export function StepActions({ failure, backHref, submitting, label = 'Save and continue' }: { failure: SaveFailure | null; backHref?: string; submitting: boolean; label?: string }) {

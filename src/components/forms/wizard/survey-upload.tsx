@@ -5,8 +5,8 @@ import { useState } from 'react';
 import { UPLOAD_LIMIT_BYTES, describeBytes } from '@/lib/uploads/upload-limits';
 import type { SurveySection } from '@/lib/validation/survey-csv';
 import { buttonClassName } from '@/components/ui/form-field';
-import { SurveyPreview } from './survey-preview';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { SurveyPreview } from './survey-preview';
 
 type Issue = { path: string; message: string };
 type State =

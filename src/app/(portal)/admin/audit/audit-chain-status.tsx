@@ -1,6 +1,6 @@
 import type { ChainCheck } from '@/lib/audit/verify-audit-chain';
-import { utc } from '../../checks/_components/quantities';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { utc } from '../../checks/_components/quantities';
 
 /** The result of recomputing every hash of the trail as the page was drawn: a calm note, or the alarm naming the break. */
 export function AuditChainStatus({ check, alarm }: { check: ChainCheck; alarm: string | null }) {

@@ -6,11 +6,11 @@ import type { RawQuery } from '@/lib/audit/parse-audit-filter';
 import { requirePageRole } from '@/lib/auth/page-guard';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { AuditChainStatus } from './audit-chain-status';
 import { AuditEventList } from './audit-event-list';
 import { AuditFilterForm } from './audit-filter-form';
 import { trailCsvHref, trailHref } from './audit-links';
-import { StatusIcon } from '@/components/ui/status-icon';
 
 export const metadata: Metadata = { title: 'Audit trail' };
 

@@ -7,8 +7,8 @@ import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { revokeCertificateSchema } from '@/lib/validation/certificate-schemas';
 import { FormField, inputClassName } from '@/components/ui/form-field';
-import { revokeCertificateAction } from './actions';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { revokeCertificateAction } from './actions';
 
 type FormInput = z.input<typeof revokeCertificateSchema>;
 const FIELDS = ['reason', 'confirmed', 'password'] as const;

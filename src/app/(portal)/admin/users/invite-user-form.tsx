@@ -6,8 +6,8 @@ import { useForm } from 'react-hook-form';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { ROLES, ROLE_LABELS } from '@/lib/auth/roles';
 import { inviteUserSchema, type InviteUserInput } from '@/lib/validation/auth-schemas';
-import { inviteUserAction } from './actions';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { inviteUserAction } from './actions';
 
 export function InviteUserForm() {
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);

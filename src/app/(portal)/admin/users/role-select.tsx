@@ -2,8 +2,8 @@
 
 import { useState, useTransition } from 'react';
 import { ROLES, ROLE_LABELS, type Role } from '@/lib/auth/roles';
-import { changeRoleAction } from './actions';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { changeRoleAction } from './actions';
 
 export function RoleSelect({ userId, role, userName }: { userId: string; role: Role; userName: string }) {
   const [pending, startTransition] = useTransition();

@@ -6,8 +6,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { REVIEW_PARTS, REVIEW_PART_LABELS, type ReviewCommentInput, reviewCommentSchema } from '@/lib/validation/check-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
-import { addReviewCommentAction } from './actions';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { addReviewCommentAction } from './actions';
 
 export function CommentForm({ revisionId }: { revisionId: string }) {
   const router = useRouter();

@@ -6,8 +6,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { type ReturnRevisionInput, returnRevisionSchema } from '@/lib/validation/check-schemas';
 import { FormField, inputClassName } from '@/components/ui/form-field';
-import { returnRevisionAction } from './actions';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { returnRevisionAction } from './actions';
 
 export function ReturnForm({ revisionId }: { revisionId: string }) {
   const router = useRouter();

@@ -5,11 +5,13 @@ import type { CaseResult } from '@/lib/hydraulics/case-result';
 import { unitWords } from '@/lib/revisions/draft-inputs';
 import { longSectionData, sectionOutline } from '@/lib/revisions/results-sheet';
 import { stepTableColumns } from '@/lib/revisions/step-table-csv';
+import type { SheetRating } from '@/lib/revisions/rating-for-sheet';
 import type { CaseInput } from '@/lib/validation/case-schema';
+import { RatingChart } from '@/components/charts/rating-chart';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { ProfileViews } from '../../schemes/[id]/results/profile-views';
 import { SensitivityTable } from '../../schemes/[id]/results/sensitivity-table';
 import { StepTable } from '../../schemes/[id]/results/step-table';
-import { StatusIcon } from '@/components/ui/status-icon';
 
 type Props = {
   input: CaseInput;
@@ -19,6 +21,8 @@ type Props = {
   /** The page's own address, to which `?event=` is added. */
   href: string;
   stepTableCsvHref: string;
+  /** The structure's rating, worked out now by the engine from the frozen inputs (a rating is not stored). */
+  rating?: SheetRating;
 };
 
 function Part({ id, title, children }: { id: string; title: string; children: ReactNode }) {
@@ -31,7 +35,7 @@ function Part({ id, title, children }: { id: string; title: string; children: Re
 }
 
 /** The stored results as the designer saw them on the results sheet: long-section and cross-section, warnings, sensitivity and step table. */
-export function DesignerResults({ input, results, eventIndex, datum, href, stepTableCsvHref }: Props) {
+export function DesignerResults({ input, results, eventIndex, datum, href, stepTableCsvHref, rating }: Props) {
   const event = results.events[eventIndex];
   const u = unitWords(input.units).length;
   const caption = `${event.name}: stored water level with the scheme ${event.control.level.toFixed(3)} ${u} at the structure, falling back to the level without it by ${event.extent.distanceUpstream.toFixed(0)} ${u} upstream. ${event.limits.filter((l) => l.pass).length} of ${event.limits.length} limits met.`;
@@ -49,6 +53,11 @@ export function DesignerResults({ input, results, eventIndex, datum, href, stepT
       <Part id="h-stored-long-section" title={`Long-section and cross-section: ${event.name}`}>
         <ProfileViews data={longSectionData(input, event)} profile={event.profile} outline={sectionOutline(input)} lengthUnit={u} levelTitle={`Level (${u} ${datum ? `above ${datum}` : 'above the datum'})`} levelWords={datum ? `above ${datum}` : 'above the datum'} caption={caption} />
       </Part>
+      {rating && rating.status !== 'none' ? (
+        <Part id="h-stored-rating" title="Rating of the structure (worked out from the frozen inputs)">
+          {rating.status === 'rated' ? <RatingChart rating={rating.rating} lengthUnit={u} dischargeUnit={unitWords(input.units).discharge} levelWords={datum ? `above ${datum}` : 'above the datum'} /> : <p className="text-sm text-ink-soft">The rating could not be worked out: {rating.reason}</p>}
+        </Part>
+      ) : null}
       <Part id="h-stored-warnings" title={`Warnings (${results.warnings.length})`}>
         {results.warnings.length === 0 ? <p className="text-sm text-ink-soft">None.</p> : <ul className="space-y-1 text-sm">{results.warnings.map((w) => <li key={w}><StatusIcon name="caution" className="mr-1 text-verdict-caution" />{engineTextInWords(w, input)}</li>)}</ul>}
       </Part>

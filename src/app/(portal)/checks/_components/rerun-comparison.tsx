@@ -1,8 +1,8 @@
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import type { FrozenRevisionCheck } from '@/lib/review/check-frozen-revision';
 import { keyResults } from '@/lib/review/key-results';
-import { shownValue } from './quantities';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { shownValue } from './quantities';
 
 /**
  * Stored results beside the independent server-side re-run of the frozen inputs, key result by key result;

@@ -1,7 +1,7 @@
 import { CautionNote } from '@/components/ui/caution-note';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
-import { quantity, unitsOf } from './quantities';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { quantity, unitsOf } from './quantities';
 
 function Verdict({ pass }: { pass: boolean }) {
   return pass ? <span className="text-verdict-pass"><StatusIcon name="pass" className="mr-1" />pass</span> : <span className="font-semibold text-verdict-fail"><StatusIcon name="fail" className="mr-1" />fail</span>;

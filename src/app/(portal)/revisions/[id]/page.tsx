@@ -8,6 +8,7 @@ import { loadRevisionView } from '@/lib/review/load-revision-view';
 import { IntegrityAlarm } from '@/components/ui/integrity-alarm';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusLabel } from '@/components/ui/status-label';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { InputsTable } from '../../checks/_components/inputs-table';
 import { utc } from '../../checks/_components/quantities';
 import { ResultsSummary } from '../../checks/_components/results-summary';
@@ -15,7 +16,6 @@ import { ReviewThread } from '../../checks/_components/review-thread';
 import { SchemeHistory } from '../../checks/_components/scheme-history';
 import { StartDraftButton } from '../../schemes/[id]/start-draft-button';
 import { SubmitForCheckForm } from './submit-for-check-form';
-import { StatusIcon } from '@/components/ui/status-icon';
 
 export const metadata: Metadata = { title: 'Revision' };
 

@@ -7,8 +7,8 @@ import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { submitForCheckSchema } from '@/lib/validation/check-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
-import { submitForCheckAction } from './actions';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { submitForCheckAction } from './actions';
 
 type FormInput = z.input<typeof submitForCheckSchema>;
 type Checker = { id: string; name: string; organisation: string | null };

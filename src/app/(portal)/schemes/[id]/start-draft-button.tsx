@@ -3,8 +3,8 @@
 import { useRouter } from 'next/navigation';
 import { useState, useTransition } from 'react';
 import { buttonClassName } from '@/components/ui/form-field';
-import { startDraftAction } from './actions';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { startDraftAction } from './actions';
 
 /** "Start a new draft from this revision": copies its inputs into the next revision number and opens the wizard. */
 export function StartDraftButton({ revisionId, schemeId, number }: { revisionId: string; schemeId: string; number: number }) {

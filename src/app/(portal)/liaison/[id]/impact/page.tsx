@@ -9,12 +9,12 @@ import { CautionNote } from '@/components/ui/caution-note';
 import { EmptyState } from '@/components/ui/empty-state';
 import { buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { UnreadableAddress } from '@/components/ui/unreadable-address';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { CATEGORY_WORDS } from '../../_components/category-label';
 import { StripLegend } from '../../_components/parcel-strip-svg';
 import { orNotFound, requireLiaisonPage } from '../../_components/scheme-page-access';
 import { ImpactTable } from './impact-table';
 import { ReachImpactChart } from './reach-impact-chart';
-import { StatusIcon } from '@/components/ui/status-icon';
 
 export const metadata: Metadata = { title: 'Impact on parcels' };
 

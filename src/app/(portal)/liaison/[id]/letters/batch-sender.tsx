@@ -5,8 +5,8 @@ import { useState } from 'react';
 import useSWR from 'swr';
 import type { BatchProgress } from '@/lib/letters/batch-progress';
 import { buttonClassName } from '@/components/ui/form-field';
-import { LetterStatusLabel } from '../../_components/letter-status-label';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { LetterStatusLabel } from '../../_components/letter-status-label';
 
 const LETTERS_PER_REQUEST = 3;
 

@@ -7,8 +7,8 @@ import { useForm } from 'react-hook-form';
 import { revisionStanding } from '@/lib/certificates/revision-standing';
 import { type GenerateLettersInput, generateLettersSchema } from '@/lib/validation/letter-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
-import { generateLettersAction } from './actions';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { generateLettersAction } from './actions';
 
 type RevisionOption = { id: string; number: number; status: string; revoked: boolean };
 

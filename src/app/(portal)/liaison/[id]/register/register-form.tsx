@@ -6,9 +6,9 @@ import { useState } from 'react';
 import { type FieldPath, useFieldArray, useForm } from 'react-hook-form';
 import { BANK_SIDES, type ParcelInput, type SaveParcelsInput, saveParcelsSchema } from '@/lib/validation/parcel-schemas';
 import { buttonClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { saveParcelEditsAction } from './actions';
 import { ScrollRegion } from '@/components/ui/scroll-region';
-import { StatusIcon } from '@/components/ui/status-icon';
 
 const cell = 'w-full min-w-0 rounded border border-paper-edge bg-white px-2 py-1 text-sm aria-[invalid=true]:border-verdict-fail';
 const numberOrNull = (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v));

@@ -6,8 +6,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { type LetterParagraphs, type SaveLetterTemplateInput, saveLetterTemplateSchema } from '@/lib/validation/letter-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
-import { saveLetterTemplateAction } from './actions';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { saveLetterTemplateAction } from './actions';
 
 const FIELDS: { name: keyof LetterParagraphs; label: string; hint: string; rows: number }[] = [
   { name: 'introduction', label: 'Who we are and why we write', hint: 'Opens the letter, after “Dear …”.', rows: 4 },

@@ -6,8 +6,8 @@ import { useState } from 'react';
 import type { CsvIssue } from '@/lib/parcels/parcel-columns';
 import type { ParcelsCsvPreview } from '@/lib/parcels/preview-parcels-csv';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
-import { PreviewTable } from './preview-table';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { PreviewTable } from './preview-table';
 
 type State = { kind: 'idle' } | { kind: 'checking' } | { kind: 'previewed'; preview: ParcelsCsvPreview } | { kind: 'refused'; message: string } | { kind: 'stored'; version: number; parcels: number };
 

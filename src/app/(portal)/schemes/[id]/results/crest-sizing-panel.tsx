@@ -3,8 +3,8 @@
 import { useRouter } from 'next/navigation';
 import { useState, useTransition } from 'react';
 import { buttonClassName } from '@/components/ui/form-field';
-import { adoptSizedCrestAction } from '../actions';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { adoptSizedCrestAction } from '../actions';
 
 type Governing = { margin: number; event: string; limit: string };
 type Props = { revisionId: string; vary: 'sillHeight' | 'crestLength'; value: number | null; reason: string; governing: Governing | null; current: number | null; lengthUnit: string; editable: boolean };

@@ -8,13 +8,13 @@ import { stepTableColumns } from '@/lib/revisions/step-table-csv';
 import type { CaseInput } from '@/lib/validation/case-schema';
 import type { Governing } from '@/lib/validation/scheme-schemas';
 import { RatingChart } from '@/components/charts/rating-chart';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { CrestSizingPanel } from './crest-sizing-panel';
 import { EventFacts } from './event-facts';
 import { ProfileViews } from './profile-views';
 import { SensitivityTable } from './sensitivity-table';
 import { StepTable } from './step-table';
 import { VerdictSummary } from './verdict-summary';
-import { StatusIcon } from '@/components/ui/status-icon';
 
 type Props = {
   scheme: { id: string; reference: string };

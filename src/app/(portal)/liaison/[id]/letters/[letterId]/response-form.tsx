@@ -6,8 +6,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { type LogResponseInput, logResponseSchema } from '@/lib/validation/letter-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
-import { logLetterResponseAction } from './actions';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { logLetterResponseAction } from './actions';
 
 export function ResponseForm({ letterId }: { letterId: string }) {
   const router = useRouter();
