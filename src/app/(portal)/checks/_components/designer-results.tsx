@@ -54,7 +54,7 @@ export function DesignerResults({ input, results, eventIndex, datum, href, stepT
         <ProfileViews data={longSectionData(input, event)} profile={event.profile} outline={sectionOutline(input)} lengthUnit={u} levelTitle={`Level (${u} ${datum ? `above ${datum}` : 'above the datum'})`} levelWords={datum ? `above ${datum}` : 'above the datum'} caption={caption} />
       </Part>
       {rating && rating.status !== 'none' ? (
-        <Part id="h-stored-rating" title="Rating of the structure (worked out from the frozen inputs)">
+        <Part id="h-stored-rating" title="Rating of the structure (worked out now by the engine)">
           {rating.status === 'rated' ? <RatingChart rating={rating.rating} lengthUnit={u} dischargeUnit={unitWords(input.units).discharge} levelWords={datum ? `above ${datum}` : 'above the datum'} /> : <p className="text-sm text-ink-soft">The rating could not be worked out: {rating.reason}</p>}
         </Part>
       ) : null}
