@@ -119,6 +119,21 @@ describe('the results sheet', () => {
   });
 });
 
+describe('the portal’s own icons', () => {
+  it('serves the favicon, the app icons and the manifest to a browser that is not signed in', async () => {
+    const stranger = await portal.browser.newContext();
+    for (const [address, type] of [['/icon.svg', 'image/svg+xml'], ['/apple-icon.png', 'image/png'], ['/icons/icon-192.png', 'image/png'], ['/icons/icon-512.png', 'image/png'], ['/manifest.webmanifest', 'application/manifest+json']]) {
+      const response = await stranger.request.get(`${portal.app.baseUrl}${address}`, { maxRedirects: 0 });
+      expect(response.status(), address).toBe(200);
+      expect(response.headers()['content-type'], address).toContain(type);
+    }
+    const page = await stranger.newPage();
+    await page.goto(`${portal.app.baseUrl}/sign-in`);
+    expect(await page.locator('link[rel="icon"]').first().getAttribute('href')).toMatch(/^\/icon\.svg/);
+    await stranger.close();
+  });
+});
+
 describe('the wizard', () => {
   it('opens the structure step with no error, the preview waiting for the fields in words, and focus on the heading after a page change', async () => {
     const { scheme } = await createTestScheme(people.designer.user.id, demoCase(undefined, (v) => delete v.control));
