@@ -122,6 +122,7 @@ describe('the liaison officer informs every affected landowner', () => {
     await page.getByRole('button', { name: 'Make letters' }).click();
     await page.getByText(`${affected.length} letters made, queued for sending below.`).waitFor();
     await page.getByRole('button', { name: `Send ${affected.length} letters` }).click();
+    await page.getByRole('button', { name: `Yes, e-mail ${affected.length} letters` }).click();
     await page.getByTestId('batch-progress').filter({ hasText: `${affected.length} of ${affected.length} sent, 0 failed, 0 waiting.` }).waitFor({ timeout: 60_000 });
     await shot(page, 'letters-sent');
     await context.close();

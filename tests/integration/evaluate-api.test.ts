@@ -30,6 +30,17 @@ describe('POST /api/evaluate with a case file', () => {
     expect(result).toEqual(JSON.parse(cli.stdout));
   });
 
+  it('routes a flood through a reservoir off the request thread, as `npm run evaluate` does', async () => {
+    const file = 'db/seeds/cases/wendle-harrowfield-reservoir-spillway.json';
+    const response = await post(demoCase('wendle-harrowfield-reservoir-spillway.json'));
+    expect(response.status).toBe(200);
+    const { result } = await response.json();
+    expect(result.events[1].routing.method).toBe('modified-puls');
+    const cli = spawnSync('npm', ['run', '--silent', 'evaluate', '--', file], { encoding: 'utf8' });
+    expect(cli.status, cli.stderr).toBe(0);
+    expect(result).toEqual(JSON.parse(cli.stdout));
+  });
+
   it('names the field of an invalid case and stores nothing', async () => {
     const before = await tableSnapshot();
     const response = await post(demoCase('wendle-harrowfield-depth-control.json', (c) => ((c.reach as { section: { bottomWidth: number } }).section.bottomWidth = -9)));

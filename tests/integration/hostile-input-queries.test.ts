@@ -14,7 +14,7 @@ for (const [key, target] of Object.entries(QUERY_TARGETS)) {
   const [method, route] = key.split(' ');
   const call = (query: string) => {
     signedInAs(portal.world.people[target.role].sessionUser);
-    return callRoute(route.replace(/^api\//, ''), method, { query });
+    return callRoute(route.replace(/^api\//, ''), method, { query, id: target.id?.(portal.world) });
   };
 
   describe(key, () => {

@@ -46,12 +46,12 @@ describe('dates', () => {
   it('refuses a response dated on a day that does not exist, or before the letter was sent', async () => {
     as('liaison');
     const { letterId } = portal.world.letters;
-    const impossible = await withoutChange(() => logLetterResponseAction({ letterId, receivedOn: '2026-02-30', summary: 'Owner telephoned; no objection.' }));
+    const impossible = await withoutChange(() => logLetterResponseAction({ letterId, receivedOn: '2026-02-30', responseType: 'no-objection', channel: 'telephone', summary: 'Owner telephoned; no objection.' }));
     expect(impossible.ok ? [] : impossible.issues).toEqual([{ path: 'receivedOn', message: expect.stringContaining('2026-02-30 does not exist') }]);
     await Letter.update({ status: 'sent', sentAt: '2026-01-20T09:30:00.000Z' }, { where: { id: letterId } });
-    const early = await withoutChange(() => logLetterResponseAction({ letterId, receivedOn: '2026-01-19', summary: 'Owner telephoned; no objection.' }));
+    const early = await withoutChange(() => logLetterResponseAction({ letterId, receivedOn: '2026-01-19', responseType: 'no-objection', channel: 'telephone', summary: 'Owner telephoned; no objection.' }));
     expect(early.ok ? [] : early.issues).toEqual([{ path: 'receivedOn', message: 'must be on or after 2026-01-20, the day the letter was sent' }]);
-    const sameDay = await logLetterResponseAction({ letterId, receivedOn: '2026-01-20', summary: 'Owner telephoned; no objection.' });
+    const sameDay = await logLetterResponseAction({ letterId, receivedOn: '2026-01-20', responseType: 'no-objection', channel: 'telephone', summary: 'Owner telephoned; no objection.' });
     expect(sameDay.ok).toBe(true);
   });
 });

@@ -151,7 +151,7 @@ describe('letters from a countersigned revision', () => {
     expect(await receivedFor(byPost.id)).toHaveLength(0);
     signedInAs(liaison);
     // A response cannot predate its letter, which was sent just now.
-    const logged = await logLetterResponseAction({ letterId: rest[0].id, receivedOn: new Date().toISOString().slice(0, 10), summary: 'Telephoned: worried about the gateway at the lower end.' });
+    const logged = await logLetterResponseAction({ letterId: rest[0].id, receivedOn: new Date().toISOString().slice(0, 10), responseType: 'question', channel: 'telephone', summary: 'Telephoned: worried about the gateway at the lower end.' });
     expect(logged).toMatchObject({ ok: true });
     expect((await rest[0].reload()).status).toBe('acknowledged');
     const tracking = await listLetterTracking({ user: liaison, schemeId });

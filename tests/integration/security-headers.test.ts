@@ -38,4 +38,18 @@ describe('the proxy’s headers', async () => {
     expect(one.headers.get('x-middleware-request-content-security-policy')).toBe(policy);
     expect((await answer('http://127.0.0.1:3000/home')).headers.get('content-security-policy')).not.toBe(policy);
   });
+
+  it('gives API answers one fixed policy that runs no script, and passes their requests on untouched', async () => {
+    process.env.PUBLIC_URL = 'http://127.0.0.1:3000';
+    const health = await answer('http://127.0.0.1:3000/api/health');
+    const policy = health.headers.get('content-security-policy') ?? '';
+    expect(policy).toMatch(/script-src 'none'/);
+    expect(policy).toMatch(/frame-ancestors 'none'/);
+    expect(policy).not.toMatch(/nonce-/);
+    expect((await answer('http://127.0.0.1:3000/api/schemes')).headers.get('content-security-policy')).toBe(policy);
+    expect(health.headers.get('x-middleware-request-content-security-policy')).toBeNull();
+    expect(health.headers.get('permissions-policy')).toMatch(/camera=\(\)/);
+    process.env.PUBLIC_URL = 'https://sillmark.example.org';
+    expect((await answer('https://sillmark.example.org/api/schemes')).headers.get('strict-transport-security')).toMatch(/^max-age=/);
+  });
 });

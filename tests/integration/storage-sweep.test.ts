@@ -39,16 +39,17 @@ describe('sweeping stored files that no record refers to', () => {
       certificates: strayFile('certificates', '7c9e6679-7425-40de-944b-e07fc1f90ae7.pdf', HOUR_AND_A_BIT),
       uploads: strayFile('uploads', 'e3b0c442-98fc-4c14-9afb-f4c8996fb924.csv', HOUR_AND_A_BIT),
       outbox: strayFile('outbox', '9f86d081-884c-4d63-9a3c-2c0b3f1e4e5d.eml', HOUR_AND_A_BIT),
+      plans: strayFile('plans', '1b4f0e98-51c7-4f38-a3a2-0b8c5f1d2e3a.geojson', HOUR_AND_A_BIT),
     };
     const young = strayFile('letters', '5d41402a-bc4b-4a76-b971-9d911017c592.pdf', 60 * 1000);
 
     const report = await sweepUnreferencedFiles();
-    expect(report).toEqual({ letters: [old.letters], certificates: [old.certificates], uploads: [old.uploads], outbox: [old.outbox] });
+    expect(report).toEqual({ letters: [old.letters], certificates: [old.certificates], uploads: [old.uploads], outbox: [old.outbox], plans: [old.plans] });
     expect(readdirSync(dataDirectory('letters'))).toEqual([young]);
     expect(readdirSync(dataDirectory('uploads'))).toEqual([upload.storedName]);
     expect(readdirSync(dataDirectory('outbox'))).toEqual([path.basename(message.rawPath)]);
     expect(readdirSync(dataDirectory('certificates'))).toEqual([]);
-    expect(await sweepUnreferencedFiles()).toEqual({ letters: [], certificates: [], uploads: [], outbox: [] });
+    expect(await sweepUnreferencedFiles()).toEqual({ letters: [], certificates: [], uploads: [], outbox: [], plans: [] });
   });
 
   it('runs as its own command at start and says what it removed', () => {

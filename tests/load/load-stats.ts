@@ -42,3 +42,20 @@ export interface TargetCheck {
 export function check(target: string, measured: string, met: boolean): TargetCheck {
   return { target, measured, verdict: met ? 'PASS' : 'MISSED' };
 }
+
+/** A latency as the README's figures table writes it: milliseconds below a second, else seconds. */
+function readableMs(ms: number): string {
+  return ms < 1000 ? `${Math.round(ms)} ms` : `${(ms / 1000).toFixed(2)} s`;
+}
+
+/**
+ * The rows of the README's load-test table (endpoint, requests/s with its share of health's, p50, p95, p99, errors),
+ * ready to paste. `failures` counts errors, time-outs and non-2xx answers together.
+ */
+export function readmeTableRows(rows: readonly LoadRow[], health: LoadRow): string[] {
+  return rows.map((row) => {
+    const share = row === health ? '' : ` (${Math.round((100 * row.requestsPerSecond) / health.requestsPerSecond)} % of health)`;
+    const failures = row.errors + row.non2xx;
+    return `| ${row.endpoint} | ${row.requestsPerSecond}${share} | ${readableMs(row.p50Ms)} | ${readableMs(row.p95Ms)} | ${readableMs(row.p99Ms)} | ${failures} |`;
+  });
+}

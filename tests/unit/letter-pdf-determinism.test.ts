@@ -12,7 +12,7 @@ const impact: LetterImpact = {
   events: [{ event: '1% AEP', dischargeM3s: 38, affluxAtFrom: 0.31, affluxAtTo: 0.2, maxAfflux: 0.31, maxAffluxAt: 340, withScheme: { inundatedLength: 120, maxDepth: 0.2, maxWaterLevel: 34.5 }, withoutScheme: { inundatedLength: 0, maxDepth: 0, maxWaterLevel: 34.2 }, floodingJudgedBy: 'ground-level', assessed: { from: 340, to: 610 }, category: 'affected' }],
 };
 const letter = (name: string, extra: string): LetterDocument => ({
-  reference: 'WH-017', version: 1, date: '2026-11-30T09:00:00.000Z', preliminary: false, organisation: 'Wendle Valley Drainage Board',
+  reference: 'WH-017', version: 1, date: '2026-11-30T09:00:00.000Z', letterDate: '2026-11-30', respondBy: '2026-12-28', preliminary: false, organisation: 'Wendle Valley Drainage Board',
   recipient: { name, address: '17 Mill Lane, Harrowfield' }, scheme: { name: 'Harrowfield Mill weir', reference: 'HM' },
   paragraphs: { ...DEFAULT_PARAGRAPHS, introduction: `${DEFAULT_PARAGRAPHS.introduction} ${extra}` }, impact,
 });

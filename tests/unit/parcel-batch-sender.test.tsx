@@ -6,16 +6,18 @@ import { setupServer } from 'msw/node';
 import { SWRConfig } from 'swr';
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
 import type { BatchProgress } from '@/lib/letters/batch-progress';
+import { emptyLetterCounts } from '@/lib/letters/letter-statuses';
 import { BatchSender } from '@/app/(portal)/liaison/[id]/letters/batch-sender';
 
 vi.mock('next/navigation', () => ({ useRouter: () => ({ refresh: () => undefined }) }));
+vi.mock('@/app/(portal)/liaison/[id]/letters/actions', () => ({ withdrawBatchAction: vi.fn(), resendLetterAction: vi.fn(), markPostedAction: vi.fn() }));
 
-const letters = ['HM-01', 'HM-02', 'HM-03', 'HM-04', 'HM-05'].map((ref, i) => ({ id: `l${i}`, parcelReference: ref, ownerName: `Owner ${i}`, recipientEmail: `owner${i}@wendle.test`, version: 1, status: 'queued' as const, failureReason: null, sentAt: null }));
+const letters = ['HM-01', 'HM-02', 'HM-03', 'HM-04', 'HM-05'].map((ref, i) => ({ id: `l${i}`, parcelReference: ref, ownerName: `Owner ${i}`, recipientEmail: `owner${i}@wendle.test`, version: 1, status: 'queued' as const, failureReason: null, sentAt: null, postedOn: null, responseDueOn: null }));
 let state: BatchProgress;
 const requests: { max: number; retryFailed: boolean }[] = [];
 
 function progress(): BatchProgress {
-  const counts = { queued: 0, sending: 0, sent: 0, failed: 0, acknowledged: 0, held: 0 };
+  const counts = emptyLetterCounts();
   for (const l of state.letters) counts[l.status] += 1;
   return { ...state, counts };
 }
@@ -39,7 +41,7 @@ afterEach(() => {
 afterAll(() => server.close());
 
 function renderSender(manage: boolean) {
-  state = { batchId: 'b1', schemeId: 's1', revisionNumber: 2, preliminary: false, status: 'open', createdAt: '2026-03-15T10:00:00.000Z', total: 5, counts: { queued: 5, sending: 0, sent: 0, failed: 0, acknowledged: 0, held: 0 }, letters: letters.map((l) => ({ ...l })) };
+  state = { batchId: 'b1', schemeId: 's1', revisionNumber: 2, preliminary: false, status: 'open', createdAt: '2026-03-15T10:00:00.000Z', total: 5, counts: { ...emptyLetterCounts(), queued: 5 }, letters: letters.map((l) => ({ ...l })) };
   // A fresh SWR cache for each test.
   return render(<SWRConfig value={{ provider: () => new Map() }}><BatchSender batchId="b1" manage={manage} initiallyOpen /></SWRConfig>);
 }
@@ -49,11 +51,25 @@ describe('sending a batch of letters', () => {
     renderSender(true);
     expect((await screen.findByTestId('batch-progress')).textContent).toBe('0 of 5 sent, 0 failed, 5 waiting.');
     await userEvent.click(screen.getByRole('button', { name: 'Send 5 letters' }));
+    // Nothing goes until the count is confirmed.
+    expect(requests).toEqual([]);
+    expect(screen.getByText(/Send 5 letters by e-mail now\?/)).toBeTruthy();
+    await userEvent.click(screen.getByRole('button', { name: 'Yes, e-mail 5 letters' }));
     await waitFor(() => expect(screen.getByTestId('batch-progress').textContent).toBe('4 of 5 sent, 1 failed, 0 waiting.'));
     expect(requests).toEqual([{ max: 3, retryFailed: false }, { max: 3, retryFailed: false }]);
     expect(screen.getByText(/mailbox unavailable/)).toBeTruthy();
     expect(screen.getByRole('button', { name: 'Retry the failed letters' })).toBeTruthy();
     expect(screen.queryByRole('button', { name: /Send/ })).toBeNull();
+  });
+
+  it('sends nothing when the confirmation is cancelled, and offers to withdraw a batch nothing of which has gone out', async () => {
+    renderSender(true);
+    await userEvent.click(await screen.findByRole('button', { name: 'Send 5 letters' }));
+    await userEvent.click(screen.getByRole('button', { name: 'Cancel' }));
+    expect(requests).toEqual([]);
+    expect(screen.queryByText(/by e-mail now\?/)).toBeNull();
+    await userEvent.click(screen.getByRole('button', { name: 'Withdraw this batch' }));
+    expect(screen.getByText(/Withdraw this batch of 5 letters\? None has gone out/)).toBeTruthy();
   });
 
   it('offers no sending to someone who may only read', async () => {

@@ -3,7 +3,8 @@ import { cautionText, eventParagraph } from '@/lib/letters/letter-content';
 import type { LetterImpact } from '@/lib/letters/letter-impact';
 import { namedMethods } from '@/lib/letters/letter-methods';
 import { letterParagraphsSchema } from '@/lib/validation/letter-schemas';
-import { DEFAULT_PARAGRAPHS, fillPlaceholders } from '@/lib/letters/letter-template';
+import { DEFAULT_PARAGRAPHS } from '@/lib/letters/letter-template';
+import { fillPlaceholders } from '@/lib/validation/letter-placeholders';
 
 type Event = LetterImpact['events'][number];
 const base: Event = {
@@ -55,6 +56,7 @@ describe('the letter template', () => {
   });
 
   it('fills the placeholders and leaves other braces alone', () => {
-    expect(fillPlaceholders('{owner_name} at {parcel_reference} on the {watercourse} {unknown}', { owner_name: 'Edith', parcel_reference: 'HM-02', scheme_name: 'S', watercourse: 'River Wendle', site: 'X' })).toBe('Edith at HM-02 on the River Wendle {unknown}');
+    const values = { owner_name: 'Edith', parcel_reference: 'HM-02', scheme_name: 'S', watercourse: 'River Wendle', site: 'X', postal_address: 'Weir Meadow Farm, Harrowfield', letter_date: '1 March 2026', response_deadline: '29 March 2026', officer_name: 'Lena', officer_role: 'Landowner liaison officer', certificate_number: 'C-1', verification_link: 'https://x.test/v' };
+    expect(fillPlaceholders('{owner_name} at {parcel_reference} on the {watercourse} {unknown}, by {response_deadline}', values)).toBe('Edith at HM-02 on the River Wendle {unknown}, by 29 March 2026');
   });
 });

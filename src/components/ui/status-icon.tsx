@@ -1,4 +1,4 @@
-import { ArrowRightLeft, Ban, Circle, CircleCheck, CircleDot, CirclePause, CircleX, Ellipsis, Hourglass, Info, type LucideIcon, Mail, MailCheck, OctagonAlert, PencilLine, Send, Triangle, TriangleAlert, Undo2 } from 'lucide-react';
+import { ArrowRightLeft, Ban, CalendarClock, Circle, CircleCheck, CircleDot, CirclePause, CircleAlert, CircleSlash, CircleX, Ellipsis, Hourglass, Info, type LucideIcon, Mail, MailCheck, OctagonAlert, PencilLine, Send, Triangle, TriangleAlert, Undo2 } from 'lucide-react';
 
 // Every status mark comes from one icon set (Lucide, SVG), so none depends on a glyph the shipped fonts lack.
 // Each is decorative: the word beside it carries the meaning.
@@ -17,6 +17,10 @@ const ICONS = {
   active: CircleDot,
   invited: Mail,
   disabled: Circle,
+  deactivated: Circle,
+  // A response's deadline
+  overdue: CircleAlert,
+  'due soon': CalendarClock,
   // A parcel's impact category
   affected: OctagonAlert,
   'below-threshold': Triangle,
@@ -29,6 +33,9 @@ const ICONS = {
   failed: CircleX,
   acknowledged: MailCheck,
   held: CirclePause,
+  'to-post': PencilLine,
+  posted: MailCheck,
+  withdrawn: CircleSlash,
 } satisfies Record<string, LucideIcon>;
 
 export type StatusIconName = keyof typeof ICONS;

@@ -12,6 +12,9 @@ const STYLES: Record<string, string> = {
   active: 'text-verdict-pass border-verdict-pass',
   invited: 'text-accent border-accent',
   disabled: 'text-ink-faint border-paper-edge',
+  deactivated: 'text-ink-faint border-paper-edge',
+  overdue: 'text-verdict-fail border-verdict-fail',
+  'due soon': 'text-verdict-caution border-verdict-caution',
 };
 
 export function StatusLabel({ status }: { status: string }) {

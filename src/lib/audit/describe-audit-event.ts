@@ -1,11 +1,12 @@
 import { ACCOUNT_WORDS } from './account-event-words';
 import { type AuditNames, type DescribableEvent, type Words, parseDetails } from './event-details';
 import { LETTER_WORDS } from './letter-event-words';
+import { PARCEL_PLAN_WORDS } from './parcel-plan-event-words';
 import { WORK_WORDS } from './work-event-words';
 
 export type { AuditNames, DescribableEvent } from './event-details';
 
-const WORDS: Record<string, Words> = { ...ACCOUNT_WORDS, ...WORK_WORDS, ...LETTER_WORDS };
+const WORDS: Record<string, Words> = { ...ACCOUNT_WORDS, ...WORK_WORDS, ...LETTER_WORDS, ...PARCEL_PLAN_WORDS };
 
 // A kind recorded by a newer part of the portal that has no words yet still reads as words, never as its code.
 const fallback: Words = (event) => `recorded: ${event.action.replace(/[._-]+/g, ' ').trim()}`;

@@ -4,7 +4,7 @@ import type { EditableStep } from '@/lib/validation/scheme-schemas';
 // with the words a practitioner reads, its unit and the wizard step where it is entered. Screens, messages, e-mails and
 // PDFs all name fields through it, so a field is called the same everywhere.
 
-export type UnitKind = 'length' | 'level' | 'depth' | 'discharge' | 'slope' | 'percent' | 'years' | 'none';
+export type UnitKind = 'length' | 'level' | 'depth' | 'discharge' | 'slope' | 'percent' | 'years' | 'area' | 'volume' | 'hours' | 'none';
 
 export interface FieldEntry {
   label: string;
@@ -60,6 +60,14 @@ export type CaseFieldPattern =
   | 'events[].annualExceedanceProbability'
   | 'events[].returnPeriod'
   | 'events[].climateChangeAllowance'
+  | 'events[].hydrograph'
+  | 'events[].hydrograph.kind'
+  | 'events[].hydrograph.points'
+  | 'events[].hydrograph.points[]'
+  | 'events[].hydrograph.points[].time'
+  | 'events[].hydrograph.points[].discharge'
+  | 'events[].hydrograph.shape'
+  | 'events[].hydrograph.timeToPeak'
   | 'control'
   | 'control.type'
   | 'control.depth'
@@ -86,6 +94,17 @@ export type CaseFieldPattern =
   | 'existingControl'
   | 'existingControl.type'
   | 'existingControl.depth'
+  | 'reservoir'
+  | 'reservoir.storage'
+  | 'reservoir.storage.kind'
+  | 'reservoir.storage.rows'
+  | 'reservoir.storage.rows[]'
+  | 'reservoir.storage.rows[].level'
+  | 'reservoir.storage.rows[].area'
+  | 'reservoir.storage.rows[].volume'
+  | 'reservoir.storage.area'
+  | 'reservoir.startLevel'
+  | 'reservoir.length'
   | 'profile'
   | 'profile.method'
   | 'profile.normalDepthTolerance'
@@ -109,7 +128,9 @@ export type CaseFieldPattern =
   | 'sensitivity'
   | 'sensitivity.manningN'
   | 'sensitivity.discharge'
-  | 'sensitivity.coefficient';
+  | 'sensitivity.coefficient'
+  | 'sensitivity.storage'
+  | 'sensitivity.hydrographVolume';
 
 export const CASE_FIELDS = {
   format: { label: 'type of file', step: 'scheme' },
@@ -156,6 +177,14 @@ export const CASE_FIELDS = {
   'events[].annualExceedanceProbability': { label: 'annual exceedance probability (a fraction, 0 to 1)', unit: 'none' },
   'events[].returnPeriod': { label: 'return period', unit: 'years' },
   'events[].climateChangeAllowance': { label: 'climate-change allowance', unit: 'percent' },
+  'events[].hydrograph': { label: 'inflow hydrograph', heading: true },
+  'events[].hydrograph.kind': { label: 'how the hydrograph is given (a table, or a shape from the peak)' },
+  'events[].hydrograph.points': { label: 'time and discharge points' },
+  'events[].hydrograph.points[]': { label: 'point', item: {} },
+  'events[].hydrograph.points[].time': { label: 'time', unit: 'hours' },
+  'events[].hydrograph.points[].discharge': { label: 'inflow', unit: 'discharge' },
+  'events[].hydrograph.shape': { label: 'published hydrograph shape' },
+  'events[].hydrograph.timeToPeak': { label: 'time to peak', unit: 'hours' },
 
   control: { label: 'proposed structure', step: 'structure', heading: true },
   'control.type': { label: 'kind of control (weir or fixed depth)' },
@@ -185,6 +214,18 @@ export const CASE_FIELDS = {
   'existingControl.type': { label: 'kind of control' },
   'existingControl.depth': { label: 'depth at the structure without the scheme', unit: 'depth' },
 
+  reservoir: { label: 'reservoir behind the spillway', step: 'structure', heading: true },
+  'reservoir.storage': { label: 'storage' },
+  'reservoir.storage.kind': { label: 'how the storage is given (level and area, level and volume, or a constant area)' },
+  'reservoir.storage.rows': { label: 'storage table' },
+  'reservoir.storage.rows[]': { label: 'storage-table row', item: {} },
+  'reservoir.storage.rows[].level': { label: 'water level', unit: 'level' },
+  'reservoir.storage.rows[].area': { label: 'surface area', unit: 'area' },
+  'reservoir.storage.rows[].volume': { label: 'volume stored', unit: 'volume' },
+  'reservoir.storage.area': { label: 'surface area', unit: 'area' },
+  'reservoir.startLevel': { label: 'level at the start of the flood', unit: 'level' },
+  'reservoir.length': { label: 'length of the reservoir upstream of the spillway', unit: 'length' },
+
   profile: { label: 'profile calculation', step: 'channel', heading: true },
   'profile.method': { label: 'method (direct step or standard step)' },
   'profile.normalDepthTolerance': { label: 'normal-depth tolerance (a fraction of the normal depth)', unit: 'none' },
@@ -213,6 +254,8 @@ export const CASE_FIELDS = {
   'sensitivity.manningN': { label: "change in Manning's n", unit: 'percent' },
   'sensitivity.discharge': { label: 'change in discharge', unit: 'percent' },
   'sensitivity.coefficient': { label: 'change in the weir coefficient', unit: 'percent' },
+  'sensitivity.storage': { label: "change in the reservoir's storage", unit: 'percent' },
+  'sensitivity.hydrographVolume': { label: "change in the hydrograph's volume (same peak)", unit: 'percent' },
 } satisfies Record<string, FieldEntry> as Record<string, FieldEntry> & Record<CaseFieldPattern, FieldEntry>;
 
 /** Names the engine uses for its own checks, read as the case fields they concern. */

@@ -13,8 +13,8 @@ export interface FieldWords {
 }
 
 const UNITS: Record<'SI' | 'US', Record<UnitKind, string | null>> = {
-  SI: { length: 'm', level: 'm above datum', depth: 'm above the bed', discharge: 'm³/s', slope: 'm/m', percent: '%', years: 'years', none: null },
-  US: { length: 'ft', level: 'ft above datum', depth: 'ft above the bed', discharge: 'ft³/s', slope: 'ft/ft', percent: '%', years: 'years', none: null },
+  SI: { length: 'm', level: 'm above datum', depth: 'm above the bed', discharge: 'm³/s', slope: 'm/m', percent: '%', years: 'years', area: 'm²', volume: 'm³', hours: 'hours from the start', none: null },
+  US: { length: 'ft', level: 'ft above datum', depth: 'ft above the bed', discharge: 'ft³/s', slope: 'ft/ft', percent: '%', years: 'years', area: 'ft²', volume: 'ft³', hours: 'hours from the start', none: null },
 };
 
 /** `events[0].discharge`, `reach.0.distanceUpstream` or `['events', 0, 'discharge']` as segments. */

@@ -7,6 +7,7 @@ import { initLetter } from './models/letter';
 import { initOutboundMessage } from './models/outbound-message';
 import { initOutboxMessage } from './models/outbox-message';
 import { initParcel } from './models/parcel';
+import { initParcelPlan } from './models/parcel-plan';
 import { initReview } from './models/review';
 import { initRevision } from './models/revision';
 import { initScheme } from './models/scheme';
@@ -21,7 +22,7 @@ const initialised = new WeakSet<Sequelize>();
 export function database(): Sequelize {
   const sequelize = getSequelize();
   if (!initialised.has(sequelize)) {
-    for (const init of [initUser, initInvitation, initScheme, initRevision, initReview, initCertificate, initUpload, initParcel, initLetter, initOutboxMessage, initOutboundMessage, initAuditEvent, initSignInAttempt]) {
+    for (const init of [initUser, initInvitation, initScheme, initRevision, initReview, initCertificate, initUpload, initParcel, initParcelPlan, initLetter, initOutboxMessage, initOutboundMessage, initAuditEvent, initSignInAttempt]) {
       init(sequelize);
     }
     initialised.add(sequelize);
@@ -33,10 +34,11 @@ export { closeSequelize } from './sequelize';
 export { AuditEvent } from './models/audit-event';
 export { Certificate } from './models/certificate';
 export { Invitation } from './models/invitation';
-export { Letter, LetterBatch, LetterResponse, LetterTemplate } from './models/letter';
+export { Letter, LetterBatch, LetterReminder, LetterResponse, LetterResponseEdit, LetterTemplate } from './models/letter';
 export { OutboundMessage } from './models/outbound-message';
 export { OutboxMessage } from './models/outbox-message';
 export { Parcel, ParcelRegister } from './models/parcel';
+export { ParcelPlan } from './models/parcel-plan';
 export { Review, ReviewComment } from './models/review';
 export { Revision } from './models/revision';
 export { Scheme } from './models/scheme';

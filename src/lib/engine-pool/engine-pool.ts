@@ -13,15 +13,18 @@ import type { EngineTask } from './engine-worker';
 import { caseTooLarge, caseTooSlow } from './too-large';
 
 // The engine is CPU-bound and synchronous: on the request thread one large case would hold every other request.
-// So it runs on worker threads, one per core by default, with a bounded queue and a time limit per job. The workers run
-// at a lower scheduling priority (nice), so that with every core busy the request thread still gets the CPU first.
+// So it runs on worker threads, by default one per core but one (at least one), with a bounded queue and a time limit
+// per job, at a lower scheduling priority (nice). One core is left to the request thread, so that with the engine
+// saturated quick requests need not win the CPU back from the workers: on two cores the Harrowfield check takes some
+// 15 ms of engine time, while the portal answers an evaluation at a few tens a second, so one worker keeps up.
 
 const positiveInteger = (text: string | undefined) => (text && /^\d+$/.test(text) && Number(text) > 0 ? Number(text) : undefined);
 
-const THREADS = positiveInteger(process.env.ENGINE_THREADS) ?? os.availableParallelism();
+const THREADS = positiveInteger(process.env.ENGINE_THREADS) ?? Math.max(1, os.availableParallelism() - 1);
 /** Counted from the moment a worker starts the job, not from when it joined the queue. */
 export const ENGINE_TIME_LIMIT_MS = positiveInteger(process.env.ENGINE_TIME_LIMIT_MS) ?? 30_000;
-const QUEUE_LIMIT = positiveInteger(process.env.ENGINE_QUEUE_LIMIT) ?? THREADS * 32;
+// 32 cases waiting per core, as when every core had a worker: fewer workers must not turn more callers away.
+const QUEUE_LIMIT = positiveInteger(process.env.ENGINE_QUEUE_LIMIT) ?? os.availableParallelism() * 32;
 const RETRY_AFTER_SECONDS = 5;
 const WORKER_NICE_INCREMENT = 10;
 

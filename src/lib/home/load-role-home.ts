@@ -2,6 +2,8 @@ import 'server-only';
 import { Op, type WhereOptions } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { AuditEvent, Certificate, Invitation, Letter, Revision, Scheme, User, database } from '@/lib/db';
+import { longDate } from '@/lib/dates/calendar-dates';
+import { type FollowUpLetter, listFollowUp } from '@/lib/letters/list-follow-up';
 
 export interface HomeItem {
   id: string;
@@ -43,11 +45,15 @@ export async function loadRoleHome(user: SessionUser): Promise<RoleHome> {
     case 'checker':
       return { sections: [{ heading: 'Checks to do', empty: 'No revision is waiting for your check.', items: await revisionItems({ status: 'submitted', [Op.or]: [{ checkerId: user.id }, { checkerId: null }] }, user.id, (id) => `/checks/${id}`) }] };
     case 'liaison': {
-      const queued = await Letter.count({ where: { status: ['queued', 'failed'] } });
+      const queued = await Letter.count({ where: { status: ['queued', 'failed', 'to-post'] } });
+      const followUp = await listFollowUp();
+      const item = (f: FollowUpLetter): HomeItem => ({ id: f.letterId, title: `${f.schemeReference} ${f.parcelReference}: ${f.ownerName}`, detail: `Response due ${longDate(f.dueOn)}. Open the letter to log a response or make a reminder.`, status: f.standing === 'overdue' ? 'overdue' : 'due soon', href: `/liaison/${f.schemeId}/letters/${f.letterId}` });
       return {
         sections: [
+          { heading: 'Letters overdue for a response', empty: 'No letter is past its response deadline.', items: followUp.filter((f) => f.standing === 'overdue').map(item) },
+          { heading: 'Responses due within a week', empty: 'No response is due within a week.', items: followUp.filter((f) => f.standing === 'due-soon').map(item) },
           { heading: 'Certified revisions with landowners to inform', empty: 'No certified revision yet.', items: await revisionItems({ status: 'countersigned' }, undefined, (_id, schemeId) => `/liaison/${schemeId}`) },
-          { heading: 'Letters to send', empty: 'No letter is waiting to be sent.', items: queued ? [{ id: 'queued', title: `${queued} letter(s) queued or failed`, detail: 'Open the scheme’s letters to send them.', status: 'queued' }] : [] },
+          { heading: 'Letters to send', empty: 'No letter is waiting to be sent.', items: queued ? [{ id: 'queued', title: `${queued} letter(s) queued, failed or to post`, detail: 'Open the scheme’s letters to send or post them.', status: 'queued' }] : [] },
         ],
       };
     }
@@ -56,7 +62,7 @@ export async function loadRoleHome(user: SessionUser): Promise<RoleHome> {
       return { sections: [{ heading: 'Certificates to download', empty: 'No certificate has been issued yet.', items: certificates.map((c) => ({ id: c.id, title: c.number, detail: `Issued ${c.issuedAt.slice(0, 10)}`, status: c.status, href: `/api/certificates/${c.id}/pdf`, download: true })) }] };
     }
     case 'admin': {
-      const invitations = await Invitation.findAll({ where: { acceptedAt: null }, order: [['createdAt', 'DESC']], limit: 20 });
+      const invitations = await Invitation.findAll({ where: { acceptedAt: null, cancelledAt: null }, order: [['createdAt', 'DESC']], limit: 20 });
       const events = await AuditEvent.findAll({ order: [['id', 'DESC']], limit: 8 });
       return {
         sections: [

@@ -3,7 +3,8 @@ import type { CaseInput } from '@/lib/validation/case-schema';
 import type { ControlAdjustments } from './case-control';
 import type { CaseResult, EventResult } from './case-result';
 import { sizeCrest } from './design/crest-sizing';
-import { type Perturbation, sensitivity } from './design/sensitivity';
+import { type Perturbation, routedPlan, type SensitivityPercentages, sensitivity } from './design/sensitivity';
+import type { RoutingFactors } from './routing/event-routing';
 import { InvalidInputError } from './errors';
 import { type ReachModel, reachModel } from './case-reach';
 
@@ -12,6 +13,8 @@ export interface RunOptions {
   manningFactor: number;
   dischargeFactor: number;
   skipSelfCheck: boolean;
+  /** Storage and hydrograph-volume factors of a sensitivity run; default 1. */
+  routingFactors?: RoutingFactors;
   /** Given, the events are evaluated largest flow first and only until one does not hold (a yes-or-no question). */
   holds?: (event: EventResult) => boolean;
 }
@@ -19,7 +22,7 @@ export interface RunOptions {
 /** Evaluates every event of `input` (SI) with the options; the evaluator's own loop. */
 export type CaseRunner = (input: CaseInput, opts: RunOptions) => EventResult[];
 
-const DEFAULT_SENSITIVITY = { manningN: 20, discharge: 20, coefficient: 10 };
+const DEFAULT_SENSITIVITY: SensitivityPercentages = { manningN: 20, discharge: 20, coefficient: 10, storage: 20, hydrographVolume: 20 };
 
 const QUICK: RunOptions = { adjust: {}, manningFactor: 1, dischargeFactor: 1, skipSelfCheck: true };
 
@@ -77,13 +80,24 @@ export function leastMarginOf(events: readonly EventResult[]): { margin: number;
   return least;
 }
 
-const PERTURBATIONS = (p: { manningN: number; discharge: number; coefficient: number }) => [
+const PERTURBATIONS = (p: SensitivityPercentages, routed: boolean): Perturbation[] => [
   { manningFactor: 1 + p.manningN / 100, dischargeFactor: 1, coefficientFactor: 1 },
   { manningFactor: 1 - p.manningN / 100, dischargeFactor: 1, coefficientFactor: 1 },
   { manningFactor: 1, dischargeFactor: 1 + p.discharge / 100, coefficientFactor: 1 },
   { manningFactor: 1, dischargeFactor: 1, coefficientFactor: 1 + p.coefficient / 100 },
   { manningFactor: 1, dischargeFactor: 1, coefficientFactor: 1 - p.coefficient / 100 },
+  ...(routed ? routedPlan(p).map(([, perturbation]) => perturbation) : []),
 ];
+
+/** The run options of a perturbation. */
+function perturbedRun(p: Perturbation): Pick<RunOptions, 'manningFactor' | 'dischargeFactor' | 'routingFactors'> {
+  return { manningFactor: p.manningFactor, dischargeFactor: p.dischargeFactor, routingFactors: { storage: p.storageFactor ?? 1, hydrographVolume: p.hydrographVolumeFactor ?? 1 } };
+}
+
+/** Whether any event of the case is routed through a reservoir. */
+export function hasRoutedEvents(input: CaseInput): boolean {
+  return input.reservoir !== undefined && input.events.some((e) => e.hydrograph !== undefined);
+}
 
 /** The highest sill, or the shortest crest, for which every limit passes in every event (with the minimum margin, and robustly if asked). */
 export function crestSizing(input: CaseInput, run: CaseRunner): CaseResult['sizing'] {
@@ -104,8 +118,8 @@ export function crestSizing(input: CaseInput, run: CaseRunner): CaseResult['sizi
     if (!holds(events)) return false;
     passingRuns.set(value, events);
     if (!sizing.robust) return true;
-    return PERTURBATIONS(percentages).every((p) =>
-      holds(run(input, { ...QUICK, adjust: { ...adjust, coefficientMultiplier: p.coefficientFactor }, manningFactor: p.manningFactor, dischargeFactor: p.dischargeFactor, holds: eventHolds })),
+    return PERTURBATIONS(percentages, hasRoutedEvents(input)).every((p) =>
+      holds(run(input, { ...QUICK, adjust: { ...adjust, coefficientMultiplier: p.coefficientFactor }, ...perturbedRun(p), holds: eventHolds })),
     );
   };
   const result = sizeCrest({ passes, lower: range.lower, upper: range.upper, increment: sizing.increment, direction: sizing.vary === 'sillHeight' ? 'highest-passing' : 'lowest-passing' });
@@ -125,14 +139,14 @@ export function caseSensitivity(input: CaseInput, events: readonly EventResult[]
   const eventOnly: CaseInput = { ...input, events: [input.events[index]] };
   const runOne = (p: Perturbation) => {
     // The unperturbed run is the governing event itself, already evaluated with the same design head.
-    const unperturbed = p.manningFactor === 1 && p.dischargeFactor === 1 && p.coefficientFactor === 1;
+    const unperturbed = p.manningFactor === 1 && p.dischargeFactor === 1 && p.coefficientFactor === 1 && (p.storageFactor ?? 1) === 1 && (p.hydrographVolumeFactor ?? 1) === 1;
     const [event] = unperturbed ? [events[index]] : run(eventOnly, {
       adjust: { coefficientMultiplier: p.coefficientFactor, ...(designHead !== undefined ? { designHead } : {}) },
-      manningFactor: p.manningFactor,
-      dischargeFactor: p.dischargeFactor,
+      ...perturbedRun(p),
       skipSelfCheck: true,
     });
     return { levelsAtLimits: event.limits.map((l) => l.waterLevel), extent: event.extent.distanceUpstream };
   };
-  return { ...sensitivity(runOne, percentages), event: events[index].name, percentages };
+  const routed = events[index].routing !== null && events[index].routing !== undefined;
+  return { ...sensitivity(runOne, percentages, { routed }), event: events[index].name, percentages };
 }

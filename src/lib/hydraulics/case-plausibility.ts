@@ -71,10 +71,24 @@ function structureFindings(input: CaseInput, model: ReachModel, words: LengthWor
   return [];
 }
 
+function reservoirFindings(input: CaseInput, model: ReachModel, words: LengthWords): string[] {
+  const reservoir = input.reservoir;
+  if (reservoir === undefined) return [];
+  const len = (m: Metres) => `${Number(words.toCaseUnits(m).toPrecision(6))} ${words.unit}`;
+  const findings: string[] = [];
+  if (reservoir.length !== undefined && reservoir.length > model.length) {
+    findings.push(`reservoir.length: the reservoir (${len(reservoir.length)}) runs beyond the upstream end of the reach (${len(model.length)}); every limit is then checked against the peak reservoir level.`);
+  }
+  if (reservoir.startLevel !== undefined && input.control.type === 'weir' && reservoir.startLevel > model.bedLevelAtControl + input.control.sillHeight) {
+    findings.push(`reservoir.startLevel: the flood starts with the reservoir above the crest (${len(reservoir.startLevel)} against a crest at ${len(model.bedLevelAtControl + input.control.sillHeight)}), already spilling; check that this is meant.`);
+  }
+  return findings;
+}
+
 /** Plausibility of the case as a whole: throws on what cannot be, returns warnings for what is unusual. */
 export function casePlausibility(input: CaseInput, model: ReachModel, words: LengthWords = SI_WORDS): string[] {
   limitsWithinReach(input, model.length, words);
-  const warnings = [...eventWarnings(input), ...structureFindings(input, model, words)];
+  const warnings = [...eventWarnings(input), ...structureFindings(input, model, words), ...reservoirFindings(input, model, words)];
   if (input.control.type === 'weir' && input.control.tailwaterLevel !== undefined) {
     warnings.push('control.tailwaterLevel is the old name of control.tailwaterDepth (it always held a depth above the bed); it was read as the depth. Rename it in the case file.');
   }

@@ -4,9 +4,10 @@ import { unitScale } from './case-units';
 import type { RunResult } from './design/sensitivity';
 import type { Inundation, InundationComparison } from './impact/inundation';
 import type { ProfilePoint } from './profiles/profile-point';
+import { routingToUS } from './routing/routing-result-units';
 import type { ValidityCheck } from './weirs';
 
-interface Back {
+export interface Back {
   length: (m: number) => number;
   discharge: (q: number) => number;
   weirCoefficient: (c: number) => number;
@@ -95,6 +96,7 @@ function eventBack(e: EventResult, b: Back): EventResult {
       margin: L(l.margin),
     })),
     leastMargin: e.leastMargin === null ? null : L(e.leastMargin),
+    routing: e.routing ? routingToUS(e.routing, b) : null,
   };
 }
 

@@ -4,9 +4,10 @@ import type { LimitCheck } from './impact/flood-limits';
 import type { InundationComparison } from './impact/inundation';
 import type { CrestSizingResult } from './design/crest-sizing';
 import type { Robustness } from './design/robustness';
-import type { SensitivityReport } from './design/sensitivity';
+import type { SensitivityPercentages, SensitivityReport } from './design/sensitivity';
 import type { ProfilePoint, ProfileStop, RefinementReport, SelfCheckReport } from './profiles/profile-point';
 import type { ProfileType } from './profiles/profile-type';
+import type { RoutingResult } from './routing/routing-result';
 import type { SlopeClass } from './slope-class';
 import type { CubicMetresPerSecond, Metres } from './units';
 import type { CoefficientForm, SubmergenceState, ValidityCheck, WeirKind } from './weirs';
@@ -89,6 +90,11 @@ export interface EventResult {
   afflux: { atControl: Metres; max: Metres; min: Metres };
   extent: ExtentOfImpact;
   jump: { distanceUpstream: Metres; upstreamDepth: Metres; downstreamDepth: Metres } | null;
+  /**
+   * The flood routed through the reservoir; null for an event checked at its steady peak discharge. Results stored
+   * before routing existed lack the field: read undefined as null.
+   */
+  routing: RoutingResult | null;
   /** Null when the case gives no bank height or bank levels to check against. */
   inundation: InundationComparison | null;
   limits: LimitResult[];
@@ -122,5 +128,5 @@ export interface CaseResult {
     | null;
   /** Whether the pass holds with the minimum margin and under every sensitivity run. */
   robustness: Robustness;
-  sensitivity: (SensitivityReport & { event: string; percentages: { manningN: number; discharge: number; coefficient: number } }) | null;
+  sensitivity: (SensitivityReport & { event: string; percentages: SensitivityPercentages }) | null;
 }

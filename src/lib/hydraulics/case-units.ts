@@ -65,6 +65,27 @@ function controlToSI(control: CaseInput['control'], k: UnitScale): CaseInput['co
   };
 }
 
+type CaseEvent = CaseInput['events'][number];
+type Reservoir = NonNullable<CaseInput['reservoir']>;
+
+/** Hydrograph discharges to SI; its times stay in hours, as the case file gives them. */
+function eventToSI(e: CaseEvent, k: UnitScale): CaseEvent {
+  const hydrograph = e.hydrograph?.kind === 'table' ? { ...e.hydrograph, points: e.hydrograph.points.map((p) => ({ ...p, discharge: p.discharge * k.discharge })) } : e.hydrograph;
+  return { ...e, discharge: e.discharge * k.discharge, ...(hydrograph ? { hydrograph } : {}) };
+}
+
+function reservoirToSI(r: Reservoir, k: UnitScale): Reservoir {
+  const L = k.length;
+  const s = r.storage;
+  const storage: Reservoir['storage'] =
+    s.kind === 'constant-area'
+      ? { ...s, area: s.area * L * L }
+      : s.kind === 'level-area'
+        ? { ...s, rows: s.rows.map((row) => ({ level: row.level * L, area: row.area * L * L })) }
+        : { ...s, rows: s.rows.map((row) => ({ level: row.level * L, volume: row.volume * L * L * L })) };
+  return { ...r, storage, startLevel: scaled(r.startLevel, L), length: scaled(r.length, L) };
+}
+
 /** The same case in SI units (returned unchanged when it is SI already). Slopes, n, Cd and percentages need no change. */
 export function caseToSI(input: CaseInput): CaseInput {
   if (input.units === 'SI') return input;
@@ -74,7 +95,8 @@ export function caseToSI(input: CaseInput): CaseInput {
     ...input,
     units: 'SI',
     reach: reachToSI(input.reach, k),
-    events: input.events.map((e) => ({ ...e, discharge: e.discharge * k.discharge })),
+    events: input.events.map((e) => eventToSI(e, k)),
+    reservoir: input.reservoir && reservoirToSI(input.reservoir, k),
     control: controlToSI(input.control, k),
     existingControl: input.existingControl && { ...input.existingControl, depth: input.existingControl.depth * L },
     impactThreshold: scaled(input.impactThreshold, L),

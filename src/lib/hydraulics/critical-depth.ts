@@ -1,5 +1,5 @@
 // Critical depth: the depth at which the Froude number αQ²T/(gA³) equals 1.
-import { DEEPEST_OPEN_DEPTH, downwardBracket, finiteDepthGrid, hasBreakpoints, openDepthBracket } from './depth-brackets';
+import { DEEPEST_OPEN_DEPTH, breakpointDepthGrid, downwardBracket, finiteDepthGrid, hasBreakpoints, openDepthBracket } from './depth-brackets';
 import { NoPhysicalSolutionError, requirePositive } from './errors';
 import { specificEnergy } from './flow-properties';
 import { type Bracket, rootInBracket, signChangeBrackets } from './root-scan';
@@ -53,20 +53,19 @@ export function criticalResidual(section: FlowSection, discharge: CubicMetresPer
   };
 }
 
-function finiteSectionBrackets(section: FlowSection, residual: (y: Metres) => number): Bracket[] {
-  const grid = finiteDepthGrid(section);
+function finiteSectionBrackets(section: FlowSection, residual: (y: Metres) => number, grid: readonly Metres[] = finiteDepthGrid(section)): Bracket[] {
   const shallowest = residual(grid[0]) >= 0 ? downwardBracket(residual, grid[0]) : null;
   return [...(shallowest ? [shallowest] : []), ...signChangeBrackets(residual, grid)];
 }
 
 /** Every root of the residual in ascending order; compound sections may have several. Shared with the jump solver. */
-export function residualRoots(section: FlowSection, residual: (y: Metres) => number, isRoot: (y: Metres) => boolean, field: string): Metres[] {
+export function residualRoots(section: FlowSection, residual: (y: Metres) => number, isRoot: (y: Metres) => boolean, field: string, grid?: readonly Metres[]): Metres[] {
   if (section.maxDepth === Infinity) {
     const bracket = openDepthBracket(residual, field);
     if (bracket === null) throw new NoPhysicalSolutionError(field, 'depth-out-of-range', `no critical depth below ${DEEPEST_OPEN_DEPTH} m: check the discharge and its units`);
     return [rootInBracket(residual, bracket, field)];
   }
-  const roots = finiteSectionBrackets(section, residual).map((bracket) => rootInBracket(residual, bracket, field));
+  const roots = finiteSectionBrackets(section, residual, grid).map((bracket) => rootInBracket(residual, bracket, field));
   return [...new Set(roots)].filter(isRoot).sort((a, b) => a - b);
 }
 
@@ -80,7 +79,8 @@ export function criticalDepths(section: FlowSection, discharge: CubicMetresPerSe
   let roots = known.get(discharge);
   if (roots === undefined) {
     const isRoot = (y: Metres) => isCriticalRoot(section, y, discharge, false);
-    known.set(discharge, (roots = residualRoots(section, criticalResidual(section, discharge), isRoot, dischargeField)));
+    const grid = hasBreakpoints(section) ? breakpointDepthGrid(section) : undefined;
+    known.set(discharge, (roots = residualRoots(section, criticalResidual(section, discharge), isRoot, dischargeField, grid)));
   }
   if (roots.length === 0) {
     throw new NoPhysicalSolutionError(

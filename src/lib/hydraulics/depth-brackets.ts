@@ -30,6 +30,53 @@ export function finiteDepthGrid(section: FlowSection, from: Metres = 0, to: Metr
 
 const wholeSectionGrids = new WeakMap<FlowSection, readonly Metres[]>();
 
+/** The widest gap a tabulated section's scan leaves between two depths, as a fraction of the section's depth. */
+const WIDEST_TABULATED_GAP = 1 / 32;
+
+/**
+ * For a section whose geometry is tabulated between breakpoints (a survey): its shallowest depth, every breakpoint,
+ * a point just above each where the top width or the perimeter jumps (every breakpoint when the section does not
+ * say), and its top, with points put in wherever two lie more than WIDEST_TABULATED_GAP of the depth apart. Between
+ * two breakpoints every piece of ground is straight, so A, T and P are polynomials in the depth with no jump
+ * (surveyed-table.ts) and a residual made of them is smooth: its roots show as sign changes between grid points,
+ * except two roots closer together than the gap (a Froude number that rises above 1 and falls back within one
+ * straight stretch of ground), which cancel, as two roots within one step of the former 400-step scan did. Why:
+ * that scan cost some 450 evaluations per section; a survey has a few dozen breakpoints.
+ */
+export function breakpointDepthGrid(section: FlowSection & { breakpointDepths: readonly Metres[]; jumpDepths?: readonly Metres[] }): readonly Metres[] {
+  let grid = breakpointGrids.get(section);
+  if (grid === undefined) {
+    const top = section.maxDepth;
+    const nudge = top * SHALLOWEST_FRACTION;
+    const depths: Metres[] = [nudge, top];
+    for (const d of section.breakpointDepths) if (d > 0 && d < top) depths.push(d);
+    for (const d of section.jumpDepths ?? section.breakpointDepths) if (d > 0 && d < top) depths.push(Math.min(top, d + nudge));
+    grid = withGapsFilled(sortedDistinct(depths), top * WIDEST_TABULATED_GAP);
+    breakpointGrids.set(section, grid);
+  }
+  return grid;
+}
+
+function withGapsFilled(depths: readonly Metres[], widestGap: Metres): Metres[] {
+  const filled: Metres[] = [depths[0]];
+  for (let i = 1; i < depths.length; i++) {
+    const pieces = Math.ceil((depths[i] - depths[i - 1]) / widestGap);
+    for (let k = 1; k < pieces; k++) filled.push(depths[i - 1] + ((depths[i] - depths[i - 1]) * k) / pieces);
+    filled.push(depths[i]);
+  }
+  return filled;
+}
+
+const breakpointGrids = new WeakMap<FlowSection, readonly Metres[]>();
+
+function sortedDistinct(depths: Metres[]): Metres[] {
+  // A typed array sorts numbers without a comparator call per comparison; equal neighbours are then dropped.
+  const sorted = Float64Array.from(depths).sort();
+  const distinct: Metres[] = [];
+  for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) distinct.push(sorted[i]);
+  return distinct;
+}
+
 function depthGrid(section: FlowSection, from: Metres, to: Metres): Metres[] {
   const span = to - from;
   const depths: Metres[] = [to];
@@ -40,11 +87,7 @@ function depthGrid(section: FlowSection, from: Metres, to: Metres): Metres[] {
     const inside = section.breakpointDepths.filter((d) => d > from && d < to);
     depths.push(...inside, ...inside.map((d) => Math.min(to, d + span * SHALLOWEST_FRACTION)));
   }
-  // A typed array sorts numbers without a comparator call per comparison; equal neighbours are then dropped.
-  const sorted = Float64Array.from(depths).sort();
-  const distinct: Metres[] = [];
-  for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) distinct.push(sorted[i]);
-  return distinct;
+  return sortedDistinct(depths);
 }
 
 /**

@@ -19,7 +19,7 @@ const runEvents: CaseRunner = (input, opts) => {
   const designDischarges = input.events.map((e) => e.discharge * (1 + (e.climateChangeAllowance ?? 0) / 100) * opts.dischargeFactor);
   const designHead = opts.adjust.designHead ?? defaultDesignHead(input.control, model.controlSection, Math.max(...designDischarges), opts.adjust);
   const adjust = { ...opts.adjust, ...(designHead !== undefined ? { designHead } : {}) };
-  const evaluate = (i: number) => evaluateEvent(input.events[i], i, { input, model, adjust, dischargeFactor: opts.dischargeFactor, skipSelfCheck: opts.skipSelfCheck });
+  const evaluate = (i: number) => evaluateEvent(input.events[i], i, { input, model, adjust, dischargeFactor: opts.dischargeFactor, skipSelfCheck: opts.skipSelfCheck, routingFactors: opts.routingFactors });
   const holds = opts.holds;
   if (holds === undefined) return input.events.map((_, i) => evaluate(i));
   // The largest flow is the likeliest to fail, so it goes first; the rest are needed only if it holds.
@@ -43,6 +43,9 @@ function governingEvent(events: readonly EventResult[]): CaseResult['governingEv
 function caseWarnings(input: CaseInput, events: readonly EventResult[], plausibility: readonly string[]): string[] {
   const warnings: string[] = [...plausibility];
   if (input.limits.length === 0) warnings.push('No limits were given: the verdict "pass" only means that nothing was checked against a limit.');
+  if (input.reservoir !== undefined && !input.events.some((e) => e.hydrograph !== undefined)) {
+    warnings.push("A reservoir was given but no event has an inflow hydrograph, so every event was checked at its steady peak discharge, without the reservoir's storage.");
+  }
   const seen = new Set<string>();
   for (const event of events) {
     for (const w of event.warnings) {

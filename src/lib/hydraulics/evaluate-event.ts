@@ -3,12 +3,12 @@ import type { CaseInput } from '@/lib/validation/case-schema';
 import type { ControlAdjustments } from './case-control';
 import type { ReachModel } from './case-reach';
 import type { ControlResult, EventResult, WithoutSchemeResult } from './case-result';
-import { criticalDepth } from './critical-depth';
-import { InvalidInputError, NoPhysicalSolutionError } from './errors';
+import { channelDepths } from './channel-depths';
 import { withSchemeProfile, withoutSchemeLevels } from './event-profiles';
 import { type HeldControl, heldControl } from './event-control';
 import { eventImpact } from './event-impact';
-import { normalDepth } from './normal-depth';
+import { routedHeldControl } from './event-routed-control';
+import { type RoutingFactors, routeCaseEvent } from './routing/event-routing';
 import type { GvfProfile, ProfilePoint } from './profiles/profile-point';
 import type { WithoutScheme } from './profiles/without-scheme';
 import { profileType } from './profiles/profile-type';
@@ -21,6 +21,8 @@ export interface EventContext {
   adjust: ControlAdjustments;
   dischargeFactor: number;
   skipSelfCheck: boolean;
+  /** Storage and hydrograph-volume factors of a sensitivity run (default 1). */
+  routingFactors?: RoutingFactors;
 }
 
 type CaseEvent = CaseInput['events'][number];
@@ -30,20 +32,6 @@ const m = (x: Metres) => `${x.toFixed(3)} m`;
 /** Normal flow along the reach as a profile: nothing to step, nothing to refine. */
 function uniformFlowProfile(points: ProfilePoint[], type: GvfProfile['profileType']): GvfProfile {
   return { points, stoppedBy: 'reach-end', profileType: type, jump: null, refinement: { stepsUsed: 0, extentChangeOnHalving: 0, converged: true }, selfCheck: null, warnings: [] };
-}
-
-function withoutSchemeStart(ctx: EventContext, yn: Metres | null, yc: Metres): { depth: Metres; by: WithoutSchemeResult['controlBy'] } {
-  const existing = ctx.input.existingControl?.depth;
-  if (existing !== undefined) {
-    if (existing < yc) {
-      throw new NoPhysicalSolutionError('existingControl.depth', 'control-below-critical', `the existing control depth ${m(existing)} is below the critical depth ${m(yc)}; a downstream control cannot hold the water there`);
-    }
-    return { depth: existing, by: 'existing-control' };
-  }
-  if (yn === null) {
-    throw new InvalidInputError('existingControl', 'is required on a horizontal or adverse reach: without normal depth there is no default level without the scheme; give the existing depth at the control');
-  }
-  return { depth: yn, by: 'normal-depth' };
 }
 
 /**
@@ -78,17 +66,20 @@ function controlExplanation(input: CaseInput, held: HeldControl, withoutDepth: M
 export function evaluateEvent(event: CaseEvent, index: number, ctx: EventContext): EventResult {
   const { model, input } = ctx;
   const allowance = event.climateChangeAllowance ?? 0;
-  const discharge = event.discharge * (1 + allowance / 100) * ctx.dischargeFactor;
+  const dischargeScale = (1 + allowance / 100) * ctx.dischargeFactor;
+  const routed = routeCaseEvent(event, index, { input, model, adjust: ctx.adjust, dischargeScale, factors: ctx.routingFactors ?? { storage: 1, hydrographVolume: 1 }, skipSelfCheck: ctx.skipSelfCheck });
+  const routing = routed?.result ?? null;
+  // A routed event's backwater carries the peak inflow (conservative), from the peak reservoir level.
+  const discharge = routing ? routing.inflowPeak.discharge : event.discharge * dischargeScale;
   const section = model.controlSection;
-  const dischargeField = `events[${index}].discharge`;
-  const yc = criticalDepth(section, discharge, { dischargeField, field: model.kind === 'prismatic' ? 'reach.section' : 'reach.sections[0]' });
-  const yn = model.bedSlope > 0 ? normalDepth(section, discharge, model.bedSlope, { dischargeField, field: 'reach.bedSlope' }) : null;
+  const depths = channelDepths(input, model, discharge, `events[${index}].discharge`);
+  const { critical: yc, normal: yn, without } = depths;
   const slopeClass = classifySlope(model.bedSlope, yn, yc);
   const warnings: string[] = [];
   if (yn === null) warnings.push(`The bed is ${slopeClass}: uniform flow cannot exist, so normalDepth is reported as 0, meaning none.`);
 
-  const without = withoutSchemeStart(ctx, yn, yc);
-  const held = heldControl(input, section, discharge, ctx.adjust, without.depth, yc, yn);
+  const held = routing ? routedHeldControl(input, model, ctx.adjust, routing, depths) : heldControl(input, section, discharge, ctx.adjust, without.depth, yc, yn);
+  if (routed) warnings.push(...routed.warnings);
   warnings.push(...held.warnings);
   const { structure, startDepth } = held;
   const explanation = controlExplanation(input, held, without.depth);
@@ -112,7 +103,7 @@ export function evaluateEvent(event: CaseEvent, index: number, ctx: EventContext
   }
   warnings.push(...profile.warnings);
   if (levels.profile && levels.profile !== profile) warnings.push(...levels.profile.warnings.map((w) => `Without the scheme: ${w}`));
-  const impact = eventImpact(input, model, profile, levels, warnings);
+  const impact = eventImpact(input, model, profile, levels, warnings, routing && input.reservoir?.length !== undefined ? { length: input.reservoir.length, peakLevel: routing.peakLevel.level } : null);
 
   const control: ControlResult = {
     type: input.control.type,
@@ -152,6 +143,7 @@ export function evaluateEvent(event: CaseEvent, index: number, ctx: EventContext
     },
     ...impact,
     jump: profile.jump,
+    routing,
     warnings,
   };
 }

@@ -40,6 +40,13 @@ export { extentOfImpact } from './impact/extent-of-impact';
 export { inundation, inundationComparison } from './impact/inundation';
 export { checkLimits } from './impact/flood-limits';
 
+// Reservoir routing: a flood hydrograph through a level pool (times in s, volumes in m³, levels in m above datum)
+export { routeReservoir } from './routing/route-reservoir';
+export { storageCurve, type StorageSpec } from './routing/storage-curve';
+export { tabulatedOutflowRating, type OutflowRating } from './routing/outflow-rating';
+export { unitShapeHydrograph, NRCS_SHAPE_SOURCE } from './routing/nrcs-unit-hydrograph';
+export type { RoutingResult, RoutingStep } from './routing/routing-result';
+
 // Design: crest sizing and sensitivity
 export { sizeCrest } from './design/crest-sizing';
 export { sensitivity } from './design/sensitivity';

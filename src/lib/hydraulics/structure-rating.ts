@@ -46,7 +46,10 @@ export function structureRating(input: CaseInput): StructureRating {
   const k = unitScale(input.units);
   const model = reachModel(si.reach);
   const section = model.controlSection;
-  const design = si.events.map((e) => ({ name: e.name, discharge: e.discharge * (1 + (e.climateChangeAllowance ?? 0) / 100) }));
+  // Through a reservoir the structure passes the routed outflow, less than the inflow peak: such an event is marked at its
+  // inflow peak and says so, for the routed level is on the results sheet's routing part, not on a steady rating.
+  const routed = (e: CaseInput['events'][number]) => si.reservoir !== undefined && e.hydrograph !== undefined;
+  const design = si.events.map((e) => ({ name: routed(e) ? `${e.name} (peak inflow, before the storage)` : e.name, discharge: e.discharge * (1 + (e.climateChangeAllowance ?? 0) / 100) }));
   const designHead = defaultDesignHead(si.control, section, Math.max(...design.map((e) => e.discharge)));
   const adjust = designHead !== undefined ? { designHead } : {};
   const points = dischargesToRate(design.map((e) => e.discharge)).map((discharge): RatingPoint => {

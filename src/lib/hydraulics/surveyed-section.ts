@@ -21,10 +21,11 @@ export interface SurveyedSection extends FlowSection {
   readonly bankLevels: { left: Metres; right: Metres };
   /** Depths in (0, maxDepth] at which the ground changes slope; root scans put grid points there. */
   readonly breakpointDepths: readonly Metres[];
+  /** The breakpoint depths just above which the top width or the wetted perimeter jumps (flat ground starts to flood). */
+  readonly jumpDepths: readonly Metres[];
 }
 
 const SUB_AREAS = ['left', 'channel', 'right'] as const;
-type SubArea = (typeof SUB_AREAS)[number];
 type Point = ValidatedSurvey['points'][number];
 
 function withPointAt(points: Point[], station: Metres): Point[] {
@@ -40,11 +41,22 @@ function highestGroundAt(points: Point[], station: Metres): Metres {
   return points.reduce((highest, p) => (p.station === station ? Math.max(highest, p.elevation) : highest), -Infinity);
 }
 
-function subAreaOf(segment: GroundSegment, banks: ValidatedSurvey['banks']): SubArea {
+/** 0, 1 or 2: left overbank, channel, right overbank (the order of SUB_AREAS). */
+function subAreaOf(segment: GroundSegment, banks: ValidatedSurvey['banks']): number {
   const middle = (segment.x1 + segment.x2) / 2;
-  if (middle < banks.left) return 'left';
-  if (middle > banks.right) return 'right';
-  return 'channel';
+  if (middle < banks.left) return 0;
+  if (middle > banks.right) return 2;
+  return 1;
+}
+
+/** Distinct depths in (0, maxDepth] of the table's levels, ascending (the levels are every ground elevation, ascending). */
+function depthsOfLevels(levels: readonly Metres[], invertLevel: Metres, maxDepth: Metres): Metres[] {
+  const depths: Metres[] = [];
+  for (const level of levels) {
+    const depth = level - invertLevel;
+    if (depth > 0 && depth <= maxDepth && depth !== depths[depths.length - 1]) depths.push(depth);
+  }
+  return depths;
 }
 
 /**
@@ -70,19 +82,18 @@ export function surveyedSection(spec: SurveyedSectionSpec, opts: { field?: strin
   const field = opts.field ?? 'reach.section';
   const survey = validatedSurvey(spec, field);
   const ground = withPointAt(withPointAt(survey.points, survey.banks.left), survey.banks.right);
-  const segments = ground.slice(1).map((p, i) => {
-    const segment: GroundSegment = { x1: ground[i].station, z1: ground[i].elevation, x2: p.station, z2: p.elevation };
-    return { segment, subArea: subAreaOf(segment, survey.banks) };
-  });
-  const segmentsBySubArea = Object.fromEntries(
-    SUB_AREAS.map((subArea) => [subArea, segments.filter((s) => s.subArea === subArea).map((s) => s.segment)]),
-  ) as Record<SubArea, GroundSegment[]>;
-  const invertLevel = ground.reduce((lowest, p) => Math.min(lowest, p.elevation), Infinity);
+  const segmentsBySubArea: GroundSegment[][] = [[], [], []];
+  let invertLevel = ground[0].elevation;
+  for (let i = 1; i < ground.length; i++) {
+    const segment: GroundSegment = { x1: ground[i - 1].station, z1: ground[i - 1].elevation, x2: ground[i].station, z2: ground[i].elevation };
+    segmentsBySubArea[subAreaOf(segment, survey.banks)].push(segment);
+    invertLevel = Math.min(invertLevel, ground[i].elevation);
+  }
   const lowerEndLevel = Math.min(ground[0].elevation, ground[ground.length - 1].elevation);
   const maxDepth = lowerEndLevel - invertLevel;
-  const breakpointDepths = [...new Set(ground.map((p) => p.elevation - invertLevel))].filter((d) => d > 0 && d <= maxDepth).sort((a, b) => a - b);
-
-  const table = new SurveyTable(SUB_AREAS.map((subArea) => segmentsBySubArea[subArea]));
+  const table = new SurveyTable(segmentsBySubArea);
+  const breakpointDepths = depthsOfLevels(table.levels, invertLevel, maxDepth);
+  const jumpDepths = depthsOfLevels(table.levels.filter((_, k) => table.jumpsAbove[k] === 1), invertLevel, maxDepth);
   const roughness = SUB_AREAS.map((subArea) => survey.roughness[subArea]);
   // Scratch for one evaluation at a time: the engine is synchronous, and nothing here calls back out.
   const parts: PieceValues[] = SUB_AREAS.map(() => ({ area: 0, wettedPerimeter: 0, topWidth: 0, firstMoment: 0 }));
@@ -122,6 +133,7 @@ export function surveyedSection(spec: SurveyedSectionSpec, opts: { field?: strin
     lowerEndLevel,
     bankLevels: { left: highestGroundAt(ground, survey.banks.left), right: highestGroundAt(ground, survey.banks.right) },
     breakpointDepths,
+    jumpDepths,
     stateAtLevel,
     stateAtDepth(depth: Metres): SectionState {
       requireDepth(depth);

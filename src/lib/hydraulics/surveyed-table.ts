@@ -22,50 +22,60 @@ export interface PieceValues {
 export class SurveyTable {
   /** Distinct ground elevations, ascending. */
   readonly levels: number[];
-  /** Per interval k (above levels[k]), per sub-area j at index 3k + j: the values just above levels[k] and the slopes. */
-  private readonly area: number[] = [];
-  private readonly moment: number[] = [];
-  private readonly width: number[] = [];
-  private readonly widthRate: number[] = [];
-  private readonly perimeter: number[] = [];
-  private readonly perimeterRate: number[] = [];
+  /** 1 where the top width or the wetted perimeter jumps just above levels[k] (flat ground starts to flood there). */
+  readonly jumpsAbove: number[];
+  /**
+   * Per interval k (above levels[k]), per sub-area j, from index 6(3k + j): area, first moment, top width, its rate,
+   * perimeter, its rate, the values just above levels[k]. One typed array: a refined reach builds a table for every
+   * interpolated section, and each typed array allocated costs far more than its numbers.
+   */
+  private readonly values: Float64Array;
 
   constructor(subAreas: readonly (readonly GroundSegment[])[]) {
     // Plain loops and a typed-array sort: a refined reach builds a table for every interpolated section.
-    const elevations: number[] = [];
-    for (const segments of subAreas) for (const s of segments) elevations.push(s.z1, s.z2);
-    const sorted = Float64Array.from(elevations).sort();
+    let segmentCount = 0;
+    for (const segments of subAreas) segmentCount += segments.length;
+    const sorted = new Float64Array(2 * segmentCount);
+    let filled = 0;
+    for (const segments of subAreas) {
+      for (const s of segments) {
+        sorted[filled++] = s.z1;
+        sorted[filled++] = s.z2;
+      }
+    }
+    sorted.sort();
     const levels: number[] = [];
     for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) levels.push(sorted[i]);
     this.levels = levels;
-    const index = new Map<number, number>();
-    for (let k = 0; k < levels.length; k++) index.set(levels[k], k);
     const count = levels.length;
+    this.values = new Float64Array(18 * count);
+    this.jumpsAbove = new Array<number>(count).fill(0);
+    // Per level: jumps in top width and perimeter, then changes in their rates (scratch, reset per sub-area).
+    const changes = new Float64Array(4 * count);
     const negligibleRise = 1e-13 * Math.max(levels[count - 1] - levels[0], Math.abs(levels[0]), Math.abs(levels[count - 1]), Number.MIN_VALUE);
-    subAreas.forEach((segments, j) => {
-      const jumpT = new Array<number>(count).fill(0);
-      const jumpP = new Array<number>(count).fill(0);
-      const rateT = new Array<number>(count).fill(0);
-      const rateP = new Array<number>(count).fill(0);
+    for (let j = 0; j < subAreas.length; j++) {
+      const segments = subAreas[j];
+      changes.fill(0);
       for (const { x1, z1, x2, z2 } of segments) {
-        const low = index.get(z1 <= z2 ? z1 : z2) as number;
-        const high = index.get(z1 <= z2 ? z2 : z1) as number;
+        // The index of a ground elevation in levels: one past the interval below it.
+        const low = this.interval(z1 <= z2 ? z1 : z2) + 1;
+        const high = this.interval(z1 <= z2 ? z2 : z1) + 1;
         const width = Math.abs(x2 - x1);
         const rise = Math.abs(z2 - z1);
         const length = Math.hypot(width, rise);
         if (rise === 0) {
-          jumpT[low] += width;
-          jumpP[low] += width;
+          changes[4 * low] += width;
+          changes[4 * low + 1] += width;
         } else if (rise <= negligibleRise || !Number.isFinite(length / rise)) {
           // A rise far below the precision of the levels (its slope would be all rounding): wholly wet just above its upper end.
-          jumpT[high] += width;
-          jumpP[high] += length;
+          changes[4 * high] += width;
+          changes[4 * high + 1] += length;
         } else {
           // A vertical wall (width 0) only adds perimeter, one metre per metre of rise.
-          rateT[low] += width / rise;
-          rateT[high] -= width / rise;
-          rateP[low] += length / rise;
-          rateP[high] -= length / rise;
+          changes[4 * low + 2] += width / rise;
+          changes[4 * high + 2] -= width / rise;
+          changes[4 * low + 3] += length / rise;
+          changes[4 * high + 3] -= length / rise;
         }
       }
       let area = 0;
@@ -75,19 +85,21 @@ export class SurveyTable {
       let widthRate = 0;
       let perimeterRate = 0;
       for (let k = 0; k < count; k++) {
-        width += jumpT[k];
-        perimeter += jumpP[k];
-        widthRate += rateT[k];
-        perimeterRate += rateP[k];
+        if (changes[4 * k] > 0 || changes[4 * k + 1] > 0) this.jumpsAbove[k] = 1;
+        width += changes[4 * k];
+        perimeter += changes[4 * k + 1];
+        widthRate += changes[4 * k + 2];
+        perimeterRate += changes[4 * k + 3];
         // Past the highest rise of this sub-area, rounding must not leave a slope behind.
         if (k === count - 1) widthRate = perimeterRate = 0;
-        const at = 3 * k + j;
-        this.area[at] = area;
-        this.moment[at] = moment;
-        this.width[at] = width;
-        this.widthRate[at] = widthRate;
-        this.perimeter[at] = perimeter;
-        this.perimeterRate[at] = perimeterRate;
+        const at = 6 * (3 * k + j);
+        const values = this.values;
+        values[at] = area;
+        values[at + 1] = moment;
+        values[at + 2] = width;
+        values[at + 3] = widthRate;
+        values[at + 4] = perimeter;
+        values[at + 5] = perimeterRate;
         if (k === count - 1) break;
         const s = levels[k + 1] - levels[k];
         moment += area * s + (width * s * s) / 2 + (widthRate * s * s * s) / 6;
@@ -95,7 +107,7 @@ export class SurveyTable {
         width = Math.max(0, width + widthRate * s);
         perimeter = Math.max(0, perimeter + perimeterRate * s);
       }
-    });
+    }
   }
 
   /** The interval holding `level`: the last k with levels[k] < level, or −1 at or below the lowest ground. */
@@ -118,14 +130,15 @@ export class SurveyTable {
       out.area = out.wettedPerimeter = out.topWidth = out.firstMoment = 0;
       return;
     }
-    const at = 3 * k + j;
+    const values = this.values;
+    const at = 6 * (3 * k + j);
     const s = level - this.levels[k];
-    const area = this.area[at];
-    const width = this.width[at];
-    const widthRate = this.widthRate[at];
+    const area = values[at];
+    const width = values[at + 2];
+    const widthRate = values[at + 3];
     out.area = area + width * s + (widthRate * s * s) / 2;
     out.topWidth = width + widthRate * s;
-    out.wettedPerimeter = this.perimeter[at] + this.perimeterRate[at] * s;
-    out.firstMoment = this.moment[at] + area * s + (width * s * s) / 2 + (widthRate * s * s * s) / 6;
+    out.wettedPerimeter = values[at + 4] + values[at + 5] * s;
+    out.firstMoment = values[at + 1] + area * s + (width * s * s) / 2 + (widthRate * s * s * s) / 6;
   }
 }

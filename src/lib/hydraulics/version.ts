@@ -1,2 +1,2 @@
-/** Version of the calculation engine, recorded with every result so that a certificate can be reproduced. */
-export const ENGINE_VERSION = '0.2.0';
+/** Version of the calculation engine, recorded with every result so that a certificate can be reproduced. 0.3.0: reservoir routing (every event result carries `routing`). */
+export const ENGINE_VERSION = '0.3.0';

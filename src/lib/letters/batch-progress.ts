@@ -4,17 +4,18 @@ import { Letter, LetterBatch, Parcel, Revision, database } from '@/lib/db';
 import type { LetterStatus } from '@/lib/db/models/letter';
 import { NotFoundError } from '@/lib/http/app-errors';
 import { requireSchemeLiaisonAccess } from '@/lib/parcels/scheme-liaison-access';
+import { emptyLetterCounts } from './letter-statuses';
 
 export interface BatchProgress {
   batchId: string;
   schemeId: string;
   revisionNumber: number;
   preliminary: boolean;
-  status: 'open' | 'sending' | 'complete';
+  status: 'open' | 'sending' | 'complete' | 'withdrawn';
   createdAt: string;
   total: number;
   counts: Record<LetterStatus, number>;
-  letters: { id: string; parcelReference: string; ownerName: string; recipientEmail: string | null; version: number; status: LetterStatus; failureReason: string | null; sentAt: string | null }[];
+  letters: { id: string; parcelReference: string; ownerName: string; recipientEmail: string | null; version: number; status: LetterStatus; failureReason: string | null; sentAt: string | null; postedOn: string | null; responseDueOn: string | null }[];
 }
 
 export async function loadBatch(batchId: string) {
@@ -31,7 +32,7 @@ export async function batchProgress({ user, batchId }: { user: SessionUser; batc
   const letters = await Letter.findAll({ where: { batchId }, order: [['createdAt', 'ASC'], ['id', 'ASC']] });
   const parcels = new Map((await Parcel.findAll({ where: { id: letters.map((l) => l.parcelId) } })).map((p) => [p.id, p]));
   const revision = await Revision.findByPk(batch.revisionId, { attributes: ['number'] });
-  const counts: Record<LetterStatus, number> = { queued: 0, sending: 0, sent: 0, failed: 0, acknowledged: 0, held: 0 };
+  const counts = emptyLetterCounts();
   for (const l of letters) counts[l.status as LetterStatus] += 1;
   return {
     batchId,
@@ -42,6 +43,6 @@ export async function batchProgress({ user, batchId }: { user: SessionUser; batc
     createdAt: batch.createdAt,
     total: letters.length,
     counts,
-    letters: letters.map((l) => ({ id: l.id, parcelReference: parcels.get(l.parcelId)?.reference ?? '?', ownerName: parcels.get(l.parcelId)?.ownerName ?? '?', recipientEmail: l.recipientEmail, version: l.version, status: l.status as LetterStatus, failureReason: l.failureReason, sentAt: l.sentAt })),
+    letters: letters.map((l) => ({ id: l.id, parcelReference: parcels.get(l.parcelId)?.reference ?? '?', ownerName: parcels.get(l.parcelId)?.ownerName ?? '?', recipientEmail: l.recipientEmail, version: l.version, status: l.status as LetterStatus, failureReason: l.failureReason, sentAt: l.sentAt, postedOn: l.postedOn ?? null, responseDueOn: l.responseDueOn ?? null })),
   };
 }

@@ -13,7 +13,7 @@ import type { GenerateLettersInput } from '@/lib/validation/letter-schemas';
 import { latestVersions, prepareLetters } from './prepare-letters';
 
 async function pendingLetters(revisionId: string, transaction?: Transaction): Promise<number> {
-  return Letter.count({ where: { revisionId, status: ['queued', 'sending'] }, transaction });
+  return Letter.count({ where: { revisionId, status: ['queued', 'sending', 'to-post'] }, transaction });
 }
 
 function revokedRefusal(revocation: Revocation): UnprocessableError {
@@ -38,11 +38,11 @@ export async function generateLetters({ user, input, baseUrl }: { user: SessionU
   const revocation = await revisionRevocation(revision);
   if (revocation) throw revokedRefusal(revocation);
   const pending = await pendingLetters(revision.id);
-  if (pending > 0) throw new ConflictError(`${pending} letter(s) from this revision are still waiting to be sent. Send them (or let them fail) before making new ones.`);
+  if (pending > 0) throw new ConflictError(`${pending} letter(s) from this revision are still waiting to be sent or posted. Send or post them, or withdraw their batch, before making new ones.`);
 
   const written: string[] = [];
   try {
-    const prepared = await prepareLetters({ user, scheme, revision, written, baseUrl });
+    const prepared = await prepareLetters({ user, scheme, revision, written, baseUrl, parcelReferences: input.parcelReferences });
     return await sequelize.transaction(async (transaction) => {
       await requireSchemeLiaisonAccess({ user, schemeId: scheme.id, manage: true, transaction });
       const revokedMeanwhile = await revisionRevocation(revision, transaction);
@@ -52,14 +52,14 @@ export async function generateLetters({ user, input, baseUrl }: { user: SessionU
       if (!unchanged) throw new ConflictError('The register or the letters changed while these letters were being made. Make them again.');
       const batch = await LetterBatch.create({ id: randomUUID(), schemeId: scheme.id, revisionId: revision.id, createdBy: user.id }, { transaction });
       await Letter.bulkCreate(
-        prepared.letters.map((l) => ({ id: l.id, batchId: batch.id, parcelId: l.parcelId, revisionId: revision.id, templateId: prepared.template.id, version: l.version, preliminary: prepared.preliminary, category: l.category, impactJson: l.impactJson, pdfPath: l.pdfPath, pdfSha256: l.pdfSha256, recipientEmail: l.recipientEmail, failureReason: null, messageId: null, sentAt: null, acknowledgedAt: null, createdAt: l.createdAt })),
+        prepared.letters.map((l) => ({ id: l.id, batchId: batch.id, parcelId: l.parcelId, revisionId: revision.id, templateId: prepared.template.id, version: l.version, preliminary: prepared.preliminary, category: l.category, impactJson: l.impactJson, pdfPath: l.pdfPath, pdfSha256: l.pdfSha256, recipientEmail: l.recipientEmail, status: l.recipientEmail ? 'queued' : 'to-post', responseDueOn: l.responseDueOn, documentJson: l.documentJson, failureReason: null, messageId: null, sentAt: null, acknowledgedAt: null, createdAt: l.createdAt })),
         { transaction },
       );
       await recordAuditEvent(
-        { actorId: user.id, action: 'letters.generated', entityType: 'letter_batch', entityId: batch.id, schemeId: scheme.id, details: { revision: revision.number, registerVersion: prepared.register.version, letters: prepared.letters.length, preliminary: prepared.preliminary, templateVersion: prepared.template.version, parcels: prepared.letters.map((l) => l.reference) } },
+        { actorId: user.id, action: 'letters.generated', entityType: 'letter_batch', entityId: batch.id, schemeId: scheme.id, details: { revision: revision.number, registerVersion: prepared.register.version, letters: prepared.letters.length, toPost: prepared.letters.filter((l) => !l.recipientEmail).length, preliminary: prepared.preliminary, templateVersion: prepared.template.version, parcels: prepared.letters.map((l) => l.reference) } },
         transaction,
       );
-      return { batchId: batch.id, letters: prepared.letters.length, preliminary: prepared.preliminary };
+      return { batchId: batch.id, letters: prepared.letters.length, toPost: prepared.letters.filter((l) => !l.recipientEmail).length, preliminary: prepared.preliminary };
     });
   } catch (error) {
     await Promise.all(written.map((f) => rm(f, { force: true })));

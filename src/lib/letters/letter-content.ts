@@ -37,7 +37,7 @@ export function cautionText(impact: LetterImpact): string {
 }
 
 /** The short text of the e-mail that carries the letter as a PDF. */
-export function emailText({ ownerName, subject, impact, preliminary }: { ownerName: string; subject: string; impact: LetterImpact; preliminary: boolean }): string {
+export function emailText({ ownerName, subject, impact, preliminary, organisation }: { ownerName: string; subject: string; impact: LetterImpact; preliminary: boolean; organisation?: string }): string {
   const governing = impact.events[impact.governingEvent];
   return [
     `Dear ${ownerName},`,
@@ -48,6 +48,7 @@ export function emailText({ ownerName, subject, impact, preliminary }: { ownerNa
     cautionText(impact),
     '',
     impact.certificate ? `The design was checked independently and certified: certificate ${impact.certificate.number}. You can check that it is genuine and still in force at ${impact.certificate.verificationUrl}\n` : '',
-    'The attached letter explains how to respond.',
+    'The attached letter explains how to respond. You can reply to this e-mail.',
+    organisation ? `\n${organisation}` : '',
   ].join('\n');
 }

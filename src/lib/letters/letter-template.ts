@@ -1,8 +1,8 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
-import { LetterTemplate, database } from '@/lib/db';
+import { LetterTemplate, User, database } from '@/lib/db';
 import type { LetterParagraphs } from '@/lib/validation/letter-schemas';
-import { letterParagraphsSchema } from '@/lib/validation/letter-schemas';
+import { DEFAULT_RESPONSE_DAYS, letterParagraphsSchema } from '@/lib/validation/letter-schemas';
 
 /** The paragraphs a scheme's letters start from until a liaison officer saves their own. Invented organisation and contact. */
 export const DEFAULT_PARAGRAPHS: LetterParagraphs = {
@@ -11,15 +11,16 @@ export const DEFAULT_PARAGRAPHS: LetterParagraphs = {
   scheme:
     'The scheme "{scheme_name}" at {site} would place a structure across the river. A structure like this holds the water back, so in a flood the river upstream can stand higher than it does today. Below we set out what our calculations show for your land.',
   response:
-    'If you have questions or concerns, or know of anything that would change these figures (for example a field drain, a gateway or a building near the river), please tell us within 28 days of the date of this letter. You can reply to this e-mail, write to us, or telephone. Please quote our reference.',
+    'If you have questions or concerns, or know of anything that would change these figures (for example a field drain, a gateway or a building near the river), please tell us by {response_deadline}. You can write to us at the address below, e-mail or telephone us. Please quote our reference {parcel_reference}.',
   contact: 'Landowner liaison, Wendle Valley Drainage Board\nRiverside Office, Harrowfield\nliaison@sillmark.test',
-  signOff: 'Landowner liaison officer, for the Wendle Valley Drainage Board',
+  signOff: '{officer_name}\n{officer_role}, for the Wendle Valley Drainage Board',
 };
 
 export interface LoadedTemplate {
   id: string | null;
   version: number;
   paragraphs: LetterParagraphs;
+  responseDays: number;
   updatedAt: string | null;
 }
 
@@ -27,14 +28,15 @@ export interface LoadedTemplate {
 export async function loadLetterTemplate(schemeId: string, transaction?: Transaction): Promise<LoadedTemplate> {
   database();
   const latest = await LetterTemplate.findOne({ where: { schemeId }, order: [['version', 'DESC']], transaction });
-  if (!latest) return { id: null, version: 0, paragraphs: DEFAULT_PARAGRAPHS, updatedAt: null };
+  if (!latest) return { id: null, version: 0, paragraphs: DEFAULT_PARAGRAPHS, responseDays: DEFAULT_RESPONSE_DAYS, updatedAt: null };
   const parsed = letterParagraphsSchema.safeParse(JSON.parse(latest.paragraphsJson));
-  return { id: latest.id, version: latest.version, paragraphs: parsed.success ? parsed.data : DEFAULT_PARAGRAPHS, updatedAt: latest.createdAt };
+  return { id: latest.id, version: latest.version, paragraphs: parsed.success ? parsed.data : DEFAULT_PARAGRAPHS, responseDays: latest.responseDays, updatedAt: latest.createdAt };
 }
 
-export type PlaceholderValues = Record<'owner_name' | 'parcel_reference' | 'scheme_name' | 'watercourse' | 'site', string>;
-
-/** Replaces {owner_name} and the other placeholders; unknown braces are left as typed. */
-export function fillPlaceholders(text: string, values: PlaceholderValues): string {
-  return text.replace(/\{(owner_name|parcel_reference|scheme_name|watercourse|site)\}/g, (_, key: keyof PlaceholderValues) => values[key]);
+/** Every saved version of the scheme's template, newest first, with who saved it: versions are kept, never overwritten. */
+export async function listTemplateVersions(schemeId: string) {
+  database();
+  const versions = await LetterTemplate.findAll({ where: { schemeId }, order: [['version', 'DESC']] });
+  const names = new Map((await User.findAll({ where: { id: versions.map((v) => v.updatedBy) }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
+  return versions.map((v) => ({ version: v.version, savedAt: v.createdAt, savedBy: names.get(v.updatedBy) ?? 'unknown user', responseDays: v.responseDays }));
 }

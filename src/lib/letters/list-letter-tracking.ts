@@ -13,6 +13,8 @@ export interface TrackedLetter {
   status: LetterStatus;
   failureReason: string | null;
   sentAt: string | null;
+  responseDueOn: string | null;
+  postedOn: string | null;
   responses: number;
   createdAt: string;
 }
@@ -40,6 +42,9 @@ export async function listLetterTracking({ user, schemeId }: { user: SessionUser
       status: l.status as LetterStatus,
       failureReason: l.failureReason,
       sentAt: l.sentAt,
+      // A deadline only counts once the letter has gone out.
+      responseDueOn: ['sent', 'posted', 'acknowledged'].includes(l.status) ? (l.responseDueOn ?? null) : null,
+      postedOn: l.postedOn ?? null,
       responses: responses.filter((r) => r.letterId === l.id).length,
       createdAt: l.createdAt,
     });

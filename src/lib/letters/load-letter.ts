@@ -2,7 +2,9 @@ import 'server-only';
 import type { Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { revisionRevocation } from '@/lib/certificates/revision-revocation';
-import { Letter, LetterResponse, Parcel, Revision, User, database } from '@/lib/db';
+import { portalTimeZone } from '@/lib/config/portal-time-zone';
+import { Letter, LetterReminder, LetterResponse, LetterResponseEdit, Parcel, Revision, User, database } from '@/lib/db';
+import { calendarDateIn, deadlineStanding } from '@/lib/dates/calendar-dates';
 import type { LetterStatus } from '@/lib/db/models/letter';
 import { NotFoundError } from '@/lib/http/app-errors';
 import { requireSchemeLiaisonAccess } from '@/lib/parcels/scheme-liaison-access';
@@ -23,15 +25,30 @@ export async function loadLetterDetail({ user, letterId }: { user: SessionUser; 
   const { letter, revision, scheme, access } = await requireLetterAccess({ user, letterId });
   const parcel = await Parcel.findByPk(letter.parcelId);
   const responses = await LetterResponse.findAll({ where: { letterId }, order: [['receivedAt', 'DESC'], ['createdAt', 'DESC']] });
-  const people = new Map((await User.findAll({ where: { id: responses.map((r) => r.loggedBy) } })).map((u) => [u.id, u.name]));
+  const edits = await LetterResponseEdit.findAll({ where: { responseId: responses.map((r) => r.id) }, order: [['createdAt', 'DESC']] });
+  const reminders = await LetterReminder.findAll({ where: { letterId }, order: [['createdAt', 'DESC']] });
+  const people = new Map((await User.findAll({ where: { id: [...responses.map((r) => r.loggedBy), ...edits.map((e) => e.editedBy), ...reminders.map((r) => r.createdBy)] } })).map((u) => [u.id, u.name]));
+  const today = calendarDateIn(portalTimeZone(), new Date());
+  const out = letter.status === 'sent' || letter.status === 'posted' || letter.status === 'acknowledged';
   return {
     access,
     scheme: { id: scheme.id, reference: scheme.reference, name: scheme.name },
     revision: { id: revision.id, number: revision.number, status: revision.status, revoked: (await revisionRevocation(revision)) !== null },
-    letter: { id: letter.id, version: letter.version, preliminary: letter.preliminary, category: letter.category, status: letter.status as LetterStatus, recipientEmail: letter.recipientEmail, failureReason: letter.failureReason, messageId: letter.messageId, sentAt: letter.sentAt, acknowledgedAt: letter.acknowledgedAt, createdAt: letter.createdAt, pdfSha256: letter.pdfSha256 },
+    letter: { id: letter.id, version: letter.version, preliminary: letter.preliminary, category: letter.category, status: letter.status as LetterStatus, recipientEmail: letter.recipientEmail, failureReason: letter.failureReason, messageId: letter.messageId, sentAt: letter.sentAt, acknowledgedAt: letter.acknowledgedAt, createdAt: letter.createdAt, pdfSha256: letter.pdfSha256, responseDueOn: letter.responseDueOn ?? null, postedOn: letter.postedOn ?? null, canRemind: (letter.status === 'sent' || letter.status === 'posted') && responses.length === 0 && !!letter.documentJson },
+    standing: out && letter.responseDueOn ? deadlineStanding({ dueOn: letter.responseDueOn, today, answered: responses.length > 0 }) : null,
+    reminders: reminders.map((r) => ({ id: r.id, channel: r.channel, createdAt: r.createdAt, madeBy: people.get(r.createdBy) ?? 'unknown user' })),
     parcel: parcel ? { reference: parcel.reference, ownerName: parcel.ownerName, postalAddress: parcel.postalAddress } : null,
     impact: JSON.parse(letter.impactJson) as LetterImpact,
-    responses: responses.map((r) => ({ id: r.id, receivedAt: r.receivedAt, summary: r.summary, loggedBy: people.get(r.loggedBy) ?? 'unknown user', createdAt: r.createdAt })),
+    responses: responses.map((r) => ({
+      id: r.id,
+      receivedAt: r.receivedAt,
+      summary: r.summary,
+      responseType: r.responseType,
+      channel: r.channel,
+      loggedBy: people.get(r.loggedBy) ?? 'unknown user',
+      createdAt: r.createdAt,
+      earlier: edits.filter((e) => e.responseId === r.id).map((e) => ({ editedAt: e.createdAt, editedBy: people.get(e.editedBy) ?? 'unknown user', ...(JSON.parse(e.previousJson) as { receivedAt: string; summary: string; responseType: string; channel: string }) })),
+    })),
   };
 }
 export type LetterDetail = Awaited<ReturnType<typeof loadLetterDetail>>;

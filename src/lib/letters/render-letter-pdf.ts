@@ -3,7 +3,11 @@ import PDFDocument from 'pdfkit';
 import { discharge, distance, metres } from '@/lib/parcels/format-quantity';
 import { registerPdfFonts } from '@/lib/pdf/fonts';
 import type { LetterParagraphs } from '@/lib/validation/letter-schemas';
+import { drawPlanPdf } from '@/lib/plan/draw-plan-pdf';
+import { LETTER_PLAN_SIZE, type LetterPlan } from '@/lib/plan/letter-plan';
+import { longDate } from '@/lib/dates/calendar-dates';
 import { drawLetterDiagram } from './draw-letter-diagram';
+import { ADDRESS_FIELD, addressLines } from './letter-address';
 import { cautionText, eventParagraph } from './letter-content';
 import type { LetterImpact } from './letter-impact';
 import { letterText } from './pdf-text';
@@ -15,6 +19,9 @@ export interface LetterDocument {
   version: number;
   /** ISO timestamp the letter was made; also the PDF's creation date, so the same letter renders to the same bytes. */
   date: string;
+  /** The letter's date and the day to respond by, as calendar dates (YYYY-MM-DD) in the portal's time zone. */
+  letterDate: string;
+  respondBy: string;
   preliminary: boolean;
   organisation: string;
   recipient: { name: string; address: string };
@@ -22,6 +29,10 @@ export interface LetterDocument {
   /** The template's paragraphs with the placeholders already filled in. */
   paragraphs: LetterParagraphs;
   impact: LetterImpact;
+  /** The plan cropped round the parcel, when the scheme has a plan with its outline. */
+  plan?: LetterPlan | null;
+  /** Set on a reminder: the day of the first letter it follows up (the dates above are the reminder's own). */
+  reminderOf?: { firstLetterDate: string };
 }
 
 const INK = '#1f2a2e';
@@ -69,18 +80,20 @@ function eventTable(doc: Doc, impact: LetterImpact): void {
   }
 }
 
-function letterhead(doc: Doc, letter: LetterDocument): void {
-  doc.font('sansSemiBold').fontSize(14).fillColor(INK).text(letterText(letter.organisation), MARGIN, MARGIN, { width: 300 });
+function letterhead(doc: Doc, letter: LetterDocument, top: number): void {
+  doc.font('sansSemiBold').fontSize(14).fillColor(INK).text(letterText(letter.organisation), MARGIN, top, { width: 300 });
   doc.font('sans').fontSize(9).fillColor(SOFT).text('Landowner liaison', { width: 300 });
   const right = { width: 200, align: 'right' as const };
-  doc.font('sans').fontSize(9).fillColor(INK).text(`Our reference: ${letterText(letter.reference)}`, 339, MARGIN, right);
-  doc.text(`Date: ${new Date(letter.date).toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' })}`, right);
+  doc.font('sans').fontSize(9).fillColor(INK).text(`Our reference: ${letterText(letter.reference)}`, 339, top, right);
+  doc.text(`Date: ${longDate(letter.letterDate)}`, right);
+  doc.font('sansSemiBold').text(`Please respond by: ${longDate(letter.respondBy)}`, right).font('sans');
   doc.text(`Scheme ${letterText(letter.scheme.reference)}, revision ${letter.impact.revision.number} (${letter.impact.revision.status})`, right);
   if (letter.impact.certificate) doc.text(`Certificate ${letterText(letter.impact.certificate.number)}`, right);
+  const { leftPt, addressTopPt, widthPt, topPt, heightPt } = ADDRESS_FIELD;
+  doc.font('sans').fontSize(9.5).fillColor(INK);
+  addressLines(letter.recipient.name, letter.recipient.address).forEach((line, i) => doc.text(letterText(line), leftPt, addressTopPt + i * 12.7, { width: widthPt, lineBreak: false, ellipsis: true }));
   doc.x = MARGIN;
-  doc.y = MARGIN + 70;
-  doc.font('sans').fontSize(10).text(letterText(letter.recipient.name));
-  for (const line of letter.recipient.address.split(/\n|;\s*/)) doc.text(letterText(line.trim()));
+  doc.y = topPt + heightPt + 6;
 }
 
 function cautionBox(doc: Doc, impact: LetterImpact): void {
@@ -104,21 +117,36 @@ function certificateCheck(doc: Doc, certificate: NonNullable<LetterImpact['certi
   doc.font('sans').fontSize(10).fillColor(INK).text(letterText(certificate.verificationUrl), { link: certificate.verificationUrl, underline: true }).moveDown(0.5);
 }
 
-function footers(doc: Doc, letter: LetterDocument): void {
+/** The plan round the parcel: the same drawing the portal shows, cropped, with a key in words. */
+function planOfTheLand(doc: Doc, plan: LetterPlan, reference: string): void {
+  if (doc.y + LETTER_PLAN_SIZE.height + 70 > 842 - MARGIN) doc.addPage();
+  doc.moveDown(0.8).font('sansSemiBold').fontSize(9).fillColor(INK).text(letterText(`Plan: where your land (${reference}) lies`));
+  const top = doc.y + 4;
+  const used = drawPlanPdf(doc, plan.drawing, { x: MARGIN, y: top, ...LETTER_PLAN_SIZE }, reference);
+  doc.x = MARGIN;
+  doc.y = top + used + 8;
+  doc.font('sansItalic').fontSize(8).fillColor(SOFT).text(letterText(`Your land has the heavy outline. Grid north is up (${plan.coordinateSystem}). The river marks show the flood "${plan.event}".`));
+}
+
+function footers(doc: Doc, letter: LetterDocument, firstPage: number): void {
   const range = doc.bufferedPageRange();
-  for (let i = 0; i < range.count; i++) {
-    doc.switchToPage(range.start + i);
+  const count = range.start + range.count - firstPage;
+  for (let i = 0; i < count; i++) {
+    doc.switchToPage(firstPage + i);
     // The footer sits in the bottom margin; without this pdfkit would start a new page for it.
     doc.page.margins.bottom = 0;
     if (letter.preliminary) watermark(doc);
-    const footer = `Letter ${letter.reference}, version ${letter.version}${letter.preliminary ? ', PRELIMINARY' : ''}. Made by Sillmark from scheme revision ${letter.impact.revision.number}. Page ${i + 1} of ${range.count}.`;
+    const footer = `Letter ${letter.reference}, version ${letter.version}${letter.preliminary ? ', PRELIMINARY' : ''}, from scheme revision ${letter.impact.revision.number}. ${letterText(letter.organisation)}. Page ${i + 1} of ${count}.`;
     doc.font('sans').fontSize(7.5).fillColor(SOFT).text(letterText(footer), MARGIN, 842 - MARGIN + 20, { width: 483, align: 'center', lineBreak: false });
   }
 }
 
 function body(doc: Doc, letter: LetterDocument): void {
   const { impact, paragraphs } = letter;
-  doc.moveDown(1.2).font('sansSemiBold').fontSize(13).fillColor(INK).text(letterText(`${letter.scheme.name}: what it would mean for your land`));
+  doc.moveDown(1.2).font('sansSemiBold').fontSize(13).fillColor(INK).text(letterText(`${letter.reminderOf ? 'Reminder: ' : ''}${letter.scheme.name}: what it would mean for your land`));
+  if (letter.reminderOf) {
+    doc.font('sans').fontSize(10).fillColor(INK).text(letterText(`We wrote to you on ${longDate(letter.reminderOf.firstLetterDate)} and have not yet heard from you. We repeat that letter below; please respond by ${longDate(letter.respondBy)}.`));
+  }
   if (letter.preliminary) {
     doc.font('sansSemiBold').fontSize(9.5).fillColor('#a33a2a').text('PRELIMINARY: these figures come from a design that has not yet been independently checked and countersigned. They may change.');
   }
@@ -139,6 +167,7 @@ function body(doc: Doc, letter: LetterDocument): void {
     doc.y += 168;
     doc.font('sansItalic').fontSize(8).fillColor(SOFT).text(letterText(`Distance upstream of the structure across, level above datum up. Your land is the shaded band from ${distance(impact.strip.from)} to ${distance(impact.strip.to)}.`));
   }
+  if (letter.plan) planOfTheLand(doc, letter.plan, impact.parcel.reference);
   cautionBox(doc, impact);
   if (impact.certificate) certificateCheck(doc, impact.certificate);
   heading(doc, 'How to respond');
@@ -148,18 +177,46 @@ function body(doc: Doc, letter: LetterDocument): void {
   paragraph(doc, paragraphs.signOff);
 }
 
-/** The letter as a PDF (A4, our fonts embedded), watermarked PRELIMINARY on every page when it comes from an unchecked revision. */
-export function renderLetterPdf(letter: LetterDocument): Promise<Buffer> {
-  const doc = new PDFDocument({ size: 'A4', margins: { top: MARGIN, bottom: MARGIN, left: MARGIN, right: MARGIN }, bufferPages: true, info: { Title: letterText(`${letter.scheme.name}: letter ${letter.reference}`), Author: letterText(letter.organisation), Subject: 'Extent-of-impact letter', Creator: 'Sillmark', CreationDate: new Date(letter.date) } });
-  registerPdfFonts(doc);
+/** Draws one letter from a fresh page of `doc`, its pages numbered on their own. */
+function drawLetter(doc: Doc, letter: LetterDocument, first: boolean): void {
+  if (!first) doc.addPage();
+  const firstPage = doc.bufferedPageRange().start + doc.bufferedPageRange().count - 1;
+  letterhead(doc, letter, MARGIN);
+  body(doc, letter);
+  footers(doc, letter, firstPage);
+  doc.switchToPage(doc.bufferedPageRange().start + doc.bufferedPageRange().count - 1);
+}
+
+/** Collects the document's bytes; call the returned function once everything is drawn. */
+function collect(doc: Doc): () => Promise<Buffer> {
   const chunks: Buffer[] = [];
   doc.on('data', (chunk: Buffer) => chunks.push(chunk));
-  letterhead(doc, letter);
-  body(doc, letter);
-  footers(doc, letter);
-  return new Promise((resolve, reject) => {
+  return () => new Promise((resolve, reject) => {
     doc.on('end', () => resolve(Buffer.concat(chunks)));
     doc.on('error', reject);
     doc.end();
   });
+}
+
+const newDocument = (title: string, author: string, subject: string, created: string) => {
+  const doc = new PDFDocument({ size: 'A4', margins: { top: MARGIN, bottom: MARGIN, left: MARGIN, right: MARGIN }, bufferPages: true, info: { Title: letterText(title), Author: letterText(author), Subject: subject, Creator: letterText(author), CreationDate: new Date(created) } });
+  registerPdfFonts(doc);
+  return doc;
+};
+
+/** The letter as a PDF (A4, our fonts embedded), watermarked PRELIMINARY on every page when it comes from an unchecked revision. */
+export function renderLetterPdf(letter: LetterDocument): Promise<Buffer> {
+  const doc = newDocument(`${letter.scheme.name}: letter ${letter.reference}`, letter.organisation, 'Extent-of-impact letter', letter.date);
+  const finish = collect(doc);
+  drawLetter(doc, letter, true);
+  return finish();
+}
+
+/** Several letters in one PDF for printing, each from a new page with its address in the window-envelope field. */
+export function renderLettersForPrint(letters: LetterDocument[], printedAt: string): Promise<Buffer> {
+  if (letters.length === 0) throw new RangeError('no letters to print');
+  const doc = newDocument(`Letters to post (${letters.length})`, letters[0].organisation, 'Extent-of-impact letters to post', printedAt);
+  const finish = collect(doc);
+  letters.forEach((letter, i) => drawLetter(doc, letter, i === 0));
+  return finish();
 }

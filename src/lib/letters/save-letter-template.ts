@@ -12,11 +12,11 @@ export async function saveLetterTemplate({ user, input }: { user: SessionUser; i
   const sequelize = database();
   return sequelize.transaction(async (transaction) => {
     await requireSchemeLiaisonAccess({ user, schemeId: input.schemeId, manage: true, transaction });
-    const { schemeId, ...paragraphs } = input;
+    const { schemeId, responseDays, ...paragraphs } = input;
     const current = await loadLetterTemplate(schemeId, transaction);
     const version = current.version + 1;
-    const template = await LetterTemplate.create({ id: randomUUID(), schemeId, version, paragraphsJson: JSON.stringify(paragraphs), updatedBy: user.id }, { transaction });
-    await recordAuditEvent({ actorId: user.id, action: 'letters.template-saved', entityType: 'letter_template', entityId: template.id, schemeId, details: { version } }, transaction);
+    const template = await LetterTemplate.create({ id: randomUUID(), schemeId, version, paragraphsJson: JSON.stringify(paragraphs), responseDays, updatedBy: user.id }, { transaction });
+    await recordAuditEvent({ actorId: user.id, action: 'letters.template-saved', entityType: 'letter_template', entityId: template.id, schemeId, details: { version, responseDays } }, transaction);
     return { templateId: template.id, version };
   });
 }

@@ -4,6 +4,7 @@ import { recordAuditEvent } from '@/lib/audit/record-audit-event';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Letter, LetterBatch, Parcel, Scheme, database } from '@/lib/db';
 import { type MailMessage, openMailRun } from '@/lib/mail/send-mail';
+import { organisationSender } from '@/lib/config/organisation';
 import { requireSchemeLiaisonAccess } from '@/lib/parcels/scheme-liaison-access';
 import type { SendBatchInput } from '@/lib/validation/letter-schemas';
 import { batchProgress, loadBatch } from './batch-progress';
@@ -48,10 +49,12 @@ async function message(letter: Letter, run: Run, replyTo: string): Promise<MailM
   const impact = JSON.parse(letter.impactJson) as LetterImpact;
   const subject = `${letter.preliminary ? 'PRELIMINARY: ' : ''}${scheme?.name ?? 'Scheme'}: your land at ${impact.parcel.reference}`;
   const safeReference = impact.parcel.reference.replace(/[^A-Za-z0-9_-]+/g, '-');
+  const organisation = letter.documentJson ? (JSON.parse(letter.documentJson) as { organisation?: string }).organisation : undefined;
   return {
+    from: organisationSender(organisation),
     to: letter.recipientEmail as string,
     subject,
-    text: emailText({ ownerName: parcel?.ownerName ?? 'landowner', subject, impact, preliminary: letter.preliminary }),
+    text: emailText({ ownerName: parcel?.ownerName ?? 'landowner', subject, impact, preliminary: letter.preliminary, organisation: organisationSender(organisation).name }),
     attachments: [{ filename: `letter-${safeReference}-v${letter.version}.pdf`, content: await readLetterPdf(letter.pdfPath as string), contentType: 'application/pdf' }],
     messageId: letterMessageId(letter.id),
     replyTo,

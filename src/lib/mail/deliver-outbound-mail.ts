@@ -2,7 +2,11 @@ import 'server-only';
 import { OutboundMessage, database } from '@/lib/db';
 import { claimOutboundMail } from './claim-outbound-mail';
 import { MAX_ATTEMPTS, isPermanentRefusal, retryDelayMs } from './retry-schedule';
+import { organisationSender } from '@/lib/config/organisation';
 import { type MailMessage, sendMail } from './send-mail';
+
+/** Reminders to landowners go out in the organisation's name, as their letters did. */
+export const LETTER_REMINDER_PURPOSE = 'letter-reminder';
 
 export interface DeliveryReport {
   delivered: number;
@@ -41,7 +45,7 @@ export async function deliverOutboundMail({ ids, limit = 50, now = Date.now, sen
   for (const message of messages) {
     let error: unknown | null = null;
     try {
-      await send({ to: message.recipient, subject: message.subject, text: message.bodyText, messageId: message.messageId });
+      await send({ to: message.recipient, subject: message.subject, text: message.bodyText, messageId: message.messageId, ...(message.purpose === LETTER_REMINDER_PURPOSE ? { from: organisationSender() } : {}) });
     } catch (caught) {
       error = caught ?? new Error('The mail server gave no reason.');
     }

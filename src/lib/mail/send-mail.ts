@@ -13,6 +13,8 @@ export interface MailMessage {
   /** A Message-ID of our own (`<…@…>`), so a message can be found again in the outbox or at the provider. */
   messageId?: string;
   replyTo?: string;
+  /** The sender shown to the recipient; default MAIL_FROM. Letters go out in the organisation's name. */
+  from?: { name: string; address: string };
 }
 
 export const MAIL_FROM = process.env.MAIL_FROM ?? 'Sillmark <no-reply@sillmark.invalid>';

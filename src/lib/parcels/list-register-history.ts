@@ -2,7 +2,7 @@ import 'server-only';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Parcel, ParcelRegister, Upload, User, database } from '@/lib/db';
 import { parcelInputOf, parcelRecord } from './parcel-record';
-import { type RegisterChanges, registerChanges } from './register-changes';
+import { type ParcelFieldChanges, type RegisterChanges, changedFields, registerChanges } from './register-changes';
 import { requireSchemeLiaisonAccess } from './scheme-liaison-access';
 
 export interface RegisterVersion {
@@ -14,6 +14,9 @@ export interface RegisterVersion {
   source: string;
   parcelCount: number;
   changes: RegisterChanges;
+  /** Which fields of each changed parcel differ from the version before. */
+  fieldChanges: ParcelFieldChanges[];
+  isLatest: boolean;
 }
 
 /** Every version of a scheme's register, newest first, with what each changed against the one before. */
@@ -28,15 +31,18 @@ export async function listRegisterHistory({ user, schemeId }: { user: SessionUse
   const versions = registers.map((r, i) => {
     const upload = r.uploadId ? uploads.get(r.uploadId) : undefined;
     const current = byRegister(r.id);
+    const previous = i === 0 ? [] : byRegister(registers[i - 1].id);
     return {
       id: r.id,
       version: r.version,
       createdAt: r.createdAt,
       createdBy: people.get(r.createdBy) ?? 'unknown user',
       note: r.note,
-      source: upload ? `CSV upload: ${upload.originalName}` : 'Edited in the table',
+      source: upload ? `CSV upload: ${upload.originalName}` : r.restoredFromVersion !== null ? `Restored from version ${r.restoredFromVersion}` : 'Edited in the table',
       parcelCount: current.length,
-      changes: registerChanges(i === 0 ? [] : byRegister(registers[i - 1].id), current),
+      changes: registerChanges(previous, current),
+      fieldChanges: changedFields(previous, current),
+      isLatest: i === registers.length - 1,
     };
   });
   return versions.reverse();

@@ -13,7 +13,7 @@ export async function acceptInvitation(input: AcceptInvitationInput) {
   const passwordHash = await hashPassword(input.password);
   return sequelize.transaction(async (transaction) => {
     const invitation = await Invitation.findOne({
-      where: { tokenHash: invitationTokenHash(input.token), acceptedAt: null, expiresAt: { [Op.gt]: new Date().toISOString() } },
+      where: { tokenHash: invitationTokenHash(input.token), acceptedAt: null, cancelledAt: null, expiresAt: { [Op.gt]: new Date().toISOString() } },
       transaction,
     });
     if (!invitation) throw new NotFoundError('This invitation link is not valid any more. Ask an administrator for a new one.');

@@ -9,7 +9,7 @@ import { deliverOutboundMail } from '@/lib/mail/deliver-outbound-mail';
 import { queueMail } from '@/lib/mail/queue-mail';
 import type { InviteUserInput } from '@/lib/validation/auth-schemas';
 
-const INVITATION_DAYS = 7;
+export const INVITATION_DAYS = 7;
 
 export function invitationTokenHash(token: string): string {
   return createHash('sha256').update(token).digest('hex');

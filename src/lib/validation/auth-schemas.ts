@@ -41,3 +41,8 @@ export const changeRoleSchema = z.object({
   role: roleSchema,
 });
 export type ChangeRoleInput = z.infer<typeof changeRoleSchema>;
+
+export const setUserActiveSchema = z.object({ userId: z.string().min(1, 'Choose a user.').max(64), active: z.boolean('must be true (reactivate) or false (deactivate)') });
+export type SetUserActiveInput = z.infer<typeof setUserActiveSchema>;
+
+export const invitationIdSchema = z.object({ invitationId: z.string().min(1, 'Choose an invitation.').max(64) });

@@ -1,30 +1,12 @@
 import { z } from 'zod';
-import { multiLineText, singleLineText } from './plain-text';
+import { atMost, finite, missingOr, nonNegative, positive, text, type UnitLabels } from './case-schema-primitives';
+import { multiLineText } from './plain-text';
+import { dischargeMatchesHydrograph, hydrographSchema } from './case-schema-routing';
 import { MAX_POINTS_PER_SECTION, MAX_RATING_TABLE_ROWS, MAX_SURVEYED_SECTIONS } from './input-limits';
 
 // Building blocks of the case-file schema: one schema per part of the file, with messages in the case's units.
 
-export interface UnitLabels {
-  length: string;
-  discharge: string;
-}
-
-export type CaseUnits = 'SI' | 'US';
-
-export const UNIT_LABELS: Record<CaseUnits, UnitLabels> = {
-  SI: { length: 'm', discharge: 'm³/s' },
-  US: { length: 'ft', discharge: 'ft³/s' },
-};
-
-export const missingOr = (kind: string) => (issue: { input: unknown }) => (issue.input === undefined ? 'is required' : `must be ${kind}`);
-
-export const finite = (unit?: string) => z.number({ error: missingOr(unit ? `a number (${unit})` : 'a number') });
-export const positive = (unit?: string) => finite(unit).positive({ error: `must be greater than 0${unit ? ` ${unit}` : ''}` });
-export const nonNegative = (unit?: string) => finite(unit).nonnegative({ error: `must be 0${unit ? ` ${unit}` : ''} or more` });
-/** A list too long for the engine: the message says how many are allowed and how many were sent. */
-export const atMost = (max: number, per: string) => (issue: { input: unknown }) =>
-  `are too many: at most ${max} ${per}${Array.isArray(issue.input) ? ` (this one has ${issue.input.length}); reduce them to ${max} or fewer` : ''}`;
-export const text = (what: string) => singleLineText(what, { missing: 'is required' }).min(1, { error: `must not be empty (${what})` });
+export { atMost, type CaseUnits, finite, missingOr, nonNegative, positive, text, UNIT_LABELS, type UnitLabels } from './case-schema-primitives';
 
 function sectionSchema(u: UnitLabels) {
   const slope = nonNegative().optional();
@@ -105,13 +87,17 @@ export function surveyedReachSchema(u: UnitLabels) {
 }
 
 export function eventSchema(u: UnitLabels) {
-  return z.object({
-    name: text('the event name'),
-    discharge: positive(u.discharge),
-    annualExceedanceProbability: finite().gt(0, { error: 'must be greater than 0' }).lte(1, { error: 'must be at most 1' }).optional(),
-    returnPeriod: finite('years').gte(1, { error: 'must be at least 1 year' }).optional(),
-    climateChangeAllowance: finite('%').gte(0, { error: 'must be 0 % or more' }).lte(200, { error: 'must be at most 200 %' }).optional(),
-  });
+  return z
+    .object({
+      name: text('the event name'),
+      /** With a hydrograph table it may be left out of the file: it is then the table's peak (see withDischargeFromHydrograph). */
+      discharge: positive(u.discharge),
+      annualExceedanceProbability: finite().gt(0, { error: 'must be greater than 0' }).lte(1, { error: 'must be at most 1' }).optional(),
+      returnPeriod: finite('years').gte(1, { error: 'must be at least 1 year' }).optional(),
+      climateChangeAllowance: finite('%').gte(0, { error: 'must be 0 % or more' }).lte(200, { error: 'must be at most 200 %' }).optional(),
+      hydrograph: hydrographSchema(u).optional(),
+    })
+    .superRefine(dischargeMatchesHydrograph(u));
 }
 
 const WEIR_KINDS = ['sharp-crested', 'broad-crested', 'ogee', 'rating-table'] as const;

@@ -14,6 +14,7 @@ import {
   UNIT_LABELS,
   weirControlSchema,
 } from './case-schema-parts';
+import { reservoirSchema, routingCrossChecks, withEventDischargesFromHydrographs } from './case-schema-routing';
 import { singleLineText } from './plain-text';
 import { MAX_EVENTS, MAX_LIMITS } from './input-limits';
 
@@ -37,6 +38,8 @@ function caseObject(units: CaseUnits) {
       .max(MAX_EVENTS, { error: atMost(MAX_EVENTS, 'per case') }),
     control: z.discriminatedUnion('type', [depthControlSchema(u), weirControlSchema(u)], { error: missingOr('"depth" or "weir"') }),
     existingControl: depthControlSchema(u).optional(),
+    /** The storage behind a spillway; events with a hydrograph are routed through it. */
+    reservoir: reservoirSchema(u).optional(),
     profile: z
       .object({
         /** Default: direct-step for a prismatic reach, standard-step for a surveyed one. */
@@ -79,20 +82,26 @@ function caseObject(units: CaseUnits) {
         manningN: nonNegative('%').lt(100, { error: 'must be below 100 %' }).default(20),
         discharge: nonNegative('%').max(200, { error: 'must be at most 200 %' }).default(20),
         coefficient: nonNegative('%').lt(100, { error: 'must be below 100 %' }).default(10),
+        /** Routed events only: the reservoir's storage up and down. */
+        storage: nonNegative('%').lt(100, { error: 'must be below 100 %' }).default(20),
+        /** Routed events only: the hydrograph's volume up and down at the same peak (its times stretched). */
+        hydrographVolume: nonNegative('%').lt(100, { error: 'must be below 100 %' }).default(20),
       })
       .optional(),
   });
 }
 
+/** `units` defaults to SI, and an event given by its hydrograph table alone takes the table's peak as its discharge. */
 function withDefaultUnits(raw: unknown): unknown {
-  if (raw !== null && typeof raw === 'object' && !Array.isArray(raw) && (raw as { units?: unknown }).units === undefined) return { ...raw, units: 'SI' };
-  return raw;
+  if (raw === null || typeof raw !== 'object' || Array.isArray(raw)) return raw;
+  const record = withEventDischargesFromHydrographs(raw as Record<string, unknown>);
+  return record.units === undefined ? { ...record, units: 'SI' } : record;
 }
 
 /** The whole case file; `units` defaults to SI. Use `parseCase` for issues with dotted field paths. */
 export const caseSchema = z.preprocess(
   withDefaultUnits,
-  z.discriminatedUnion('units', [caseObject('SI'), caseObject('US')], { error: 'must be "SI" or "US"' }),
+  z.discriminatedUnion('units', [caseObject('SI'), caseObject('US')], { error: 'must be "SI" or "US"' }).superRefine(routingCrossChecks),
 );
 
 export type CaseInput = z.infer<typeof caseSchema>;

@@ -1,5 +1,5 @@
-import { parse } from 'csv-parse/sync';
 import type { CaseUnits } from './case-schema';
+import { csvRecords as records } from './csv-records';
 import { type SurveyRow, readSurveyRows } from './survey-csv-rows';
 import { type SurveySection, surveySections } from './survey-csv-sections';
 
@@ -24,16 +24,6 @@ export type { SurveySection } from './survey-csv-sections';
 
 export const SURVEY_CSV_COLUMNS = ['distance_upstream', 'station', 'elevation', 'bank', 'manning_n'] as const;
 export const MAX_SURVEY_ISSUES = 200;
-
-function records(text: string): { records: string[][]; lines: number[] } | SurveyCsvIssue {
-  try {
-    const parsed = parse(text, { bom: true, relax_column_count: true, skip_empty_lines: true, comment: '#', trim: true, info: true }) as { record: string[]; info: { lines: number } }[];
-    return { records: parsed.map((p) => p.record), lines: parsed.map((p) => p.info.lines) };
-  } catch (error) {
-    const line = typeof error === 'object' && error !== null && 'lines' in error && typeof error.lines === 'number' ? error.lines : 0;
-    return { line, message: `cannot be read as CSV (${error instanceof Error ? error.message.replace(/^Invalid /, 'invalid ') : String(error)})` };
-  }
-}
 
 function capped(issues: SurveyCsvIssue[]): SurveyCsvIssue[] {
   if (issues.length <= MAX_SURVEY_ISSUES) return issues;

@@ -53,11 +53,14 @@ export const RAW_BODY_TARGETS: Record<string, RawBodyTarget> = {
   'POST api/uploads/survey-preview': { role: 'designer', query: (w) => `revision=${w.draft.revisionId}`, contentType: 'text/csv' },
   'POST api/parcels/[id]/csv': { role: 'liaison', id: (w) => w.certified.schemeId, contentType: 'text/csv' },
   'POST api/parcels/[id]/csv-preview': { role: 'liaison', id: (w) => w.certified.schemeId, contentType: 'text/csv', previewReportsIssues: true },
+  'POST api/parcels/[id]/plan': { role: 'liaison', id: (w) => w.certified.schemeId, contentType: 'application/geo+json' },
   'POST api/certificates/verification': { role: 'planning', contentType: 'multipart/form-data; boundary=----sillmark' },
 };
 
 export interface QueryTarget {
   role: Person;
+  /** The record in the route's path, for routes under an [id]. */
+  id?: (world: PortalWorld) => string;
   /** A valid query (without the "?"). */
   valid: (world: PortalWorld) => string;
   /** Hostile queries, each with the field its refusal must name. */
@@ -66,6 +69,17 @@ export interface QueryTarget {
 
 /** GET route handlers that read filters from their query, keyed "GET route": bad filters get 400 naming the field. */
 export const QUERY_TARGETS: Record<string, QueryTarget> = {
+  'GET api/parcels/[id]/export': {
+    role: 'liaison',
+    id: (w) => w.certified.schemeId,
+    valid: () => 'table=impact',
+    hostile: [
+      { query: 'table=owners', field: 'table' },
+      { query: 'table=%3DHYPERLINK(%22x%22)', field: 'table' },
+      { query: 'table=register&table=impact', field: 'table' },
+      { query: 'table=impact&revision=..%2F..%2Fetc', field: 'revision' },
+    ],
+  },
   'GET api/admin/audit/csv': {
     role: 'admin',
     valid: (w) => `person=${w.people.designer.user.id}&action=user.signed-in&from=2026-01-01&to=2026-12-31&q=Harrowfield`,
@@ -101,6 +115,9 @@ export const ACTION_TARGETS: Record<string, ActionTarget> = {
   '(portal) signOutAction': { role: 'designer', valid: () => json({ everywhere: true }), objectsAreValid: true },
   '(portal)/admin/users inviteUserAction': { role: 'admin', valid: () => json({ email: 'new.engineer@wendle-valley.test', name: 'New Engineer', role: 'checker' }) },
   '(portal)/admin/users changeRoleAction': { role: 'admin', valid: (w) => json({ userId: w.people.otherChecker.user.id, role: 'designer' }) },
+  '(portal)/admin/users setUserActiveAction': { role: 'admin', valid: (w) => json({ userId: w.people.otherChecker.user.id, active: false }) },
+  '(portal)/admin/users resendInvitationAction': { role: 'admin', valid: () => json({ invitationId: 'no-such-invitation' }) },
+  '(portal)/admin/users cancelInvitationAction': { role: 'admin', valid: () => json({ invitationId: 'no-such-invitation' }) },
   '(portal)/revisions/[id] submitForCheckAction': { role: 'designer', valid: (w) => json({ revisionId: w.draft.revisionId, checkerId: w.people.checker.user.id }) },
   '(portal)/checks/[id] addReviewCommentAction': { role: 'checker', valid: (w) => json({ revisionId: w.submitted.revisionId, part: 'results', body: 'The roughness upstream looks low.' }) },
   '(portal)/checks/[id] returnRevisionAction': { role: 'checker', valid: (w) => json({ revisionId: w.submitted.revisionId, summary: 'Justify Manning’s n for the upper reach.' }) },
@@ -110,7 +127,14 @@ export const ACTION_TARGETS: Record<string, ActionTarget> = {
   '(portal)/schemes/[id] startDraftAction': { role: 'designer', valid: (w) => json({ revisionId: w.certified.revisionId }) },
   '(portal)/schemes/[id] adoptSizedCrestAction': { role: 'designer', valid: (w) => json({ revisionId: w.draft.revisionId }) },
   '(portal)/liaison/[id]/register saveParcelEditsAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, baseRegisterId: w.certified.registerId ?? 'none', note: 'fuzz', parcels: [parcel] }) },
-  '(portal)/liaison/[id]/template saveLetterTemplateAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, ...paragraphs }) },
-  '(portal)/liaison/[id]/letters generateLettersAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, revisionId: w.certified.revisionId }) },
-  '(portal)/liaison/[id]/letters/[letterId] logLetterResponseAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId, receivedOn: '2026-01-12', summary: 'Owner telephoned; no objection.' }) },
+  '(portal)/liaison/[id]/register/history restoreRegisterVersionAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, baseRegisterId: w.certified.registerId ?? 'none', version: 1, note: '' }) },
+  '(portal)/liaison/[id]/template saveLetterTemplateAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, responseDays: 28, ...paragraphs }) },
+  '(portal)/liaison/[id]/template previewLetterAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, responseDays: 28, parcelReference: 'HM-02', ...paragraphs }) },
+  '(portal)/liaison/[id]/letters generateLettersAction': { role: 'liaison', valid: (w) => json({ schemeId: w.certified.schemeId, revisionId: w.certified.revisionId, parcelReferences: ['HM-02'] }) },
+  '(portal)/liaison/[id]/letters withdrawBatchAction': { role: 'liaison', valid: (w) => json({ batchId: w.letters.batchId }) },
+  '(portal)/liaison/[id]/letters resendLetterAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId }) },
+  '(portal)/liaison/[id]/letters markPostedAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId, postedOn: '2026-01-12' }) },
+  '(portal)/liaison/[id]/letters/[letterId] logLetterResponseAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId, receivedOn: '2026-01-12', responseType: 'no-objection', channel: 'telephone', summary: 'Owner telephoned; no objection.' }) },
+  '(portal)/liaison/[id]/letters/[letterId] editLetterResponseAction': { role: 'liaison', valid: () => json({ responseId: 'no-such-response', receivedOn: '2026-01-12', responseType: 'question', channel: 'post', summary: 'Owner wrote asking about the gateway.' }) },
+  '(portal)/liaison/[id]/letters/[letterId] makeReminderAction': { role: 'liaison', valid: (w) => json({ letterId: w.letters.letterId }) },
 };

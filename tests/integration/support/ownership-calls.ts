@@ -1,3 +1,4 @@
+import { DEFAULT_PARAGRAPHS } from '@/lib/letters/letter-template';
 import { readFileSync } from 'node:fs';
 import type { Ownership } from './access-matrix';
 import type { Person, PortalWorld } from './portal-world';
@@ -30,6 +31,7 @@ export const OWNED_ROUTE_CALLS: Record<string, (w: PortalWorld) => RouteCall> = 
   'GET api/certificates/[id]/pdf': (w) => ({ id: w.certified.certificateId }),
   'GET api/parcels/[id]': (w) => ({ id: w.certified.schemeId }),
   'GET api/parcels/[id]/impact': (w) => ({ id: w.certified.schemeId }),
+  'GET api/parcels/[id]/export': (w) => ({ id: w.certified.schemeId, query: 'table=tracking' }),
   'GET api/letters/[id]': (w) => ({ id: w.letters.letterId }),
   'GET api/letters/batches/[id]': (w) => ({ id: w.letters.batchId }),
 };
@@ -41,6 +43,7 @@ export const OWNED_ACTION_CALLS: Record<string, (w: PortalWorld, who: Person) =>
   '(portal)/schemes/[id] adoptSizedCrestAction': (w) => ({ revisionId: w.draft.revisionId }),
   '(portal)/checks/[id] addReviewCommentAction': (w) => ({ revisionId: w.submitted.revisionId, part: 'results', body: 'Please justify the roughness upstream.' }),
   '(portal)/checks/[id] returnRevisionAction': (w) => ({ revisionId: w.submitted.revisionId, summary: 'Justify Manning’s n for the upper reach.' }),
+  '(portal)/liaison/[id]/template previewLetterAction': (w) => ({ schemeId: w.certified.schemeId, responseDays: 28, parcelReference: 'HM-02', ...DEFAULT_PARAGRAPHS }),
   '(portal)/checks/[id] countersignRevisionAction': (w, who) => ({ revisionId: w.submitted.revisionId, password: w.people[who].password, confirmed: true }),
 };
 

@@ -69,6 +69,16 @@ describe('the structure rating across the range of the events', () => {
     }
   });
 
+  it('marks an event routed through a reservoir at its peak inflow, and says so', () => {
+    const pond = caseOf(JSON.parse(readFileSync(join(__dirname, '../../../db/seeds/cases/wendle-harrowfield-reservoir-spillway.json'), 'utf8')));
+    const marked = structureRating(pond).points.filter((p) => p.event !== null);
+    expect(marked.length).toBe(pond.events.length);
+    for (const p of marked) {
+      expect(p.event).toMatch(/\(peak inflow, before the storage\)$/);
+      expect(Number.isFinite(p.head) && Number.isFinite(p.upstreamLevel)).toBe(true);
+    }
+  });
+
   it('refuses a given depth, which has no rating', () => {
     expect(() => structureRating({ ...plainWeir, control: { type: 'depth', depth: 2 } } as CaseInput)).toThrow(InvalidInputError);
   });

@@ -9,6 +9,7 @@ export class Invitation extends Model<InferAttributes<Invitation>, InferCreation
   declare invitedBy: string;
   declare expiresAt: string;
   declare acceptedAt: string | null;
+  declare cancelledAt: CreationOptional<string | null>;
   declare createdAt: CreationOptional<string>;
 }
 
@@ -22,6 +23,7 @@ export function initInvitation(sequelize: Sequelize): void {
       invitedBy: { type: DataTypes.TEXT, allowNull: false },
       expiresAt: { type: DataTypes.TEXT, allowNull: false },
       acceptedAt: { type: DataTypes.TEXT, allowNull: true },
+      cancelledAt: { type: DataTypes.TEXT, allowNull: true },
       createdAt: { type: DataTypes.TEXT, allowNull: false, defaultValue: () => new Date().toISOString() },
     },
     { sequelize, tableName: 'invitations', modelName: 'Invitation' },

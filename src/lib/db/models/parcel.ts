@@ -7,6 +7,8 @@ export class ParcelRegister extends Model<InferAttributes<ParcelRegister>, Infer
   declare schemeId: string;
   declare version: number;
   declare uploadId: string | null;
+  /** Set when the version was made by restoring an earlier one (migration 0007). */
+  declare restoredFromVersion: CreationOptional<number | null>;
   declare createdBy: string;
   declare note: string | null;
   declare createdAt: CreationOptional<string>;
@@ -30,7 +32,7 @@ export class Parcel extends Model<InferAttributes<Parcel>, InferCreationAttribut
 
 export function initParcel(sequelize: Sequelize): void {
   ParcelRegister.init(
-    { id: idColumn(), schemeId: textColumn(), version: integerColumn(), uploadId: textColumn(true), createdBy: textColumn(), note: textColumn(true), createdAt: createdAtColumn() },
+    { id: idColumn(), schemeId: textColumn(), version: integerColumn(), uploadId: textColumn(true), restoredFromVersion: { ...integerColumn(true), defaultValue: null }, createdBy: textColumn(), note: textColumn(true), createdAt: createdAtColumn() },
     { sequelize, tableName: 'parcel_registers', modelName: 'ParcelRegister' },
   );
   Parcel.init(

@@ -1,7 +1,7 @@
 // Whether a pass still holds with a margin to spare and under the sensitivity runs: what a checker asks of a pass.
 import type { LimitCheck } from '../impact/flood-limits';
 import type { Metres } from '../units';
-import type { SensitivityCase, SensitivityPercentages, SensitivityReport } from './sensitivity';
+import { ROUTED_SENSITIVITY_DEFAULTS, type SensitivityCase, type SensitivityPercentages, type SensitivityReport } from './sensitivity';
 
 export interface Robustness {
   /** 'robust' pass, 'not-robust' pass (see reasons), or 'fail'. */
@@ -25,6 +25,14 @@ export function runWords(label: SensitivityCase['label'], p: SensitivityPercenta
       return `the weir coefficient is ${p.coefficient} % higher`;
     case 'coefficient-down':
       return `the weir coefficient is ${p.coefficient} % lower`;
+    case 'storage-up':
+      return `the reservoir holds ${p.storage ?? ROUTED_SENSITIVITY_DEFAULTS.storage} % more`;
+    case 'storage-down':
+      return `the reservoir holds ${p.storage ?? ROUTED_SENSITIVITY_DEFAULTS.storage} % less`;
+    case 'volume-up':
+      return `the flood's volume is ${p.hydrographVolume ?? ROUTED_SENSITIVITY_DEFAULTS.hydrographVolume} % larger at the same peak`;
+    case 'volume-down':
+      return `the flood's volume is ${p.hydrographVolume ?? ROUTED_SENSITIVITY_DEFAULTS.hydrographVolume} % smaller at the same peak`;
   }
 }
 

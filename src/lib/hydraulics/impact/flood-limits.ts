@@ -23,8 +23,11 @@ export interface LimitCheck {
   /** maxLevel − freeboard − waterLevel: how much room is left (negative when the limit is broken). */
   margin: Metres;
   pass: boolean;
-  /** 'beyond-profile': the limit lies upstream of the computed profile, where the flow is back to its without-scheme level. */
-  source: 'profile' | 'beyond-profile';
+  /**
+   * 'beyond-profile': the limit lies upstream of the computed profile, where the flow is back to its without-scheme level;
+   * 'reservoir': the limit lies within a routed reservoir and is checked against its peak level.
+   */
+  source: 'profile' | 'beyond-profile' | 'reservoir';
 }
 
 /** Each limit checked: it passes when waterLevel + freeboard ≤ maxLevel. */

@@ -1,76 +1,88 @@
 // A cross-section between two surveyed ones, by linear interpolation of the ground itself.
-import { type SurveyedSectionSpec, type ValidatedSurvey, validatedSurvey } from '../surveyed-spec';
+import type { SurveyedSectionSpec } from '../surveyed-spec';
 import type { Metres } from '../units';
+import { type LaidOutSurvey, laidOut, stationAt } from './survey-layout';
 
-interface GroundPoint {
-  station: Metres;
-  elevation: Metres;
-}
-
-/** A survey laid out on a common position u: 0–1 across the left overbank, 1–2 the channel, 2–3 the right overbank. */
-interface LaidOutSurvey {
-  points: GroundPoint[];
-  positions: number[];
-  /** Station at the start of each sub-area and its width. */
-  zones: { start: Metres; width: Metres }[];
-  roughness: ValidatedSurvey['roughness'];
-}
-
-function withPointAt(points: GroundPoint[], station: Metres): GroundPoint[] {
-  if (points.some((p) => p.station === station)) return points;
-  const i = points.findIndex((p) => p.station > station);
-  const a = points[i - 1];
-  const b = points[i];
-  const elevation = a.elevation + ((station - a.station) * (b.elevation - a.elevation)) / (b.station - a.station);
-  return [...points.slice(0, i), { station, elevation }, ...points.slice(i)];
-}
-
-/** Surveys already laid out. Why: refinement interpolates many sections between the same two surveys. */
-const laidOutSurveys = new WeakMap<SurveyedSectionSpec, LaidOutSurvey>();
-
-function laidOut(spec: SurveyedSectionSpec, field: string): LaidOutSurvey {
-  let known = laidOutSurveys.get(spec);
-  if (known === undefined) laidOutSurveys.set(spec, (known = layOut(spec, field)));
-  return known;
-}
-
-function layOut(spec: SurveyedSectionSpec, field: string): LaidOutSurvey {
-  const survey = validatedSurvey(spec, field);
-  const points = withPointAt(withPointAt(survey.points, survey.banks.left), survey.banks.right);
-  const first = points[0].station;
-  const last = points[points.length - 1].station;
-  const zones = [
-    { start: first, width: survey.banks.left - first },
-    { start: survey.banks.left, width: survey.banks.right - survey.banks.left },
-    { start: survey.banks.right, width: last - survey.banks.right },
-  ];
-  const positionOf = (s: Metres) => {
-    const zone = s < survey.banks.left ? 0 : s <= survey.banks.right ? 1 : 2;
-    const { start, width } = zones[zone];
-    return zone + (width > 0 ? (s - start) / width : 0);
-  };
-  return { points, positions: points.map((p) => positionOf(p.station)), zones, roughness: survey.roughness };
-}
-
-function stationAt(survey: LaidOutSurvey, u: number): Metres {
-  const zone = Math.min(2, Math.max(0, Math.floor(u)));
-  const { start, width } = survey.zones[zone];
-  return start + Math.min(1, Math.max(0, u - zone)) * width;
-}
-
-/** Ground elevations at position u, top to bottom as surveyed: several where a vertical wall stands there. */
-function elevationsAt(survey: LaidOutSurvey, u: number): Metres[] {
+/**
+ * Ground elevations at each of the ascending positions `at`, top to bottom as surveyed: several where a vertical wall
+ * stands there, interpolated between the survey's points elsewhere, its end levels beyond its ends. One walk along
+ * the survey, as both lists ascend.
+ */
+function elevationsAlong(survey: LaidOutSurvey, at: readonly number[]): Metres[][] {
   const { points, positions } = survey;
-  const exact = points.filter((_, i) => positions[i] === u).map((p) => p.elevation);
-  if (exact.length > 0) return exact;
-  const after = positions.findIndex((p) => p > u);
-  if (after < 0) return [points[points.length - 1].elevation];
-  if (after === 0) return [points[0].elevation];
-  const t = (u - positions[after - 1]) / (positions[after] - positions[after - 1]);
-  return [points[after - 1].elevation + t * (points[after].elevation - points[after - 1].elevation)];
+  const last = points.length - 1;
+  const result: Metres[][] = [];
+  let i = 0;
+  for (const u of at) {
+    while (i <= last && positions[i] < u) i++;
+    if (i <= last && positions[i] === u) {
+      const exact: Metres[] = [];
+      for (let j = i; j <= last && positions[j] === u; j++) exact.push(points[j].elevation);
+      result.push(exact);
+    } else if (i > last) result.push([points[last].elevation]);
+    else if (i === 0) result.push([points[0].elevation]);
+    else {
+      const t = (u - positions[i - 1]) / (positions[i] - positions[i - 1]);
+      result.push([points[i - 1].elevation + t * (points[i].elevation - points[i - 1].elevation)]);
+    }
+  }
+  return result;
+}
+
+/** The positions of both surveys, ascending, each once. */
+function mergedPositions(a: LaidOutSurvey, b: LaidOutSurvey): number[] {
+  const sorted = new Float64Array(a.positions.length + b.positions.length);
+  sorted.set(a.positions);
+  sorted.set(b.positions, a.positions.length);
+  sorted.sort();
+  const distinct: number[] = [];
+  for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) distinct.push(sorted[i]);
+  return distinct;
 }
 
 const mix = (a: number, b: number, w: number) => a + (b - a) * w;
+
+/** Everything about blending two surveys that does not depend on the weight: matched stations and ground levels. */
+interface MatchedPair {
+  stationsFrom: number[];
+  stationsTo: number[];
+  levelsFrom: number[];
+  levelsTo: number[];
+  from: LaidOutSurvey;
+  to: LaidOutSurvey;
+}
+
+function matchedPair(a: LaidOutSurvey, b: LaidOutSurvey): MatchedPair {
+  const positions = mergedPositions(a, b);
+  const elevationsA = elevationsAlong(a, positions);
+  const elevationsB = elevationsAlong(b, positions);
+  const pair: MatchedPair = { stationsFrom: [], stationsTo: [], levelsFrom: [], levelsTo: [], from: a, to: b };
+  for (let p = 0; p < positions.length; p++) {
+    const stationA = stationAt(a, positions[p]);
+    const stationB = stationAt(b, positions[p]);
+    const levelsA = elevationsA[p];
+    const levelsB = elevationsB[p];
+    const count = Math.max(levelsA.length, levelsB.length);
+    for (let k = 0; k < count; k++) {
+      pair.stationsFrom.push(stationA);
+      pair.stationsTo.push(stationB);
+      pair.levelsFrom.push(levelsA[Math.min(k, levelsA.length - 1)]);
+      pair.levelsTo.push(levelsB[Math.min(k, levelsB.length - 1)]);
+    }
+  }
+  return pair;
+}
+
+/** Pairs already matched. Why: refinement interpolates a section at several weights between the same two surveys. */
+const matchedPairs = new WeakMap<SurveyedSectionSpec, WeakMap<SurveyedSectionSpec, MatchedPair>>();
+
+function rememberedPair(from: SurveyedSectionSpec, to: SurveyedSectionSpec, field: string): MatchedPair {
+  let fromHere = matchedPairs.get(from);
+  if (fromHere === undefined) matchedPairs.set(from, (fromHere = new WeakMap()));
+  let pair = fromHere.get(to);
+  if (pair === undefined) fromHere.set(to, (pair = matchedPair(laidOut(from, field), laidOut(to, field))));
+  return pair;
+}
 
 /**
  * The section a fraction `weight` of the way from `from` (0) to `to` (1). Each sub-area (left overbank, channel,
@@ -79,18 +91,11 @@ const mix = (a: number, b: number, w: number) => a + (b - a) * w;
  * practice for filling in sections between surveyed ones). Vertical walls are blended point by point.
  */
 export function interpolatedSurvey(from: SurveyedSectionSpec, to: SurveyedSectionSpec, weight: number, field = 'reach.sections'): SurveyedSectionSpec {
-  const a = laidOut(from, field);
-  const b = laidOut(to, field);
-  const positions = [...new Set([...a.positions, ...b.positions])].sort((p, q) => p - q);
-  const points: [Metres, Metres][] = [];
-  for (const u of positions) {
-    const station = mix(stationAt(a, u), stationAt(b, u), weight);
-    const levelsA = elevationsAt(a, u);
-    const levelsB = elevationsAt(b, u);
-    const count = Math.max(levelsA.length, levelsB.length);
-    for (let k = 0; k < count; k++) {
-      points.push([station, mix(levelsA[Math.min(k, levelsA.length - 1)], levelsB[Math.min(k, levelsB.length - 1)], weight)]);
-    }
+  const pair = rememberedPair(from, to, field);
+  const { from: a, to: b } = pair;
+  const points: [Metres, Metres][] = new Array(pair.stationsFrom.length);
+  for (let i = 0; i < points.length; i++) {
+    points[i] = [mix(pair.stationsFrom[i], pair.stationsTo[i], weight), mix(pair.levelsFrom[i], pair.levelsTo[i], weight)];
   }
   const manningN = {
     left: mix(a.roughness.left, b.roughness.left, weight),

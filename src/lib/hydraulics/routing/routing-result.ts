@@ -84,7 +84,7 @@ export interface RoutingResult {
   lag: Seconds;
   peakLevel: { time: Seconds; level: Metres };
   volumeBalance: VolumeBalance;
-  /** The routing table at the converged time step (at most ROUTING_STEP_LIMIT rows). */
+  /** The routing table at the converged time step, thinned to at most ROUTING_TABLE_ROWS rows (peaks, first and last kept). */
   steps: RoutingStep[];
   /** Assumptions stated on every sheet, in words (e.g. the backwater upstream carries the peak inflow from the peak level). */
   assumptions: string[];

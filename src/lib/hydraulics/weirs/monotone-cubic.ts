@@ -46,8 +46,14 @@ export function monotoneCubic(xs: readonly number[], ys: readonly number[]): Mon
     at(x: number): number {
       if (x <= xs[0]) return ys[0];
       if (x >= xs[last]) return ys[last];
+      // The interval [xs[i], xs[i + 1]] holding x, by bisection (routing reads long tables many times).
       let i = 0;
-      while (i < last - 1 && x > xs[i + 1]) i++;
+      let hi = last - 1;
+      while (i < hi) {
+        const mid = (i + hi + 1) >> 1;
+        if (xs[mid] < x) i = mid;
+        else hi = mid - 1;
+      }
       const h = xs[i + 1] - xs[i];
       const t = (x - xs[i]) / h;
       // Cubic Hermite basis functions.

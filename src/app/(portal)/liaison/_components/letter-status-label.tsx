@@ -8,6 +8,9 @@ const STATUSES: Record<LetterStatus, { label: string; className: string }> = {
   failed: { label: 'Failed', className: 'text-verdict-fail border-verdict-fail' },
   acknowledged: { label: 'Acknowledged', className: 'text-verdict-pass border-verdict-pass' },
   held: { label: 'Held, not sent', className: 'text-verdict-fail border-verdict-fail' },
+  'to-post': { label: 'To post', className: 'text-verdict-caution border-verdict-caution' },
+  posted: { label: 'Posted', className: 'text-verdict-pass border-verdict-pass' },
+  withdrawn: { label: 'Withdrawn', className: 'text-ink-soft border-paper-edge' },
 };
 
 export function LetterStatusLabel({ status }: { status: LetterStatus }) {

@@ -8,6 +8,7 @@ const TABS = [
   { path: '/register', label: 'Parcels register' },
   { path: '/upload', label: 'Upload CSV', manageOnly: true },
   { path: '/impact', label: 'Impact on parcels' },
+  { path: '/plan', label: 'Plan of the parcels' },
   { path: '/template', label: 'Letter template' },
   { path: '/letters', label: 'Letters' },
 ];

@@ -39,6 +39,7 @@ export default async function ImpactPage({ params, searchParams }: { params: Pro
           </select>
         </div>
         <button type="submit" className={buttonClassName}>Show</button>
+        <a className="text-sm text-accent underline" href={`/api/parcels/${id}/export?table=impact&revision=${encodeURIComponent(table.revision.id)}`} download>Export as CSV<span className="sr-only"> (the impact of revision {table.revision.number}, one row per parcel and flood event)</span></a>
       </form>
       {table.revision.preliminary ? (
         <p role="note" className="mb-6 border-l-4 border-verdict-caution bg-paper-deep px-4 py-3 text-sm"><StatusIcon name="caution" className="mr-1" /><strong>Preliminary.</strong> Revision {table.revision.number} is {table.revision.status}, not countersigned: these figures may change, and letters made from it are watermarked PRELIMINARY.</p>

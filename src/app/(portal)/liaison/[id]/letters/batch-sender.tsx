@@ -5,10 +5,14 @@ import { useState } from 'react';
 import useSWR from 'swr';
 import type { BatchProgress } from '@/lib/letters/batch-progress';
 import { buttonClassName } from '@/components/ui/form-field';
+import { ConfirmPanel } from '@/components/ui/confirm-panel';
 import { StatusIcon } from '@/components/ui/status-icon';
-import { LetterStatusLabel } from '../../_components/letter-status-label';
+import { withdrawBatchAction } from './actions';
+import { BatchLetterRow } from './batch-letter-row';
+import { BatchSummary } from './batch-summary';
 
 const LETTERS_PER_REQUEST = 3;
+const plural = (n: number, one: string) => `${n} ${one}${n === 1 ? '' : 's'}`;
 
 async function fetchProgress(url: string): Promise<BatchProgress> {
   const response = await fetch(url);
@@ -18,16 +22,19 @@ async function fetchProgress(url: string): Promise<BatchProgress> {
 
 /**
  * A batch's progress, read with SWR, and the sending loop: each request sends a few letters and returns the new
- * progress, so the bar moves as it goes, and leaving the page only pauses the batch (send again to resume).
+ * progress, so the bar moves as it goes, and leaving the page only pauses the batch (send again to resume). Sending
+ * and withdrawing each ask for confirmation, with the count, first.
  */
 export function BatchSender({ batchId, manage, initiallyOpen }: { batchId: string; manage: boolean; initiallyOpen: boolean }) {
   const router = useRouter();
   const url = `/api/letters/batches/${batchId}`;
   const [sending, setSending] = useState(false);
+  const [confirming, setConfirming] = useState<'send' | 'withdraw' | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const { data, error, mutate } = useSWR(url, fetchProgress, { refreshInterval: (latest) => (!sending && latest?.counts.sending ? 2000 : 0) });
 
   const send = async (retryFailed: boolean) => {
+    setConfirming(null);
     setSending(true);
     setProblem(null);
     try {
@@ -50,44 +57,53 @@ export function BatchSender({ batchId, manage, initiallyOpen }: { batchId: strin
     }
   };
 
+  const withdraw = async () => {
+    setConfirming(null);
+    const result = await withdrawBatchAction({ batchId });
+    setProblem(result.ok ? null : result.error);
+    await mutate();
+    router.refresh();
+  };
+
   if (error) return <p role="alert" className="text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{error.message}</p>;
   if (!data) return <p className="text-sm text-ink-soft">Reading the batch…</p>;
-  const done = data.counts.sent + data.counts.acknowledged + data.counts.failed + data.counts.held;
+  const { counts } = data;
+  const byEmail = data.total - counts['to-post'] - counts.posted - counts.withdrawn;
+  const done = counts.sent + counts.acknowledged + counts.failed + counts.held;
   const retryable = data.letters.some((l) => l.status === 'failed' && l.recipientEmail);
+  const gone = counts.sending + counts.sent + counts.acknowledged + counts.posted;
+  const open = data.status !== 'withdrawn';
   return (
     <section aria-label={`Batch of ${data.createdAt.slice(0, 10)}`} className="rounded border border-paper-edge bg-white/60 p-4" data-testid="letter-batch">
       <div className="flex flex-wrap items-baseline justify-between gap-3">
-        <h3 className="font-semibold">
-          Made <span className="num">{data.createdAt.replace('T', ' ').slice(0, 16)}</span> UTC from revision <span className="num">{data.revisionNumber}</span>
-          {data.preliminary ? <span className="ml-2 text-xs font-semibold text-verdict-caution">PRELIMINARY</span> : null}
-        </h3>
-        <div className="flex gap-3">
-          {manage && data.counts.queued > 0 ? <button type="button" className={buttonClassName} disabled={sending} onClick={() => send(false)}>{sending ? 'Sending…' : done > 0 ? 'Resume sending' : `Send ${data.total} letter${data.total === 1 ? '' : 's'}`}</button> : null}
-          {manage && retryable && data.counts.queued === 0 ? <button type="button" className="rounded border border-accent px-3 py-2 text-sm font-semibold text-accent" disabled={sending} onClick={() => send(true)}>Retry the failed letters</button> : null}
+        <BatchSummary data={data} />
+        <div className="flex flex-wrap gap-3">
+          {manage && open && counts.queued > 0 ? <button type="button" className={buttonClassName} disabled={sending} aria-expanded={confirming === 'send'} onClick={() => setConfirming('send')}>{sending ? 'Sending…' : done > 0 ? 'Resume sending' : `Send ${plural(counts.queued, 'letter')}`}</button> : null}
+          {manage && retryable && counts.queued === 0 ? <button type="button" className="rounded border border-accent px-3 py-2 text-sm font-semibold text-accent" disabled={sending} onClick={() => send(true)}>Retry the failed letters</button> : null}
+          {manage && open && counts['to-post'] > 0 ? <a className="rounded border border-accent px-3 py-2 text-sm font-semibold text-accent" href={`${url}/print`} target="_blank" rel="noreferrer">Print the {plural(counts['to-post'], 'letter')} to post</a> : null}
+          {manage && open && gone === 0 ? <button type="button" className="rounded border border-verdict-fail px-3 py-2 text-sm text-verdict-fail" disabled={sending} aria-expanded={confirming === 'withdraw'} onClick={() => setConfirming('withdraw')}>Withdraw this batch</button> : null}
         </div>
       </div>
+      {confirming === 'send' ? <ConfirmPanel id={`confirm-send-${batchId}`} question={`Send ${plural(counts.queued, 'letter')} by e-mail now? Each landowner gets their letter as a PDF; this cannot be undone.`} confirmLabel={`Yes, e-mail ${plural(counts.queued, 'letter')}`} onConfirm={() => send(false)} onCancel={() => setConfirming(null)} /> : null}
+      {confirming === 'withdraw' ? <ConfirmPanel tone="danger" id={`confirm-withdraw-${batchId}`} question={`Withdraw this batch of ${plural(data.total, 'letter')}? None has gone out; the letters are kept, marked withdrawn, and never sent.`} confirmLabel="Yes, withdraw the batch" onConfirm={withdraw} onCancel={() => setConfirming(null)} /> : null}
       <div className="mt-3">
         <label htmlFor={`progress-${batchId}`} className="sr-only">Letters sent</label>
-        <progress id={`progress-${batchId}`} max={data.total} value={done} className="h-2 w-full overflow-hidden rounded [&::-webkit-progress-bar]:bg-paper-deep [&::-webkit-progress-value]:bg-accent [&::-moz-progress-bar]:bg-accent" />
+        <progress id={`progress-${batchId}`} max={Math.max(byEmail, 1)} value={done} className="h-2 w-full overflow-hidden rounded [&::-webkit-progress-bar]:bg-paper-deep [&::-webkit-progress-value]:bg-accent [&::-moz-progress-bar]:bg-accent" />
         <p role="status" aria-live="polite" className="mt-1 text-sm" data-testid="batch-progress">
-          <span className="num">{data.counts.sent + data.counts.acknowledged}</span> of <span className="num">{data.total}</span> sent, <span className="num">{data.counts.failed}</span> failed, <span className="num">{data.counts.queued + data.counts.sending}</span> waiting.
-          {data.counts.held > 0 ? <> <span className="num">{data.counts.held}</span> held and not sent: the certificate of revision <span className="num">{data.revisionNumber}</span> was revoked.</> : null}
+          {open ? (
+            <>
+              <span className="num">{counts.sent + counts.acknowledged}</span> of <span className="num">{byEmail}</span> sent, <span className="num">{counts.failed}</span> failed, <span className="num">{counts.queued + counts.sending}</span> waiting.
+              {counts['to-post'] + counts.posted > 0 ? <> <span className="num">{counts['to-post']}</span> to post, <span className="num">{counts.posted}</span> posted.</> : null}
+            </>
+          ) : <>Withdrawn before sending: none of its <span className="num">{data.total}</span> letters went out.</>}
+          {counts.held > 0 ? <> <span className="num">{counts.held}</span> held and not sent: the certificate of revision <span className="num">{data.revisionNumber}</span> was revoked.</> : null}
         </p>
         {problem ? <p role="alert" className="mt-1 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{problem}</p> : null}
       </div>
       <details open={initiallyOpen} className="mt-3">
         <summary className="cursor-pointer text-sm text-accent">The letters of this batch</summary>
         <ul className="mt-2 divide-y divide-paper-edge text-sm">
-          {data.letters.map((l) => (
-            <li key={l.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
-              <span><span className="num font-semibold">{l.parcelReference}</span> {l.ownerName} <span className="text-ink-soft">· {l.recipientEmail ?? 'no e-mail: by post'}</span></span>
-              <span className="flex items-center gap-3">
-                <LetterStatusLabel status={l.status} />
-                <a className="text-accent underline" href={`/api/letters/${l.id}`} target="_blank" rel="noreferrer">PDF<span className="sr-only"> of the letter to {l.parcelReference}</span></a>
-              </span>
-              {l.failureReason ? <span className="w-full text-xs text-verdict-fail">{l.failureReason}</span> : null}
-            </li>
-          ))}
+          {data.letters.map((l) => <BatchLetterRow key={l.id} letter={l} manage={manage} busy={sending} onChanged={(resend) => (resend ? send(false) : mutate().then(() => router.refresh()))} />)}
         </ul>
       </details>
     </section>

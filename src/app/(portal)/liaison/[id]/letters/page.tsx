@@ -27,7 +27,10 @@ export default async function LettersPage({ params }: { params: Promise<{ id: st
         )}
       </section>
       <section aria-labelledby="tracking-heading" className="mt-10">
-        <h2 id="tracking-heading" className="mb-3 text-lg font-semibold">Letters by parcel</h2>
+        <div className="mb-3 flex flex-wrap items-baseline justify-between gap-3">
+          <h2 id="tracking-heading" className="text-lg font-semibold">Letters by parcel</h2>
+          <a className="text-sm text-accent underline" href={`/api/parcels/${id}/export?table=tracking`} download>Export as CSV<span className="sr-only"> (letters, status, sent, deadline and responses)</span></a>
+        </div>
         <TrackingTable schemeId={id} parcels={tracking.parcels} />
       </section>
       <CautionNote className="mt-8" />

@@ -4,23 +4,18 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { type LetterParagraphs, type SaveLetterTemplateInput, saveLetterTemplateSchema } from '@/lib/validation/letter-schemas';
+import { type LetterParagraphs, MAX_RESPONSE_DAYS, MIN_RESPONSE_DAYS, type SaveLetterTemplateInput, saveLetterTemplateSchema } from '@/lib/validation/letter-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { StatusIcon } from '@/components/ui/status-icon';
 import { saveLetterTemplateAction } from './actions';
+import { LetterPreview } from './letter-preview';
+import { FIELDS } from './template-fields';
 
-const FIELDS: { name: keyof LetterParagraphs; label: string; hint: string; rows: number }[] = [
-  { name: 'introduction', label: 'Who we are and why we write', hint: 'Opens the letter, after “Dear …”.', rows: 4 },
-  { name: 'scheme', label: 'The scheme', hint: 'What the scheme is, in plain words.', rows: 4 },
-  { name: 'response', label: 'How to respond', hint: 'After the figures and the caution.', rows: 4 },
-  { name: 'contact', label: 'Contact details', hint: 'One item per line: office, address, telephone, e-mail.', rows: 4 },
-  { name: 'signOff', label: 'Signed', hint: 'Name and position under “Yours sincerely”.', rows: 2 },
-];
 
-export function TemplateForm({ schemeId, paragraphs, version, readOnly }: { schemeId: string; paragraphs: LetterParagraphs; version: number; readOnly: boolean }) {
+export function TemplateForm({ schemeId, paragraphs, responseDays, version, readOnly, parcels }: { schemeId: string; paragraphs: LetterParagraphs; responseDays: number; version: number; readOnly: boolean; parcels: { reference: string; ownerName: string }[] }) {
   const router = useRouter();
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<SaveLetterTemplateInput>({ resolver: zodResolver(saveLetterTemplateSchema), defaultValues: { schemeId, ...paragraphs } });
+  const { register, handleSubmit, setError, getValues, formState } = useForm<SaveLetterTemplateInput>({ resolver: zodResolver(saveLetterTemplateSchema), defaultValues: { schemeId, responseDays, ...paragraphs } });
 
   const onSubmit = handleSubmit(async (values) => {
     const result = await saveLetterTemplateAction(values);
@@ -41,7 +36,11 @@ export function TemplateForm({ schemeId, paragraphs, version, readOnly }: { sche
           <textarea id={`template-${f.name}`} rows={f.rows} readOnly={readOnly} aria-describedby={`template-${f.name}-hint${formState.errors[f.name] ? ` template-${f.name}-error` : ''}`} aria-invalid={formState.errors[f.name] ? true : undefined} className={inputClassName} {...register(f.name)} />
         </FormField>
       ))}
+      <FormField id="template-response-days" label="Days to respond" hint={`Counted from the letter’s date; the letter gives the day itself ({response_deadline}). ${MIN_RESPONSE_DAYS} to ${MAX_RESPONSE_DAYS} days.`} error={formState.errors.responseDays?.message}>
+        <input id="template-response-days" type="number" inputMode="numeric" min={MIN_RESPONSE_DAYS} max={MAX_RESPONSE_DAYS} step={1} readOnly={readOnly} aria-describedby="template-response-days-hint" aria-invalid={formState.errors.responseDays ? true : undefined} className={`${inputClassName} max-w-[8rem]`} {...register('responseDays', { valueAsNumber: true })} />
+      </FormField>
       {readOnly ? <p className="text-sm text-ink-soft">Only a landowner liaison officer can change the template.</p> : <button type="submit" className={buttonClassName} disabled={formState.isSubmitting}>Save the template</button>}
+      <LetterPreview parcels={parcels} values={getValues} />
     </form>
   );
 }

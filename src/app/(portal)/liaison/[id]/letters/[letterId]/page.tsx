@@ -1,15 +1,17 @@
 import type { Metadata } from 'next';
 import { revisionStanding } from '@/lib/certificates/revision-standing';
 import { eventParagraph } from '@/lib/letters/letter-content';
+import { ANSWERABLE } from '@/lib/letters/letter-statuses';
 import { loadLetterDetail } from '@/lib/letters/load-letter';
+import { LocalTime } from '@/components/ui/local-time';
 import { CautionNote } from '@/components/ui/caution-note';
 import { LetterStatusLabel } from '../../../_components/letter-status-label';
 import { orNotFound, requireLiaisonPage } from '../../../_components/scheme-page-access';
+import { ReminderPanel } from './reminder-panel';
 import { ResponseForm } from './response-form';
+import { ResponseList } from './response-list';
 
 export const metadata: Metadata = { title: 'Letter' };
-
-const when = (iso: string | null) => (iso ? `${iso.replace('T', ' ').slice(0, 16)} UTC` : '—');
 
 export default async function LetterPage({ params }: { params: Promise<{ id: string; letterId: string }> }) {
   const { id, letterId } = await params;
@@ -26,8 +28,8 @@ export default async function LetterPage({ params }: { params: Promise<{ id: str
           <dt className="text-ink-soft">Certificate</dt><dd className="num">{impact.certificate ? impact.certificate.number : 'none cited'}</dd>
           <dt className="text-ink-soft">Status</dt><dd><LetterStatusLabel status={letter.status} />{letter.failureReason ? <span className="block text-verdict-fail">{letter.failureReason}</span> : null}</dd>
           <dt className="text-ink-soft">To</dt><dd>{letter.recipientEmail ?? 'by post'}<span className="block text-ink-soft">{detail.parcel?.postalAddress}</span></dd>
-          <dt className="text-ink-soft">Made</dt><dd className="num">{when(letter.createdAt)}</dd>
-          <dt className="text-ink-soft">Sent</dt><dd className="num">{when(letter.sentAt)}</dd>
+          <dt className="text-ink-soft">Made</dt><dd><LocalTime iso={letter.createdAt} /></dd>
+          <dt className="text-ink-soft">{letter.postedOn ? 'Posted' : 'Sent'}</dt><dd>{letter.postedOn ? <span className="num">{letter.postedOn}</span> : <LocalTime iso={letter.sentAt} />}</dd>
           <dt className="text-ink-soft">Message-ID</dt><dd className="num break-all text-xs">{letter.messageId ?? '—'}</dd>
           <dt className="text-ink-soft">PDF SHA-256</dt><dd className="num break-all text-xs">{letter.pdfSha256}</dd>
         </dl>
@@ -38,17 +40,9 @@ export default async function LetterPage({ params }: { params: Promise<{ id: str
       </div>
       <div>
         <h2 className="text-lg font-semibold">Responses</h2>
-        {detail.responses.length === 0 ? <p className="mt-2 text-sm text-ink-soft">No response logged yet.</p> : (
-          <ul className="mt-2 space-y-3 text-sm">
-            {detail.responses.map((r) => (
-              <li key={r.id} className="rounded border border-paper-edge bg-white/60 p-3">
-                <p className="text-ink-soft">Received <span className="num">{r.receivedAt.slice(0, 10)}</span>, logged by {r.loggedBy}</p>
-                <p className="mt-1 whitespace-pre-wrap">{r.summary}</p>
-              </li>
-            ))}
-          </ul>
-        )}
-        {detail.access === 'manage' && letter.status !== 'queued' && letter.status !== 'sending' ? <ResponseForm letterId={letter.id} /> : null}
+        <ResponseList letterId={letter.id} responses={detail.responses} manage={detail.access === 'manage'} />
+        {detail.access === 'manage' && ANSWERABLE.includes(letter.status) ? <ResponseForm letterId={letter.id} /> : null}
+        <ReminderPanel detail={detail} manage={detail.access === 'manage'} />
       </div>
     </div>
   );
