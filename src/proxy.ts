@@ -4,7 +4,8 @@ import { nextWithSecurityHeaders, withSecurityHeaders } from '@/lib/http/securit
 import { refuseBadActionBody } from '@/lib/http/action-body-guard';
 
 const SESSION_COOKIE = 'sillmark_session';
-const PUBLIC_PAGES = ['/sign-in', '/invitation', '/verify', '/robots.txt'];
+// The app's icons and manifest are public: a browser asks for them on the sign-in page too.
+const PUBLIC_PAGES = ['/sign-in', '/invitation', '/verify', '/robots.txt', '/icon.svg', '/apple-icon.png', '/icons/', '/manifest.webmanifest'];
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 
 /**

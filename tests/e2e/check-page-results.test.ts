@@ -53,6 +53,10 @@ describe('the checker sees what the designer saw', () => {
 
     const longSection = await canvasInk(page, '[data-testid="designer-results"] [data-testid="long-section-chart"]');
     expect(longSection.inked / longSection.total).toBeGreaterThan(0.02);
+    // The structure's rating, worked out by the engine from the frozen inputs, with the events among its numbers.
+    const rating = await canvasInk(page, '[data-testid="designer-results"] [data-testid="rating-chart"]');
+    expect(rating.inked / rating.total).toBeGreaterThan(0.01);
+    expect(await results.getByTestId('rating-numbers').locator('td', { hasText: /AEP/ }).count()).toBeGreaterThan(0);
     const canvases = results.locator('canvas');
     expect(await canvases.count()).toBeGreaterThanOrEqual(2);
     const crossSection = await canvases.nth(1).evaluate((canvas: HTMLCanvasElement) => {

@@ -30,7 +30,10 @@ describe('the step table CSV', () => {
     for (const [index, name] of HOSTILE_NAMES.entries()) {
       const response = await callRoute('schemes/[id]/step-table', 'GET', { id: schemeId, query: `revision=1&event=${index}` });
       expect(response.status).toBe(200);
-      const rows = parse(await response.text()) as string[][];
+      const all = parse(await response.text(), { relax_column_count: true, skip_empty_lines: true }) as string[][];
+      // The header block names the event too, neutralised like the rows.
+      expect(all.find((row) => row[0] === 'Event' && row.length === 2)).toEqual(['Event', `'${name}`]);
+      const rows = all.slice(all.findIndex((row) => row[0] === 'Event' && row.length > 2));
       expect(rows.length).toBeGreaterThan(2);
       for (const row of rows.slice(1)) {
         expect(row[0]).toBe(`'${name}`);

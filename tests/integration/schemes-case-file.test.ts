@@ -85,9 +85,23 @@ describe('the results sheet downloads', () => {
     const csv = await callRoute('schemes/[id]/step-table', 'GET', { id: schemeId, query: 'revision=1&event=1' });
     expect(csv.status).toBe(200);
     const lines = (await csv.text()).trim().split('\r\n');
-    expect(lines[0]).toBe('Event,Distance upstream (m),Bed level (m),Depth (m),Water level (m),Energy level (m),Velocity (m/s),Froude number,Friction slope (m/m)');
-    expect(lines.length).toBeGreaterThan(10);
-    expect(lines[1].split(',').slice(0, 2)).toEqual(['1% AEP', '0']);
+    // The header block: what the table is, then the column headings and one row per point, rounded as the trade reads them.
+    expect(lines[0]).toBe('Step table,the with-scheme profile point by point');
+    expect(lines).toContain('Revision,1');
+    expect(lines).toContain('Event,1% AEP');
+    expect(lines.some((l) => /^Design discharge,[\d.]+,m³\/s$/.test(l))).toBe(true);
+    expect(lines.some((l) => /^Engine version,\d+\.\d+\.\d+/.test(l))).toBe(true);
+    const heading = lines.findIndex((l) => l.startsWith('Event,Distance'));
+    expect(lines[heading]).toMatch(/^Event,Distance upstream \(m\),Bed level \(m above [^)]+\),Depth \(m\),Water level with the scheme \(m above [^)]+\),Water level without the scheme \(m above [^)]+\),Afflux \(m\),Energy level \(m above [^)]+\),Velocity \(m\/s\),Froude number,Friction slope \(m\/m\)$/);
+    const rows = lines.slice(heading + 1).map((l) => l.split(','));
+    expect(rows.length).toBeGreaterThan(10);
+    expect(rows[0].slice(0, 2)).toEqual(['1% AEP', '0']);
+    for (const row of rows) {
+      for (const level of row.slice(2, 8)) expect(level).toMatch(/^-?\d+(\.\d{1,3})?$/);
+      // The afflux is the with-scheme level less the without-scheme one; each is rounded on its own, so within 1 mm.
+      expect(Math.abs(Number(row[6]) - (Number(row[4]) - Number(row[5])))).toBeLessThanOrEqual(0.0010001);
+    }
+    expect(new Set(rows.map((r) => r.join(','))).size).toBe(rows.length);
 
     const pdf = await callRoute('schemes/[id]/calculation-sheet', 'GET', { id: schemeId });
     expect(pdf.status).toBe(200);

@@ -41,11 +41,12 @@ function renderForm() {
 }
 
 describe('the live head over the crest and control depth', () => {
-  it('says what is missing, then follows the values as they are typed, asking the server once typing pauses', async () => {
+  it('waits for the blank fields, naming them in words and asking nothing of the server, then follows the values as they are typed', async () => {
     renderForm();
-    expect((await screen.findByText(/Not worked out yet/)).textContent).toContain('Some fields need attention');
-    expect(screen.getByTestId('head-preview').textContent).toMatch(/Proposed structure: crest length is required/);
-    expect(screen.getByTestId('head-preview').textContent).not.toContain('control.crestLength');
+    expect((await screen.findByTestId('preview-waiting')).textContent).toBe('Worked out once you give the crest length.');
+    expect(screen.getByTestId('head-preview').textContent).not.toMatch(/Not worked out yet|required|control\./);
+    await new Promise((resolve) => setTimeout(resolve, 600));
+    expect(asked).toEqual([]);
 
     const user = userEvent.setup();
     await user.type(screen.getByLabelText('Crest length (m)'), '10');
@@ -58,5 +59,15 @@ describe('the live head over the crest and control depth', () => {
     await user.type(sill, '1.6');
     await waitFor(() => expect(screen.getByTestId('preview-control-depth').textContent).toBe('2.600 m'));
     expect(screen.getByTestId('head-preview').textContent).toContain('Published source (test)');
+  });
+
+  it('names every blank field at once, the sill height and the crest length alike', async () => {
+    render(
+      <SWRConfig value={{ provider: () => new Map(), dedupingInterval: 0 }}>
+        <StructureStepForm schemeId="s1" revisionId="r1" units="SI" backHref="/back" />
+      </SWRConfig>,
+    );
+    expect((await screen.findByTestId('preview-waiting')).textContent).toBe('Worked out once you give the sill height and the crest length.');
+    expect(asked).toEqual([]);
   });
 });

@@ -36,7 +36,8 @@ describe('the server’s answer is shown at the field it names', () => {
     const width = screen.getByLabelText('Bottom width (m)');
     await waitFor(() => expect(width.getAttribute('aria-invalid')).toBe('true'));
     const message = document.getElementById(width.getAttribute('aria-describedby')!.split(' ').find((id) => id.endsWith('-error'))!);
-    expect(message?.textContent).toBe('✖ Bottom width must be greater than 0 m');
+    expect(message?.textContent).toBe('Bottom width must be greater than 0 m');
+    expect(message?.querySelector('svg[aria-hidden="true"]')).not.toBeNull();
     expect(screen.getByText('Bed slope must be less than 1 m/m')).toBeTruthy();
     expect(screen.getByText('Some fields need attention.')).toBeTruthy();
     expect(saved).toEqual([{ step: 'channel', values: { section: { shape: 'trapezoidal', bottomWidth: 10, sideSlope: 2 }, manningN: 0.035, bedSlope: 0.0006 } }]);

@@ -79,7 +79,9 @@ describe('the survey upload', () => {
     const user = userEvent.setup();
     await user.upload(screen.getByLabelText('Survey CSV file'), csv('good'));
     expect((await screen.findByRole('status')).textContent).toContain('2 cross-sections, 6 points, no problems found');
-    expect(within(screen.getByRole('table')).getAllByRole('row')).toHaveLength(3);
+    expect(within(screen.getByRole('table', { name: 'Cross-sections found in the file' })).getAllByRole('row')).toHaveLength(3);
+    // Each plot has its numbers as a table too (its text alternative).
+    expect(screen.getAllByRole('table', { name: /^The numbers in the cross-section/, hidden: true })).toHaveLength(2);
     expect(screen.getAllByRole('img').map((i) => i.getAttribute('aria-label'))).toEqual([expect.stringMatching(/^Section at 0 m upstream/), expect.stringMatching(/^Section at 400 m upstream/)]);
     expect(calls.map((c) => new URL(c.url).pathname)).toEqual(['/api/uploads/survey-preview']);
     await user.click(screen.getByRole('button', { name: 'Use this survey and continue' }));

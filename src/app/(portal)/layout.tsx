@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { FocusMainHeading } from '@/components/navigation/focus-main-heading';
 import { PortalHeader } from '@/components/navigation/portal-header';
 import { navigationFor } from '@/lib/auth/navigation';
 import { requirePageRole } from '@/lib/auth/page-guard';
@@ -13,8 +14,9 @@ export default async function PortalLayout({ children }: { children: ReactNode }
     <TimeZoneProvider timeZone={portalTimeZone()}>
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-white focus:p-2">Skip to content</a>
       <PortalHeader links={navigationFor(user.role)} userName={user.name} roleLabel={ROLE_LABELS[user.role]} />
-      <main id="main" className="mx-auto max-w-sheet px-6 py-8">{children}</main>
-      <footer className="mx-auto max-w-sheet px-6 pb-10 text-xs text-ink-faint">
+      <main id="main" className="mx-auto max-w-sheet px-4 py-8 sm:px-6">{children}</main>
+      <FocusMainHeading />
+      <footer className="mx-auto max-w-sheet px-4 pb-10 text-xs text-ink-faint sm:px-6">
         Sillmark supports, and never replaces, a licensed engineer’s judgement and the local codes and regulations.
       </footer>
     </TimeZoneProvider>

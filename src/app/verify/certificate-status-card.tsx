@@ -1,5 +1,6 @@
 import type { CertificateLookup } from '@/lib/certificates/lookup-certificate';
 import { StatusLabel } from '@/components/ui/status-label';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 const utc = (iso: string | null) => (iso ? `${iso.replace('T', ' ').slice(0, 16)} UTC` : '—');
 
@@ -19,7 +20,7 @@ export function CertificateStatusCard({ certificate }: { certificate: Certificat
         <StatusLabel status={certificate.status} />
       </p>
       <p role="status" className={`mt-1 font-semibold ${current ? 'text-verdict-pass' : 'text-verdict-fail'}`}>
-        <span aria-hidden="true">{current ? '✔ ' : '✖ '}</span>
+        <StatusIcon name={current ? 'pass' : 'fail'} className="mr-1" />
         {STATUS_WORDS[certificate.status]}
         {certificate.status === 'superseded' && certificate.supersededBy ? ` Superseded by ${certificate.supersededBy}.` : ''}
       </p>

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import Link from 'next/link';
 import { getCurrentSession } from '@/lib/auth/current-session';
+import { BrandMark } from '@/components/navigation/brand-mark';
 
 // The verification page is public: its own light shell, with a way into the portal for those who have an account.
 export default async function VerifyLayout({ children }: { children: ReactNode }) {
@@ -9,7 +10,7 @@ export default async function VerifyLayout({ children }: { children: ReactNode }
     <>
       <header className="border-b border-paper-edge bg-paper">
         <div className="mx-auto flex max-w-sheet flex-wrap items-center justify-between gap-4 px-6 py-3">
-          <Link href="/" className="text-lg font-semibold tracking-tight"><span className="text-accent" aria-hidden="true">▁▁▔▔</span> Sillmark</Link>
+          <Link href="/" className="inline-flex items-center gap-2 text-lg font-semibold tracking-tight"><BrandMark /> Sillmark</Link>
           <p className="text-sm">{user ? <Link className="text-accent underline" href="/home">Back to the portal ({user.name})</Link> : <Link className="text-accent underline" href="/sign-in?next=/verify">Sign in</Link>}</p>
         </div>
       </header>

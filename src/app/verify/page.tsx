@@ -6,6 +6,7 @@ import { verifyNumberSchema } from '@/lib/validation/certificate-schemas';
 import { CautionNote } from '@/components/ui/caution-note';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { PageHeader } from '@/components/ui/page-header';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { CertificateStatusCard } from './certificate-status-card';
 import { VerifyUploadForm } from './verify-upload-form';
 
@@ -32,7 +33,7 @@ export default async function VerifyPage({ searchParams }: { searchParams: Promi
           </div>
           <div className="mb-4"><button type="submit" className={buttonClassName}>Look up</button></div>
         </form>
-        {parsed?.success ? (certificate ? <CertificateStatusCard certificate={certificate} /> : <p role="status" className="rounded border-l-4 border-verdict-fail bg-white/70 px-4 py-3 font-semibold text-verdict-fail"><span aria-hidden="true">✖ </span>No certificate numbered <span className="num">{parsed.data.number}</span> was issued by this portal.</p>) : null}
+        {parsed?.success ? (certificate ? <CertificateStatusCard certificate={certificate} /> : <p role="status" className="rounded border-l-4 border-verdict-fail bg-white/70 px-4 py-3 font-semibold text-verdict-fail"><StatusIcon name="fail" className="mr-1" />No certificate numbered <span className="num">{parsed.data.number}</span> was issued by this portal.</p>) : null}
       </section>
       <section aria-labelledby="h-upload" className="mb-10">
         <h2 id="h-upload" className="mb-3 text-lg font-semibold">By checking the PDF file</h2>

@@ -1,10 +1,11 @@
 import type { PdfVerification } from '@/lib/certificates/verify-certificate-pdf';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { CertificateStatusCard } from './certificate-status-card';
 
 function Check({ ok, label }: { ok: boolean; label: string }) {
   return (
     <li className={ok ? 'text-verdict-pass' : 'font-semibold text-verdict-fail'}>
-      <span aria-hidden="true">{ok ? '✔ ' : '✖ '}</span>
+      <StatusIcon name={ok ? 'pass' : 'fail'} className="mr-1" />
       {label}: {ok ? 'yes' : 'no'}
     </li>
   );
@@ -15,7 +16,7 @@ export function VerificationReport({ report }: { report: PdfVerification }) {
   return (
     <div className="space-y-4" data-testid="verification-report">
       <p role="status" className={`rounded border-l-4 bg-white/70 px-4 py-3 font-semibold ${report.authentic ? 'border-verdict-pass text-verdict-pass' : 'border-verdict-fail text-verdict-fail'}`}>
-        <span aria-hidden="true">{report.authentic ? '✔ ' : '✖ '}</span>
+        <StatusIcon name={report.authentic ? 'pass' : 'fail'} className="mr-1" />
         {report.authentic ? 'Authentic and current: this is the certificate the portal issued, unaltered, and it still stands.' : 'Not verified: do not rely on this file. The reasons are listed below.'}
       </p>
       <ul className="space-y-1 text-sm">

@@ -9,6 +9,10 @@ Chart.register(LineController, ScatterController, LineElement, PointElement, Lin
 if (typeof window !== 'undefined' && document.body) {
   Chart.defaults.font.family = getComputedStyle(document.body).fontFamily;
   Chart.defaults.color = '#4a5a60';
+  // A canvas keeps the screen's size when printed; redrawn to the page's width it fits A4 (Chart.js docs, "Printing").
+  const resizeAll = () => Object.values(Chart.instances).forEach((chart) => chart.resize());
+  window.addEventListener('beforeprint', resizeAll);
+  window.addEventListener('afterprint', resizeAll);
 }
 
 export const CHART_COLOURS = {
@@ -27,3 +31,13 @@ export const CHART_COLOURS = {
 } as const;
 
 export const CHART_FONT = { size: 12 } as const;
+
+/**
+ * An axis title that stays whole on a short chart: a long one ("Level (m above Wendle Valley local datum)") is set on
+ * two lines, broken after "above", rather than running past the plot and being cut off.
+ */
+export function axisTitleLines(text: string, maxOneLine = 28): string | string[] {
+  if (text.length <= maxOneLine) return text;
+  const at = text.indexOf(' above ');
+  return at > 0 ? [text.slice(0, at + ' above'.length), text.slice(at + ' above '.length)] : text;
+}

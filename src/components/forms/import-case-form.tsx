@@ -3,6 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { UPLOAD_LIMIT_BYTES, describeBytes } from '@/lib/uploads/upload-limits';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 type Problem = { error: string; issues: { path: string; message: string }[] };
 
@@ -34,7 +35,7 @@ export function ImportCaseForm() {
         {busy ? <p className="mt-2 text-sm text-ink-soft">Checking the case file…</p> : null}
         {problem ? (
           <div role="alert" className="mt-3 text-sm text-verdict-fail">
-            <p><span aria-hidden="true">✖ </span>{problem.error}</p>
+            <p><StatusIcon name="fail" className="mr-1" />{problem.error}</p>
             <ul className="ml-5 list-disc">{problem.issues.map((i) => <li key={`${i.path}${i.message}`}>{i.message}</li>)}</ul>
           </div>
         ) : null}

@@ -5,6 +5,7 @@ import { MessageChannel } from 'node:worker_threads';
 import Piscina from 'piscina';
 import { AppError, ThrottledError } from '@/lib/http/app-errors';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
+import type { StructureRating } from '@/lib/hydraulics/structure-rating';
 import { ENGINE_VERSION } from '@/lib/hydraulics/version';
 import type { CaseInput } from '@/lib/validation/case-schema';
 import { engineErrorOf, type EngineOutcome } from './engine-outcome';
@@ -51,7 +52,7 @@ function enginePool(): EnginePool {
   return holder[POOL_KEY];
 }
 
-async function runOffThread(caseInput: CaseInput, cancelled?: AbortSignal): Promise<EngineOutcome> {
+async function runOffThread(caseInput: CaseInput, cancelled?: AbortSignal, job: EngineTask['job'] = 'case'): Promise<EngineOutcome> {
   const pool = enginePool();
   if (pool.jobs >= THREADS + QUEUE_LIMIT) throw new ThrottledError('The engine is busy with other cases: try again in a few seconds.', RETRY_AFTER_SECONDS);
   pool.jobs += 1;
@@ -62,7 +63,7 @@ async function runOffThread(caseInput: CaseInput, cancelled?: AbortSignal): Prom
   try {
     // A client that has gone away (cancelled) needs no answer: its job leaves the queue or stops.
     const signal = cancelled ? AbortSignal.any([deadline.signal, cancelled]) : deadline.signal;
-    return await pool.piscina.run({ caseInput, started: port2 }, { transferList: [port2], signal });
+    return await pool.piscina.run({ caseInput, job, started: port2 }, { transferList: [port2], signal });
   } catch (error) {
     if (deadline.signal.aborted) throw caseTooSlow(caseInput, ENGINE_TIME_LIMIT_MS);
     if (cancelled?.aborted) throw new AppError('The request was cancelled before the case was evaluated.', 400);
@@ -92,4 +93,12 @@ export async function evaluateCaseOffThread(caseInput: CaseInput): Promise<CaseR
   // Results are frozen with the server's engine version, so a worker bundled from older sources must not supply them.
   if (result.engineVersion !== ENGINE_VERSION) throw new Error(`The engine worker runs ${result.engineVersion}, the server ${ENGINE_VERSION}: rebuild it (npm run build).`);
   return result;
+}
+
+/** The structure's head and upstream level across the range of the case's events, on a worker thread. */
+export async function structureRatingOffThread(caseInput: CaseInput): Promise<StructureRating> {
+  const outcome = await runOffThread(caseInput, undefined, 'rating');
+  if (outcome.ok) return JSON.parse(outcome.resultJson) as StructureRating;
+  if (outcome.kind === 'too-deep') throw caseTooLarge(caseInput);
+  throw engineErrorOf(outcome);
 }

@@ -53,6 +53,7 @@ export { sensitivity } from './design/sensitivity';
 
 // The case file: evaluate a whole design check (SI or US customary at the edges)
 export { evaluateCase } from './evaluate-case';
+export { structureRating, type StructureRating, type RatingPoint } from './structure-rating';
 export { caseToSI } from './case-units';
 export type { CaseResult, EventResult, LimitResult } from './case-result';
 export { ENGINE_VERSION } from './version';

@@ -19,6 +19,10 @@ export interface LongSectionData {
   withoutScheme: XY[];
   normalDepthLine: XY[] | null;
   criticalDepthLine: XY[];
+  /** Water level plus the velocity head along the with-scheme profile. */
+  energyLine: XY[];
+  /** The structure at chainage 0: the bed there and the crest (bed plus sill); null for a given depth at the control. */
+  structure: { bedLevel: number; crestLevel: number; sillHeight: number } | null;
   limits: { label: string; x: number; maxLevel: number; allowedLevel: number; waterLevel: number; pass: boolean }[];
   extentOfImpact: number;
   inundationExtent: number | null;
@@ -44,6 +48,12 @@ function bankLine(input: CaseInput, distances: number[]): XY[] | null {
   return byDistance([...distances, ...stations].map((x) => ({ x, y: levelAt(x * k) / k })));
 }
 
+function structureAtControl(input: CaseInput, event: EventResult): LongSectionData['structure'] {
+  const first = event.profile[0];
+  if (input.control.type !== 'weir' || !first) return null;
+  return { bedLevel: first.bedLevel, crestLevel: first.bedLevel + input.control.sillHeight, sillHeight: input.control.sillHeight };
+}
+
 export function longSectionData(input: CaseInput, event: EventResult): LongSectionData {
   const all = [...event.profile, ...event.withoutScheme.profile];
   const bed = byDistance(all.map((p) => ({ x: p.distanceUpstream, y: p.bedLevel })));
@@ -57,6 +67,8 @@ export function longSectionData(input: CaseInput, event: EventResult): LongSecti
     withoutScheme: event.withoutScheme.profile.map((p) => ({ x: p.distanceUpstream, y: p.waterLevel })),
     normalDepthLine: event.normalDepthExists ? bed.map((p) => ({ x: p.x, y: p.y + event.normalDepth })) : null,
     criticalDepthLine: bed.map((p) => ({ x: p.x, y: p.y + event.criticalDepth })),
+    energyLine: event.profile.map((p) => ({ x: p.distanceUpstream, y: p.energyLevel })),
+    structure: structureAtControl(input, event),
     limits: event.limits.map((l) => ({ label: l.label, x: l.distanceUpstream, maxLevel: l.maxLevel, allowedLevel: l.maxLevel - l.freeboard, waterLevel: l.waterLevel, pass: l.pass })),
     extentOfImpact: event.extent.distanceUpstream,
     inundationExtent: inundation && inundation.extentUpstream > 0 ? inundation.extentUpstream : null,

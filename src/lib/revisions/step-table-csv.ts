@@ -1,9 +1,10 @@
-import { toSafeCsv } from '@/lib/csv/to-safe-csv';
+import { type CsvCell, toSafeCsv } from '@/lib/csv/to-safe-csv';
 import type { EventResult } from '@/lib/hydraulics/case-result';
+import { affluxAlong } from '@/lib/hydraulics/impact/afflux';
 import type { CaseUnits } from '@/lib/validation/case-schema';
 import { unitWords } from './draft-inputs';
 
-/** Columns of the step table, shared by the results page and its CSV download, with their units. */
+/** Columns of the step table on the results page, with their units and the digits shown. */
 export function stepTableColumns(units: CaseUnits) {
   const u = unitWords(units);
   return [
@@ -18,11 +19,47 @@ export function stepTableColumns(units: CaseUnits) {
   ] as const;
 }
 
+export interface StepTableCsvOptions {
+  scheme: { reference: string; name: string };
+  revisionNumber: number;
+  datum: string | null;
+  event: EventResult;
+  units: CaseUnits;
+  engineVersion: string;
+}
+
+// Rounded as the trade reads them: levels and depths to the millimetre (or thousandth of a foot), distances to the
+// decimetre, the friction slope to four significant figures. Written as numbers, so a negative level stays a number.
+const fixed = (x: number, digits: number) => Number(x.toFixed(digits));
+const significant = (x: number, digits: number) => Number(x.toPrecision(digits));
+
 /**
- * The with-scheme profile of one event as CSV, full precision, one row per computed point. Each row names its event,
- * so a table pasted beside another stays readable; the name is the designer's own text, hence the safe writer.
+ * The with-scheme profile of one event as CSV: a header block saying what the table is, then one row per computed
+ * point with the level without the scheme and the afflux beside the level with it. Each row names its event, so a
+ * table pasted beside another stays readable; the names are the designer's own text, hence the formula-safe writer.
  */
-export function stepTableCsv(event: EventResult, units: CaseUnits): string {
-  const columns = stepTableColumns(units);
-  return toSafeCsv(['Event', ...columns.map((c) => c.label)], event.profile.map((point) => [event.name, ...columns.map((c) => point[c.key])]));
+export function stepTableCsv({ scheme, revisionNumber, datum, event, units, engineVersion }: StepTableCsvOptions): string {
+  const u = unitWords(units);
+  const level = `${u.length} above ${datum ?? 'the datum'}`;
+  const block: CsvCell[][] = [
+    ['Scheme', `${scheme.reference} ${scheme.name}`],
+    ['Revision', revisionNumber],
+    ['Event', event.name],
+    ['Design discharge', fixed(event.discharge, 3), u.discharge],
+    ['Units', units === 'US' ? 'US customary: lengths in ft, discharges in ft³/s' : 'SI: lengths in m, discharges in m³/s'],
+    ['Level datum', datum ?? 'not given'],
+    ['Levels', `in ${level}; depths above the bed`],
+    ['Engine version', engineVersion],
+    [],
+  ];
+  const afflux = affluxAlong(event.profile, event.withoutScheme.profile);
+  const rows: CsvCell[][] = [];
+  event.profile.forEach((p, i) => {
+    const row = [event.name, fixed(p.distanceUpstream, 1), fixed(p.bedLevel, 3), fixed(p.depth, 3), fixed(p.waterLevel, 3), fixed(p.waterLevel - afflux[i].afflux, 3), fixed(afflux[i].afflux, 3), fixed(p.energyLevel, 3), fixed(p.velocity, 3), fixed(p.froude, 3), significant(p.frictionSlope, 4)];
+    // Two points closer than the rounding would print the same row twice.
+    const previous = rows.at(-1);
+    if (!previous || previous.some((cell, j) => cell !== row[j])) rows.push(row);
+  });
+  const header = ['Event', `Distance upstream (${u.length})`, `Bed level (${level})`, `Depth (${u.length})`, `Water level with the scheme (${level})`, `Water level without the scheme (${level})`, `Afflux (${u.length})`, `Energy level (${level})`, `Velocity (${u.velocity})`, 'Froude number', `Friction slope (${u.length}/${u.length})`];
+  return toSafeCsv(['Step table', 'the with-scheme profile point by point'], [...block, header, ...rows]);
 }

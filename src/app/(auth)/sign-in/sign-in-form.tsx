@@ -6,6 +6,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { signInSchema, type SignInInput } from '@/lib/validation/auth-schemas';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { signInAction } from './actions';
 
 export function SignInForm({ next }: { next?: string }) {
@@ -24,7 +25,7 @@ export function SignInForm({ next }: { next?: string }) {
   return (
     <form onSubmit={onSubmit} noValidate aria-describedby={failure ? 'sign-in-failure' : undefined}>
       <h1 className="mb-4 text-xl font-semibold">Sign in</h1>
-      {failure ? <p id="sign-in-failure" role="alert" className="mb-4 border-l-4 border-verdict-fail bg-paper-deep px-3 py-2 text-sm"><span aria-hidden="true">✖ </span>{failure}</p> : null}
+      {failure ? <p id="sign-in-failure" role="alert" className="mb-4 border-l-4 border-verdict-fail bg-paper-deep px-3 py-2 text-sm"><StatusIcon name="fail" className="mr-1" />{failure}</p> : null}
       <FormField id="email" label="E-mail address" error={formState.errors.email?.message}>
         <input id="email" type="email" autoComplete="username" className={inputClassName} aria-invalid={!!formState.errors.email} aria-describedby={formState.errors.email ? 'email-error' : undefined} {...register('email')} />
       </FormField>

@@ -37,7 +37,7 @@ export default async function CertificatesPage({ searchParams }: { searchParams:
       {register.certificates.length === 0 ? (
         <EmptyState title="No certificate matches this search." />
       ) : (
-        <div className="overflow-x-auto">
+        <div role="region" aria-label="Certificates found" tabIndex={0} className="scroll-cue relative overflow-x-auto">
           <table className="w-full border-collapse text-sm">
             <caption className="sr-only">Certificates, sorted by {query.sort} ({query.direction === 'asc' ? 'ascending' : 'descending'})</caption>
             <thead>

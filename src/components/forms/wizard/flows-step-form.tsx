@@ -5,6 +5,7 @@ import { Controller, useFieldArray, useForm } from 'react-hook-form';
 import type { CaseUnits } from '@/lib/validation/case-schema';
 import { type FlowsStepInput, type FlowsStepValues, flowsStepSchema } from '@/lib/validation/scheme-schemas';
 import { inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { asNumber, errorAt, numberInputProps } from '../form-values';
 import { WizardField, describedBy } from '../wizard-field';
 import { StepActions } from './step-actions';
@@ -38,7 +39,7 @@ export function FlowsStepForm({ schemeId, revisionId, units, defaults, backHref 
 
   return (
     <form onSubmit={handleSubmit(async (values) => void (await save(values)))} noValidate>
-      {e('events') ? <p role="alert" className="mb-3 text-sm text-verdict-fail"><span aria-hidden="true">✖ </span>The list of events {e('events')}</p> : null}
+      {e('events') ? <p role="alert" className="mb-3 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />The list of events {e('events')}</p> : null}
       <Controller
         control={control}
         name="governing"
@@ -65,7 +66,7 @@ export function FlowsStepForm({ schemeId, revisionId, units, defaults, backHref 
               </fieldset>
             ))}
             <label className="flex items-center gap-2 text-sm"><input type="radio" name="governing-choice" checked={field.value === 'all'} onChange={() => field.onChange('all')} /> No single governing event: check every event alike</label>
-            {e('governing') ? <p role="alert" className="text-sm text-verdict-fail"><span aria-hidden="true">✖ </span>The governing event {e('governing')}</p> : null}
+            {e('governing') ? <p role="alert" className="text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />The governing event {e('governing')}</p> : null}
           </div>
         )}
       />

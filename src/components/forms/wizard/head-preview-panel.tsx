@@ -3,6 +3,8 @@
 import useSWR from 'swr';
 import { coefficientWords } from '@/lib/hydraulics/weirs/coefficient-words';
 import type { HeadPreview } from '@/lib/revisions/preview-head';
+import { StatusIcon } from '@/components/ui/status-icon';
+import { listInWords } from './preview-needs';
 import { useDebounced } from './use-debounced';
 
 export const HEAD_PREVIEW_DELAY_MS = 400;
@@ -23,19 +25,24 @@ async function fetchPreview([, revisionId, body]: [string, string, string]): Pro
 const f = (x: number | null | undefined, digits = 3) => (x === null || x === undefined ? '—' : x.toFixed(digits));
 
 /** The head over the crest and the control depth, worked out by the engine on the server as the designer types. */
-export function HeadPreviewPanel({ revisionId, structureJson, lengthUnit, dischargeUnit }: { revisionId: string; structureJson: string; lengthUnit: string; dischargeUnit: string }) {
+/** `waitingFor`: the fields still blank, in words; until they are given nothing is asked of the server. */
+export function HeadPreviewPanel({ revisionId, structureJson, waitingFor, lengthUnit, dischargeUnit }: { revisionId: string; structureJson: string; waitingFor: string[]; lengthUnit: string; dischargeUnit: string }) {
   const settled = useDebounced(structureJson, HEAD_PREVIEW_DELAY_MS);
-  const { data, error, isValidating } = useSWR<HeadPreview, PreviewError>(['head-preview', revisionId, settled], fetchPreview, { keepPreviousData: true, revalidateOnFocus: false, shouldRetryOnError: false });
+  const waiting = waitingFor.length > 0;
+  const { data: answer, error: failure, isValidating } = useSWR<HeadPreview, PreviewError>(waiting ? null : ['head-preview', revisionId, settled], fetchPreview, { keepPreviousData: true, revalidateOnFocus: false, shouldRetryOnError: false });
+  const data = waiting ? undefined : answer;
+  const error = waiting ? undefined : failure;
   const u = lengthUnit;
   return (
     <section aria-labelledby="head-preview-heading" className="rounded border border-accent/40 bg-accent-wash/60 p-4" data-testid="head-preview">
       <h2 id="head-preview-heading" className="text-sm font-semibold">Head over the crest and control depth</h2>
       <p className="text-xs text-ink-faint">Computed on the server by the engine from these values and the saved channel and flows; not saved until you continue.</p>
       <div aria-live="polite" className="mt-3 text-sm">
-        {isValidating && !data ? <p>Working it out…</p> : null}
+        {waiting ? <p data-testid="preview-waiting">Worked out once you give {listInWords(waitingFor)}.</p> : null}
+        {!waiting && isValidating && !data ? <p>Working it out…</p> : null}
         {error ? (
           <div role="status" className="text-verdict-caution">
-            <p><span aria-hidden="true">⚠ </span>Not worked out yet: {error.message}</p>
+            <p><StatusIcon name="caution" className="mr-1" />Not worked out yet: {error.message}</p>
             <ul className="ml-5 list-disc">{error.issues.map((i) => <li key={`${i.path}${i.message}`}>{i.message}</li>)}</ul>
           </div>
         ) : null}
@@ -53,11 +60,11 @@ export function HeadPreviewPanel({ revisionId, structureJson, lengthUnit, discha
                     <dt className="text-ink-soft">Coefficient</dt>
                     <dd><span className="num">{coefficientWords(e.weir.coefficient, e.weir.coefficientForm)}</span> — {e.weir.coefficientIsDefault ? 'published default' : 'your own value'}<span className="block text-xs text-ink-faint">{e.weir.coefficientSource}</span></dd>
                     <dt className="text-ink-soft">Validity range</dt>
-                    <dd className="text-xs">{e.weir.validity.map((c) => <span key={c.name} className="block">{c.ok ? '✔' : '⚠'} {c.name} <span className="num">{c.value.toPrecision(3)}</span>{c.min !== undefined ? `, from ${c.min}` : ''}{c.max !== undefined ? ` to ${c.max}` : ''}{c.ok ? '' : ' — outside the range'}</span>)}</dd>
+                    <dd className="text-xs">{e.weir.validity.map((c) => <span key={c.name} className="block"><StatusIcon name={c.ok ? 'pass' : 'caution'} className="mr-1" />{c.name} <span className="num">{c.value.toPrecision(3)}</span>{c.min !== undefined ? `, from ${c.min}` : ''}{c.max !== undefined ? ` to ${c.max}` : ''}{c.ok ? '' : ' — outside the range'}</span>)}</dd>
                   </>
                 ) : null}
-                {e.weir?.submergence && e.weir.submergence.tailwaterHead > 0 && !e.weir.submergence.modular ? <dd className="col-span-2 text-xs text-verdict-caution">⚠ Submerged by the water downstream: ratio <span className="num">{e.weir.submergence.ratio.toFixed(3)}</span>, discharge reduced by the factor <span className="num">{e.weir.submergence.factor.toFixed(3)}</span> ({e.weir.submergence.relation}).{e.weir.submergence.extrapolated ? ' Past the data of the relation: see the warnings.' : ''}</dd> : null}
-                {!e.causesBackwater && e.explanation ? <dd className="col-span-2 text-xs text-verdict-caution">⚠ {e.explanation}</dd> : null}
+                {e.weir?.submergence && e.weir.submergence.tailwaterHead > 0 && !e.weir.submergence.modular ? <dd className="col-span-2 text-xs text-verdict-caution"><StatusIcon name="caution" className="mr-1" />Submerged by the water downstream: ratio <span className="num">{e.weir.submergence.ratio.toFixed(3)}</span>, discharge reduced by the factor <span className="num">{e.weir.submergence.factor.toFixed(3)}</span> ({e.weir.submergence.relation}).{e.weir.submergence.extrapolated ? ' Past the data of the relation: see the warnings.' : ''}</dd> : null}
+                {!e.causesBackwater && e.explanation ? <dd className="col-span-2 text-xs text-verdict-caution"><StatusIcon name="caution" className="mr-1" />{e.explanation}</dd> : null}
               </dl>
             ))}
           </div>

@@ -6,6 +6,7 @@ import { useFieldArray, useForm } from 'react-hook-form';
 import type { CaseUnits } from '@/lib/validation/case-schema';
 import { type LimitsStepInput, type LimitsStepValues, limitsStepSchema } from '@/lib/validation/scheme-schemas';
 import { inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { asNumber, errorAt, numberInputProps } from '../form-values';
 import { WizardField, describedBy } from '../wizard-field';
 import { LimitsOptions } from './limits-options';
@@ -69,7 +70,7 @@ export function LimitsStepForm({ schemeId, revisionId, units, sections, defaults
                 <td className="py-1">
                   <label className="sr-only" htmlFor={`bank-${i}`}>Bank-top level at {s.distanceUpstream} {u}</label>
                   <input id={`bank-${i}`} className={`${inputClassName} num max-w-40`} {...numberInputProps} {...register(`sectionBankLevels.${i}`, { setValueAs: (v) => asNumber(v) ?? null })} />
-                  {e(`sectionBankLevels.${i}`) ? <p role="alert" className="text-sm text-verdict-fail">✖ The bank-top level {e(`sectionBankLevels.${i}`)}</p> : null}
+                  {e(`sectionBankLevels.${i}`) ? <p role="alert" className="text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />The bank-top level {e(`sectionBankLevels.${i}`)}</p> : null}
                 </td>
               </tr>
             ))}

@@ -37,11 +37,17 @@ export function PrismaticChannelForm({ schemeId, revisionId, units, defaults, ba
   const [unequal, setUnequal] = useState(Boolean(startUnequal));
   const e = (path: string) => errorAt(formState.errors, path);
 
+  const bedSlope = useWatch({ control, name: 'bedSlope' });
+  // A flat or adverse bed has no normal depth, so the level without the scheme cannot be found from the slope.
+  const slopeCaution = typeof bedSlope === 'number' && Number.isFinite(bedSlope) && bedSlope <= 0
+    ? `${bedSlope === 0 ? 'A horizontal' : 'An adverse'} bed has no normal depth: it is accepted only with the depth without the scheme, given on the Structure step.`
+    : undefined;
   const numberField = (name: string, label: string, hint?: string, className = 'max-w-48') => {
     const id = `channel-${name.replace(/\./g, '-')}`;
+    const caution = name === 'bedSlope' ? slopeCaution : undefined;
     return (
-      <WizardField id={id} label={label} hint={hint} error={e(name)}>
-        <input id={id} className={`${inputClassName} num ${className}`} {...numberInputProps} {...describedBy(id, { hint, error: e(name) })} {...register(name as 'manningN', { setValueAs: asNumber })} />
+      <WizardField id={id} label={label} hint={hint} caution={caution} error={e(name)}>
+        <input id={id} className={`${inputClassName} num ${className}`} {...numberInputProps} {...describedBy(id, { hint, caution, error: e(name) })} {...register(name as 'manningN', { setValueAs: asNumber })} />
       </WizardField>
     );
   };

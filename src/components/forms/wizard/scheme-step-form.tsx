@@ -7,6 +7,7 @@ import { type Resolver, useForm } from 'react-hook-form';
 import type { ActionResult } from '@/lib/actions/action-result';
 import { type SchemeStepInput, type SchemeStepValues, schemeStepSchema } from '@/lib/validation/scheme-schemas';
 import { inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { asNumber, errorAt, numberInputProps } from '../form-values';
 import { WizardField, describedBy } from '../wizard-field';
 import { StepActions } from './step-actions';
@@ -42,11 +43,17 @@ export function SchemeStepForm({ defaults, unitsLocked, target }: { defaults: Pa
       <input id={`scheme-${name}`} className={inputClassName} {...describedBy(`scheme-${name}`, { hint, error: e(name) })} {...register(name)} />
     </WizardField>
   );
-  const number = (name: 'bedLevelAtControl' | 'reachLength', label: string, noun: string, hint: string) => (
-    <WizardField id={`scheme-${name}`} label={`${label} (${length})`} noun={noun} hint={hint} error={e(name)}>
-      <input id={`scheme-${name}`} className={`${inputClassName} num max-w-48`} {...numberInputProps} {...describedBy(`scheme-${name}`, { hint, error: e(name) })} {...register(name, { setValueAs: asNumber })} />
-    </WizardField>
-  );
+  // Blank is allowed (a surveyed reach supplies both), but never silently: once left, the field says what blank means.
+  const blankCaution = (name: 'bedLevelAtControl' | 'reachLength', noun: string) =>
+    (formState.touchedFields[name] || formState.isSubmitted) && watch(name) === undefined ? `${noun} is empty: a prismatic channel needs it (a surveyed reach takes it from the survey).` : undefined;
+  const number = (name: 'bedLevelAtControl' | 'reachLength', label: string, noun: string, hint: string) => {
+    const caution = blankCaution(name, noun);
+    return (
+      <WizardField id={`scheme-${name}`} label={`${label} (${length})`} noun={noun} hint={hint} caution={caution} error={e(name)}>
+        <input id={`scheme-${name}`} className={`${inputClassName} num max-w-48`} {...numberInputProps} {...describedBy(`scheme-${name}`, { hint, caution, error: e(name) })} {...register(name, { setValueAs: asNumber })} />
+      </WizardField>
+    );
+  };
 
   return (
     <form onSubmit={onSubmit} noValidate className="max-w-2xl">
@@ -71,7 +78,7 @@ export function SchemeStepForm({ defaults, unitsLocked, target }: { defaults: Pa
             <label className="flex items-center gap-2"><input type="radio" value="US" {...register('units')} /> US customary: feet and ft³/s</label>
           </div>
         )}
-        {e('units') ? <p role="alert" className="mt-1 text-sm text-verdict-fail"><span aria-hidden="true">✖ </span>Units {e('units')}</p> : null}
+        {e('units') ? <p role="alert" className="mt-1 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />Units {e('units')}</p> : null}
       </fieldset>
       <div className="grid gap-x-6 sm:grid-cols-2">
         {number('bedLevelAtControl', 'Bed level at the structure', 'The bed level at the structure', 'Above the datum. For a prismatic channel; a surveyed reach takes it from the survey.')}

@@ -1,5 +1,6 @@
 import Link from 'next/link';
 import { buttonClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import type { SaveFailure } from './use-step-save';
 
 /** The foot of every step: what the server refused, "Back", and "Save and continue". */
@@ -8,7 +9,7 @@ export function StepActions({ failure, backHref, submitting, label = 'Save and c
     <div className="mt-8 border-t border-paper-edge pt-4">
       {failure ? (
         <div role="alert" className="mb-4 text-sm text-verdict-fail">
-          <p><span aria-hidden="true">✖ </span>{failure.error}</p>
+          <p><StatusIcon name="fail" className="mr-1" />{failure.error}</p>
           {failure.unplaced.length > 0 ? (
             <ul className="ml-5 list-disc">{failure.unplaced.map((i) => <li key={`${i.path}-${i.message}`}>{i.label ? `${i.label}: ` : ''}{i.message}</li>)}</ul>
           ) : null}

@@ -9,6 +9,7 @@ import { inputClassName } from '@/components/ui/form-field';
 import { asNumber, errorAt, numberInputProps } from '../form-values';
 import { WizardField, describedBy } from '../wizard-field';
 import { HeadPreviewPanel } from './head-preview-panel';
+import { fieldsStillBlank } from './preview-needs';
 import { StepActions } from './step-actions';
 import { type StructureForm, WEIR_KINDS, cleanStructure } from './structure-values';
 import { useStepSave } from './use-step-save';
@@ -41,6 +42,7 @@ export function StructureStepForm({ schemeId, revisionId, units, defaults, backH
   const watched = useWatch({ control }) as StructureForm;
   const kind = watched.control?.kind ?? 'broad-crested';
   const e = (path: string) => errorAt(formState.errors, path);
+  const cleaned = cleanStructure(watched);
 
   const numberField = (name: string, label: string, hint?: string) => {
     const id = `structure-${name.replace(/\./g, '-')}`;
@@ -102,7 +104,7 @@ export function StructureStepForm({ schemeId, revisionId, units, defaults, backH
           </div>
         </div>
         <div className="lg:sticky lg:top-4 lg:self-start">
-          <HeadPreviewPanel revisionId={revisionId} structureJson={JSON.stringify(cleanStructure(watched))} lengthUnit={u} dischargeUnit={units === 'US' ? 'ft³/s' : 'm³/s'} />
+          <HeadPreviewPanel revisionId={revisionId} structureJson={JSON.stringify(cleaned)} waitingFor={fieldsStillBlank(schema, cleaned)} lengthUnit={u} dischargeUnit={units === 'US' ? 'ft³/s' : 'm³/s'} />
         </div>
       </div>
       <StepActions failure={failure} backHref={backHref} submitting={formState.isSubmitting} />

@@ -14,7 +14,7 @@ export function SurveyPreview({ sections, lengthUnit }: { sections: SurveySectio
   const u = lengthUnit;
   return (
     <div className="mt-4">
-      <div className="overflow-x-auto">
+      <div role="region" aria-label="Cross-sections found in the file" tabIndex={0} className="scroll-cue relative overflow-x-auto">
         <table className="w-full border-collapse text-sm">
           <caption className="mb-2 text-left text-sm font-semibold">Cross-sections found in the file</caption>
           <thead>
@@ -43,7 +43,7 @@ export function SurveyPreview({ sections, lengthUnit }: { sections: SurveySectio
       </div>
       <div className="mt-4 grid gap-4 md:grid-cols-2">
         {sections.slice(0, MAX_PLOTS).map((s) => (
-          <CrossSectionChart key={s.distanceUpstream} height={180} ground={s.points.map(([x, y]) => ({ x, y }))} bankStations={s.bankStations ?? null} lengthUnit={u} yTitle={`Level (${u})`} caption={`Section at ${s.distanceUpstream} ${u} upstream: ${s.points.length} points, lowest ground ${Math.min(...s.points.map((p) => p[1])).toFixed(2)} ${u}.`} />
+          <CrossSectionChart key={s.distanceUpstream} height={180} ground={s.points.map(([x, y]) => ({ x, y }))} bankStations={s.bankStations ?? null} lengthUnit={u} yTitle={`Level (${u} above the datum)`} caption={`Section at ${s.distanceUpstream} ${u} upstream: ${s.points.length} points, lowest ground ${Math.min(...s.points.map((p) => p[1])).toFixed(2)} ${u}.`} />
         ))}
       </div>
       {sections.length > MAX_PLOTS ? <p className="mt-2 text-xs text-ink-faint">The first {MAX_PLOTS} of {sections.length} sections are drawn; the table lists them all.</p> : null}

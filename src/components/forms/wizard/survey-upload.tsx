@@ -5,6 +5,7 @@ import { useState } from 'react';
 import { UPLOAD_LIMIT_BYTES, describeBytes } from '@/lib/uploads/upload-limits';
 import type { SurveySection } from '@/lib/validation/survey-csv';
 import { buttonClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { SurveyPreview } from './survey-preview';
 
 type Issue = { path: string; message: string };
@@ -62,7 +63,7 @@ export function SurveyUpload({ schemeId, revisionId, lengthUnit, current }: { sc
         {state.kind === 'checking' ? <p className="text-sm text-ink-soft">Checking {state.name}…</p> : null}
         {state.kind === 'refused' ? (
           <div role="alert" className="rounded border border-verdict-fail bg-white p-4 text-sm" data-testid="survey-errors">
-            <p className="font-semibold text-verdict-fail"><span aria-hidden="true">✖ </span>{state.name}: {state.error}</p>
+            <p className="font-semibold text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{state.name}: {state.error}</p>
             {state.issues.length > 0 ? (
               <ul className="mt-2 space-y-1">
                 {state.issues.map((i, n) => <li key={n}><span className="num font-semibold">{i.path === 'file' ? 'File' : i.path.replace(/^line/, 'Line')}</span>: {i.message}</li>)}
@@ -72,7 +73,7 @@ export function SurveyUpload({ schemeId, revisionId, lengthUnit, current }: { sc
         ) : null}
         {state.kind === 'checked' ? (
           <div>
-            <p role="status" className="text-sm text-verdict-pass"><span aria-hidden="true">✔ </span>{state.file.name}: {state.sections.length} cross-sections, {state.rowCount} points, no problems found. Nothing is stored until you use it.</p>
+            <p role="status" className="text-sm text-verdict-pass"><StatusIcon name="pass" className="mr-1" />{state.file.name}: {state.sections.length} cross-sections, {state.rowCount} points, no problems found. Nothing is stored until you use it.</p>
             <SurveyPreview sections={state.sections} lengthUnit={lengthUnit} />
             <button type="button" className={`${buttonClassName} mt-4`} disabled={saving} onClick={() => void use()}>{saving ? 'Storing…' : 'Use this survey and continue'}</button>
           </div>

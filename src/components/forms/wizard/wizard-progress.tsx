@@ -1,5 +1,6 @@
 import Link from 'next/link';
 import type { EditableStep, WizardStep } from '@/lib/validation/scheme-schemas';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 export const STEP_TITLES: Record<WizardStep, string> = {
   scheme: 'Scheme',
@@ -19,7 +20,7 @@ export function stepHref(schemeId: string, step: WizardStep): string {
 export function WizardProgress({ schemeId, current, completed }: { schemeId: string | null; current: WizardStep; completed: EditableStep[] }) {
   const steps = Object.keys(STEP_TITLES) as WizardStep[];
   return (
-    <nav aria-label="Wizard steps" className="mb-8">
+    <nav aria-label="Wizard steps" className="mb-8 print:hidden">
       <ol className="flex flex-wrap gap-x-1 gap-y-2 text-sm">
         {steps.map((step, i) => {
           const done = step !== 'results' && completed.includes(step);
@@ -28,7 +29,7 @@ export function WizardProgress({ schemeId, current, completed }: { schemeId: str
           const content = (
             <>
               <span className="num">{i + 1}</span> {STEP_TITLES[step]}
-              {done && !here ? <span aria-hidden="true"> ✔</span> : null}
+              {done && !here ? <StatusIcon name="pass" className="ml-1" /> : null}
               {done ? <span className="sr-only"> (saved)</span> : null}
             </>
           );

@@ -1,4 +1,5 @@
 import type { ChainCheck } from '@/lib/audit/verify-audit-chain';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { utc } from '../../checks/_components/quantities';
 
 /** The result of recomputing every hash of the trail as the page was drawn: a calm note, or the alarm naming the break. */
@@ -6,7 +7,7 @@ export function AuditChainStatus({ check, alarm }: { check: ChainCheck; alarm: s
   if (check.intact) {
     return (
       <p role="status" className="mb-6 border-l-4 border-verdict-pass bg-paper-deep px-4 py-3 text-sm text-ink-soft">
-        <span aria-hidden="true">✔ </span>
+        <StatusIcon name="pass" className="mr-1" />
         <strong className="font-semibold text-ink">The chain is intact.</strong> All <span className="num">{check.events}</span> events were checked just now: each one’s hash matches its contents and the event before it.
       </p>
     );
@@ -15,7 +16,7 @@ export function AuditChainStatus({ check, alarm }: { check: ChainCheck; alarm: s
   return (
     <div role="alert" className="mb-6 rounded border-2 border-verdict-fail bg-white p-4 text-sm">
       <p className="text-base font-semibold text-verdict-fail">
-        <span aria-hidden="true">✖ </span>{alarm ?? `The chain breaks at event ${number}.`}
+        <StatusIcon name="fail" className="mr-1" />{alarm ?? `The chain breaks at event ${number}.`}
       </p>
       <p className="mt-1">
         Event {number}, recorded {utc(at)}: {problem}. Events from {number} onwards cannot be relied on as recorded. Keep a copy of the database file as it is now and

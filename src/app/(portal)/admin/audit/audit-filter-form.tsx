@@ -3,6 +3,7 @@ import { AUDIT_ACTIONS } from '@/lib/audit/audit-actions';
 import type { FieldIssue } from '@/lib/http/app-errors';
 import type { AuditFilterInput } from '@/lib/validation/audit-filter-schema';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 interface Choices {
   people: { id: string; name: string; email: string }[];
@@ -43,7 +44,7 @@ export function AuditFilterForm({ values, issues, choices }: { values: AuditFilt
       <FormField id="audit-q" label="Search names, e-mail addresses and details" error={error('q')}>
         <input id="audit-q" name="q" type="search" defaultValue={text(values.q)} placeholder="e.g. Calloway or SMC-2026" className={inputClassName} />
       </FormField>
-      {error('before') ? <p role="alert" className="mb-4 text-sm text-verdict-fail sm:col-span-2 lg:col-span-3"><span aria-hidden="true">✖ </span>{error('before')}</p> : null}
+      {error('before') ? <p role="alert" className="mb-4 text-sm text-verdict-fail sm:col-span-2 lg:col-span-3"><StatusIcon name="fail" className="mr-1" />{error('before')}</p> : null}
       <div className="mb-4 flex items-center gap-4">
         <button type="submit" className={buttonClassName}>Filter</button>
         <Link href="/admin/audit" className="text-sm text-accent underline">Clear the filters</Link>

@@ -6,6 +6,7 @@ import type { RawQuery } from '@/lib/audit/parse-audit-filter';
 import { requirePageRole } from '@/lib/auth/page-guard';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { AuditChainStatus } from './audit-chain-status';
 import { AuditEventList } from './audit-event-list';
 import { AuditFilterForm } from './audit-filter-form';
@@ -23,7 +24,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
       <AuditChainStatus check={view.chain} alarm={view.chainAlarm} />
       <AuditFilterForm values={raw} issues={view.issues} choices={view} />
       {view.issues.length ? (
-        <p role="alert" className="mb-4 text-sm text-verdict-fail"><span aria-hidden="true">✖ </span>The filters above need attention, so no events are shown.</p>
+        <p role="alert" className="mb-4 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />The filters above need attention, so no events are shown.</p>
       ) : view.entries.length === 0 ? (
         <EmptyState title="No event matches these filters." />
       ) : (

@@ -7,6 +7,7 @@ import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { revokeCertificateSchema } from '@/lib/validation/certificate-schemas';
 import { FormField, inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { revokeCertificateAction } from './actions';
 
 type FormInput = z.input<typeof revokeCertificateSchema>;
@@ -29,7 +30,7 @@ export function RevokeForm({ certificateId, number }: { certificateId: string; n
 
   return (
     <form onSubmit={onSubmit} noValidate aria-label={`Revoke certificate ${number}`}>
-      {failure ? <p role="alert" className="mb-2 text-sm text-verdict-fail">✖ {failure}</p> : null}
+      {failure ? <p role="alert" className="mb-2 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{failure}</p> : null}
       <FormField id={id('reason')} label={`Reason for revoking ${number}`} hint="Shown on the public verification page, the scheme’s pages and the liaison pages." error={formState.errors.reason?.message}>
         <textarea id={id('reason')} rows={2} className={inputClassName} aria-invalid={!!formState.errors.reason} {...register('reason')} />
       </FormField>
@@ -38,13 +39,13 @@ export function RevokeForm({ certificateId, number }: { certificateId: string; n
           <input type="checkbox" className="mt-1" aria-invalid={!!formState.errors.confirmed} aria-describedby={formState.errors.confirmed ? id('confirmed-error') : undefined} {...register('confirmed')} />
           <span>I revoke certificate {number} for good. Its letters waiting to be sent are held, and no new letter can be made from its revision.</span>
         </label>
-        {formState.errors.confirmed ? <p id={id('confirmed-error')} role="alert" className="mt-1 text-sm text-verdict-fail"><span aria-hidden="true">✖ </span>{formState.errors.confirmed.message}</p> : null}
+        {formState.errors.confirmed ? <p id={id('confirmed-error')} role="alert" className="mt-1 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{formState.errors.confirmed.message}</p> : null}
       </div>
       <FormField id={id('password')} label="Your password" hint="The password you sign in with." error={formState.errors.password?.message}>
         <input id={id('password')} type="password" autoComplete="current-password" className={inputClassName} aria-invalid={!!formState.errors.password} {...register('password')} />
       </FormField>
       <button type="submit" className="inline-flex items-center rounded border border-verdict-fail px-3 py-1.5 text-sm font-semibold text-verdict-fail hover:bg-paper-deep disabled:opacity-60" disabled={formState.isSubmitting}>
-        <span aria-hidden="true">✖&nbsp;</span>Revoke {number}
+        <StatusIcon name="fail" className="mr-1" />Revoke {number}
       </button>
     </form>
   );

@@ -9,6 +9,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { LinkedText } from '@/components/ui/linked-text';
 import { PageHeader } from '@/components/ui/page-header';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 export const metadata: Metadata = { title: 'Mail outbox' };
 
@@ -33,7 +34,7 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
         <div>
           <label htmlFor="outbox-q" className="block text-sm font-semibold">Search subject, sender and recipient</label>
           <input id="outbox-q" name="q" type="search" defaultValue={q ?? ''} maxLength={200} aria-invalid={read.ok ? undefined : true} aria-describedby={read.ok ? undefined : 'outbox-q-error'} className={inputClassName} />
-          {read.ok ? null : <p id="outbox-q-error" role="alert" className="mt-1 text-sm text-verdict-fail">✖ The search {read.issues[0]?.message.replace(/ \(the search\)$/, '')}.</p>}
+          {read.ok ? null : <p id="outbox-q-error" role="alert" className="mt-1 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />The search {read.issues[0]?.message.replace(/ \(the search\)$/, '')}.</p>}
         </div>
         <button type="submit" className={buttonClassName}>Search</button>
         {q ? <a className="text-sm text-accent underline" href="/admin/outbox">Show all</a> : null}

@@ -3,6 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { ConfirmPanel } from '@/components/ui/confirm-panel';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { setUserActiveAction } from './actions';
 
 /** Deactivates (sessions end, no sign-in, records kept) or reactivates an account, after a confirmation naming the person. */
@@ -22,7 +23,7 @@ export function AccountSwitch({ userId, userName, status }: { userId: string; us
     <span className="block">
       <button type="button" className={`rounded border px-2 py-1 text-sm ${active ? 'border-verdict-fail text-verdict-fail' : 'border-accent text-accent'}`} onClick={() => setConfirming(true)}>{active ? 'Deactivate' : 'Reactivate'}<span className="sr-only"> {userName}</span></button>
       {confirming ? <ConfirmPanel tone={active ? 'danger' : 'normal'} id={`confirm-active-${userId}`} question={active ? `Deactivate ${userName}? Their sessions end now and they cannot sign in; everything they did stays on record.` : `Reactivate ${userName}? They can sign in again with their password.`} confirmLabel={active ? `Yes, deactivate ${userName}` : `Yes, reactivate ${userName}`} onConfirm={apply} onCancel={() => setConfirming(false)} /> : null}
-      {message ? <span role={message.ok ? 'status' : 'alert'} className={`mt-1 block text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}>{message.ok ? '✔ ' : '✖ '}{message.text}</span> : null}
+      {message ? <span role={message.ok ? 'status' : 'alert'} className={`mt-1 block text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}><StatusIcon name={message.ok ? 'pass' : 'fail'} className="mr-1" />{message.text}</span> : null}
     </span>
   );
 }

@@ -3,6 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { longDate } from '@/lib/dates/calendar-dates';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { cancelInvitationAction, resendInvitationAction } from './actions';
 
 type Pending = { id: string; email: string; name: string; role: string; expiresAt: string; expired: boolean };
@@ -19,7 +20,7 @@ export function InvitationList({ invitations }: { invitations: Pending[] }) {
   return (
     <section aria-labelledby="invitations-heading" className="mt-8">
       <h2 id="invitations-heading" className="mb-2 text-lg font-semibold">Invitations not yet accepted</h2>
-      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-2 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}>{message.ok ? '✔ ' : '✖ '}{message.text}</p> : null}
+      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-2 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}><StatusIcon name={message.ok ? 'pass' : 'fail'} className="mr-1" />{message.text}</p> : null}
       {invitations.length === 0 ? <p className="text-sm text-ink-soft">None.</p> : (
         <ul className="divide-y divide-paper-edge text-sm">
           {invitations.map((i) => (

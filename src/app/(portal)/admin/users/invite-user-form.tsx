@@ -6,6 +6,7 @@ import { useForm } from 'react-hook-form';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { ROLES, ROLE_LABELS } from '@/lib/auth/roles';
 import { inviteUserSchema, type InviteUserInput } from '@/lib/validation/auth-schemas';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { inviteUserAction } from './actions';
 
 export function InviteUserForm() {
@@ -25,7 +26,7 @@ export function InviteUserForm() {
   return (
     <form onSubmit={onSubmit} noValidate className="max-w-md">
       <h2 className="mb-3 text-lg font-semibold">Invite a user</h2>
-      {message ? <p role={message.ok ? 'status' : 'alert'} className="mb-3 text-sm">{message.ok ? '✔ ' : '✖ '}{message.text}</p> : null}
+      {message ? <p role={message.ok ? 'status' : 'alert'} className="mb-3 text-sm"><StatusIcon name={message.ok ? 'pass' : 'fail'} className="mr-1" />{message.text}</p> : null}
       <FormField id="invite-name" label="Name" error={formState.errors.name?.message}>
         <input id="invite-name" className={inputClassName} {...register('name')} />
       </FormField>

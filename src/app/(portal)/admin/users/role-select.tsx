@@ -4,6 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { ROLES, ROLE_LABELS, type Role } from '@/lib/auth/roles';
 import { ConfirmPanel } from '@/components/ui/confirm-panel';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { changeRoleAction } from './actions';
 
 /**
@@ -32,7 +33,7 @@ export function RoleSelect({ userId, role, userName }: { userId: string; role: R
         {chosen !== role ? <button type="button" className="rounded border border-accent px-2 py-1 text-sm font-semibold text-accent" onClick={() => setConfirming(true)}>Save<span className="sr-only"> the role of {userName}</span></button> : null}
       </span>
       {confirming ? <ConfirmPanel id={`confirm-role-${userId}`} question={`Change ${userName}’s role from ${ROLE_LABELS[role]} to ${ROLE_LABELS[chosen]}? They will be signed out, and the new role applies when they sign in again.`} confirmLabel={`Yes, make ${userName} ${ROLE_LABELS[chosen]}`} onConfirm={save} onCancel={() => { setConfirming(false); setChosen(role); }} /> : null}
-      {message ? <span role={message.ok ? 'status' : 'alert'} className={`mt-1 block text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}>{message.ok ? '✔ ' : '✖ '}{message.text}</span> : null}
+      {message ? <span role={message.ok ? 'status' : 'alert'} className={`mt-1 block text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}><StatusIcon name={message.ok ? 'pass' : 'fail'} className="mr-1" />{message.text}</span> : null}
     </span>
   );
 }

@@ -6,6 +6,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { REVIEW_PARTS, REVIEW_PART_LABELS, type ReviewCommentInput, reviewCommentSchema } from '@/lib/validation/check-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { addReviewCommentAction } from './actions';
 
 export function CommentForm({ revisionId }: { revisionId: string }) {
@@ -27,7 +28,7 @@ export function CommentForm({ revisionId }: { revisionId: string }) {
   return (
     <form onSubmit={onSubmit} noValidate aria-labelledby="h-comment">
       <h3 id="h-comment" className="mb-2 font-semibold">Add a comment</h3>
-      {message ? <p role={message.ok ? 'status' : 'alert'} className="mb-2 text-sm">{message.ok ? '✔ ' : '✖ '}{message.text}</p> : null}
+      {message ? <p role={message.ok ? 'status' : 'alert'} className="mb-2 text-sm"><StatusIcon name={message.ok ? 'pass' : 'fail'} className="mr-1" />{message.text}</p> : null}
       <FormField id="comment-part" label="Part of the revision" error={formState.errors.part?.message}>
         <select id="comment-part" className={inputClassName} aria-invalid={!!formState.errors.part} {...register('part')}>
           {REVIEW_PARTS.map((p) => <option key={p} value={p}>{REVIEW_PART_LABELS[p]}</option>)}

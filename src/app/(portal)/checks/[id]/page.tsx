@@ -4,10 +4,11 @@ import { forbidden, notFound } from 'next/navigation';
 import { requirePageRole } from '@/lib/auth/page-guard';
 import { ForbiddenError, NotFoundError } from '@/lib/http/app-errors';
 import { loadCheckView } from '@/lib/review/load-check-view';
+import { ratingForSheet } from '@/lib/revisions/rating-for-sheet';
+import { featuredEventIndex } from '@/lib/revisions/results-sheet';
 import { IntegrityAlarm } from '@/components/ui/integrity-alarm';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusLabel } from '@/components/ui/status-label';
-import { featuredEventIndex } from '@/lib/revisions/results-sheet';
 import { ChangesTable } from '../_components/changes-table';
 import { DesignerResults } from '../_components/designer-results';
 import { InputsTable } from '../_components/inputs-table';
@@ -90,6 +91,7 @@ export default async function CheckPage({ params, searchParams }: { params: Prom
               datum={view.datum}
               href={`/checks/${revision.id}`}
               stepTableCsvHref={`/api/schemes/${scheme.id}/step-table?revision=${revision.number}&event=${eventIndex}`}
+              rating={await ratingForSheet(view.caseInput)}
             />
           </div>
         ) : null}

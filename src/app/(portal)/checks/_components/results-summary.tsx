@@ -1,9 +1,10 @@
 import { CautionNote } from '@/components/ui/caution-note';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { quantity, unitsOf } from './quantities';
 
 function Verdict({ pass }: { pass: boolean }) {
-  return pass ? <span className="text-verdict-pass"><span aria-hidden="true">✔ </span>pass</span> : <span className="font-semibold text-verdict-fail"><span aria-hidden="true">✖ </span>fail</span>;
+  return pass ? <span className="text-verdict-pass"><StatusIcon name="pass" className="mr-1" />pass</span> : <span className="font-semibold text-verdict-fail"><StatusIcon name="fail" className="mr-1" />fail</span>;
 }
 
 /** The governing results of a revision: verdict, each event's control and extents, and each flood-level limit. */
@@ -17,7 +18,7 @@ export function ResultsSummary({ results, caption = 'Results' }: { results: Case
         <span className="text-ink-soft">{pass ? 'every flood-level limit is met for every design event.' : 'at least one flood-level limit is not met.'}</span>
         {results.governingEvent ? <span className="text-ink-soft"> Governing event: {results.governingEvent.name}, least margin <span className="num">{quantity(results.governingEvent.leastMargin, u.length)}</span>.</span> : null}
       </p>
-      <div className="overflow-x-auto">
+      <div role="region" aria-label="Results by event" tabIndex={0} className="scroll-cue relative overflow-x-auto">
         <table className="w-full border-collapse text-sm">
           <caption className="mb-1 text-left text-xs text-ink-faint">{caption}: each design event (engine {results.engineVersion})</caption>
           <thead>
@@ -49,7 +50,7 @@ export function ResultsSummary({ results, caption = 'Results' }: { results: Case
         </table>
       </div>
       {results.events.some((e) => e.limits.length) ? (
-        <div className="overflow-x-auto">
+        <div role="region" aria-label="Limits by event" tabIndex={0} className="scroll-cue relative overflow-x-auto">
           <table className="w-full border-collapse text-sm">
             <caption className="mb-1 text-left text-xs text-ink-faint">Flood-level limits (water level with the scheme against each limit less its freeboard)</caption>
             <thead>
@@ -73,7 +74,7 @@ export function ResultsSummary({ results, caption = 'Results' }: { results: Case
                     <td className="num whitespace-nowrap py-2 pr-3 text-right">{quantity(l.maxLevel, u.length)}</td>
                     <td className="num whitespace-nowrap py-2 pr-3 text-right">{quantity(l.waterLevel, u.length)}</td>
                     <td className="num whitespace-nowrap py-2 pr-3 text-right">{quantity(l.margin, u.length)}</td>
-                    <td className="py-2">{l.pass ? <span className="text-verdict-pass"><span aria-hidden="true">✔ </span>met</span> : <span className="font-semibold text-verdict-fail"><span aria-hidden="true">✖ </span>not met</span>}</td>
+                    <td className="py-2">{l.pass ? <span className="text-verdict-pass"><StatusIcon name="pass" className="mr-1" />met</span> : <span className="font-semibold text-verdict-fail"><StatusIcon name="fail" className="mr-1" />not met</span>}</td>
                   </tr>
                 )),
               )}

@@ -8,6 +8,7 @@ import { loadRevisionView } from '@/lib/review/load-revision-view';
 import { IntegrityAlarm } from '@/components/ui/integrity-alarm';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusLabel } from '@/components/ui/status-label';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { InputsTable } from '../../checks/_components/inputs-table';
 import { utc } from '../../checks/_components/quantities';
 import { ResultsSummary } from '../../checks/_components/results-summary';
@@ -75,7 +76,7 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
           ) : null}
           {revision.status === 'returned' && isDesigner ? (
             <p role="note" className="mt-3 border-l-4 border-verdict-caution bg-paper-deep px-3 py-2">
-              <span aria-hidden="true">↩ </span>The checker returned this revision. It stays frozen as it was submitted: revise the scheme in a new draft started from it, which shows the checker’s comments beside the fields they concern.
+              <StatusIcon name="returned" className="mr-1" />The checker returned this revision. It stays frozen as it was submitted: revise the scheme in a new draft started from it, which shows the checker’s comments beside the fields they concern.
               <span className="mt-2 block">
                 {openDraft ? (
                   <Link className="text-accent underline" href={`/schemes/${scheme.id}/wizard/scheme`}>Continue draft revision {openDraft.number}</Link>

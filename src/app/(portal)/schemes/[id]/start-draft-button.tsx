@@ -3,6 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useState, useTransition } from 'react';
 import { buttonClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { startDraftAction } from './actions';
 
 /** "Start a new draft from this revision": copies its inputs into the next revision number and opens the wizard. */
@@ -25,7 +26,7 @@ export function StartDraftButton({ revisionId, schemeId, number }: { revisionId:
       >
         {pending ? 'Starting…' : `Start a new draft from revision ${number}`}
       </button>
-      {error ? <span role="alert" className="text-sm text-verdict-fail">✖ {error}</span> : null}
+      {error ? <span role="alert" className="text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{error}</span> : null}
     </span>
   );
 }

@@ -2,6 +2,7 @@
 
 import { useState } from 'react';
 import { ROUTING_CSV_LIMIT_BYTES, describeBytes } from '@/lib/uploads/upload-limits';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 export type CsvTable = 'hydrograph' | 'storage';
 
@@ -43,10 +44,10 @@ export function CsvFill({ idPrefix, revisionId, table, hint, onRows }: { idPrefi
       <input id={id} type="file" accept=".csv,text/csv" aria-describedby={`${id}-hint`} className="mt-1 block text-sm" onChange={(e) => void read(e.target.files?.[0])} />
       <div aria-live="polite" className="mt-2">
         {state.kind === 'checking' ? <p className="text-ink-soft">Reading {state.name}…</p> : null}
-        {state.kind === 'filled' ? <p role="status" className="text-verdict-pass"><span aria-hidden="true">✔ </span>{state.name}: {state.rows} rows put in the table. Saving the step keeps them.</p> : null}
+        {state.kind === 'filled' ? <p role="status" className="text-verdict-pass"><StatusIcon name="pass" className="mr-1" />{state.name}: {state.rows} rows put in the table. Saving the step keeps them.</p> : null}
         {state.kind === 'refused' ? (
           <div role="alert" className="rounded border border-verdict-fail bg-white p-3" data-testid={`${idPrefix}-csv-errors`}>
-            <p className="font-semibold text-verdict-fail"><span aria-hidden="true">✖ </span>{state.name}: {state.error}</p>
+            <p className="font-semibold text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{state.name}: {state.error}</p>
             {state.issues.length > 0 ? <ul className="mt-1 space-y-1">{state.issues.map((i, n) => <li key={n}><span className="num font-semibold">{i.path === 'file' ? 'File' : i.path.replace(/^line/, 'Line')}</span>: {i.message}</li>)}</ul> : null}
           </div>
         ) : null}

@@ -10,6 +10,7 @@ import { StepActions } from '../step-actions';
 import { useStepSave } from '../use-step-save';
 import { HydrographFields } from './hydrograph-fields';
 import { StorageFields } from './storage-fields';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 type Props = {
   schemeId: string;
@@ -47,9 +48,9 @@ export function ReservoirStepForm({ schemeId, revisionId, units, datum, events, 
       </label>
       {routed ? (
         <div className="space-y-6">
-          {e('reservoir') ? <p role="alert" className="text-sm text-verdict-fail"><span aria-hidden="true">✖ </span>The reservoir {e('reservoir')}</p> : null}
+          {e('reservoir') ? <p role="alert" className="text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />The reservoir {e('reservoir')}</p> : null}
           <StorageFields form={form} units={u} revisionId={revisionId} crestLevel={crestLevel} levelWords={levelWords} />
-          {e('hydrographs') ? <p role="alert" className="text-sm text-verdict-fail"><span aria-hidden="true">✖ </span>The inflow hydrographs {e('hydrographs')}</p> : null}
+          {e('hydrographs') ? <p role="alert" className="text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />The inflow hydrographs {e('hydrographs')}</p> : null}
           {events.map((event, i) => <HydrographFields key={i} form={form} index={i} event={event} dischargeUnit={u.discharge} revisionId={revisionId} />)}
         </div>
       ) : null}

@@ -5,6 +5,7 @@ import { inputClassName } from '@/components/ui/form-field';
 import { asNumber, errorAt, numberInputProps } from '../../form-values';
 import { describedBy } from '../../wizard-field';
 import { CsvFill, type CsvRows, type CsvTable } from './csv-fill';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 export interface RowColumn {
   key: string;
@@ -32,7 +33,7 @@ export function RowsEditor<T extends FieldValues>({ idPrefix, caption, name, col
   const empty = Object.fromEntries(columns.map((c) => [c.key, undefined]));
   return (
     <div>
-      {listError ? <p role="alert" className="mb-2 text-sm text-verdict-fail"><span aria-hidden="true">✖ </span>The {caption.toLowerCase()} {listError}</p> : null}
+      {listError ? <p role="alert" className="mb-2 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />The {caption.toLowerCase()} {listError}</p> : null}
       <table className="w-full max-w-xl border-collapse text-sm">
         <caption className="mb-1 text-left text-xs text-ink-faint">{caption}: {rows.fields.length} row{rows.fields.length === 1 ? '' : 's'}</caption>
         <thead>

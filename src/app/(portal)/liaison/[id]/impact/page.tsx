@@ -9,6 +9,7 @@ import { CautionNote } from '@/components/ui/caution-note';
 import { EmptyState } from '@/components/ui/empty-state';
 import { buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { UnreadableAddress } from '@/components/ui/unreadable-address';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { CATEGORY_WORDS } from '../../_components/category-label';
 import { StripLegend } from '../../_components/parcel-strip-svg';
 import { orNotFound, requireLiaisonPage } from '../../_components/scheme-page-access';
@@ -41,7 +42,7 @@ export default async function ImpactPage({ params, searchParams }: { params: Pro
         <a className="text-sm text-accent underline" href={`/api/parcels/${id}/export?table=impact&revision=${encodeURIComponent(table.revision.id)}`} download>Export as CSV<span className="sr-only"> (the impact of revision {table.revision.number}, one row per parcel and flood event)</span></a>
       </form>
       {table.revision.preliminary ? (
-        <p role="note" className="mb-6 border-l-4 border-verdict-caution bg-paper-deep px-4 py-3 text-sm"><span aria-hidden="true">⚠ </span><strong>Preliminary.</strong> Revision {table.revision.number} is {table.revision.status}, not countersigned: these figures may change, and letters made from it are watermarked PRELIMINARY.</p>
+        <p role="note" className="mb-6 border-l-4 border-verdict-caution bg-paper-deep px-4 py-3 text-sm"><StatusIcon name="caution" className="mr-1" /><strong>Preliminary.</strong> Revision {table.revision.number} is {table.revision.status}, not countersigned: these figures may change, and letters made from it are watermarked PRELIMINARY.</p>
       ) : null}
       <p className="mb-4 text-sm text-ink-soft">
         Computed from revision <span className="num">{table.revision.number}</span>’s {table.revision.resultsStored ? 'stored' : 'freshly evaluated'} with- and without-scheme profiles (engine <span className="num">{table.revision.engineVersion}</span>), parcels register version <span className="num">{table.register?.version ?? '—'}</span>.

@@ -20,13 +20,18 @@ export function ReachImpactChart({ sections, parcels }: { sections: ReachLongSec
   const low = Math.min(...levels);
   const high = Math.max(...levels);
   const pad = (high - low) * 0.08;
-  const band = (affected: boolean) => parcels.filter((p) => p.affected === affected).flatMap((p) => [{ x: p.from, y: low - pad / 2 }, { x: p.to, y: low - pad / 2 }, { x: p.to, y: null }]);
+  // Frontages that touch would merge into one bar: neighbours along the reach alternate between two lanes.
+  const lane = new Map([...parcels].sort((a, b) => a.from - b.from || a.to - b.to).map((p, i) => [p, i % 2]));
+  const band = (affected: boolean) => parcels.filter((p) => p.affected === affected).flatMap((p) => {
+    const y = low - pad * (lane.get(p) === 0 ? 0.35 : 0.75);
+    return [{ x: p.from, y }, { x: p.to, y }, { x: p.to, y: null }];
+  });
   const datasets: Dataset[] = [
     ...(section.points.every((p) => p.bank !== null) ? [line('Top of bank', section.points.map((p) => ({ x: p.distance, y: p.bank })), CHART_COLOURS.bank, { borderDash: [8, 3, 2, 3] })] : []),
     line('Water level without the scheme', section.points.map((p) => ({ x: p.distance, y: p.withoutScheme })), CHART_COLOURS.without, { borderDash: [6, 4] }),
     line('Water level with the scheme', section.points.map((p) => ({ x: p.distance, y: p.withScheme })), CHART_COLOURS.accent, { borderWidth: 3 }),
-    line('Affected parcels (bar along the bottom)', band(true), CHART_COLOURS.fail, { borderWidth: 6 }),
-    line('Other parcels (dashed bar along the bottom)', band(false), CHART_COLOURS.soft, { borderWidth: 6, borderDash: [6, 3] }),
+    line('Affected parcels (bar along the bottom)', band(true), CHART_COLOURS.fail, { borderWidth: 5, borderCapStyle: 'butt' }),
+    line('Other parcels (dashed bar along the bottom)', band(false), CHART_COLOURS.soft, { borderWidth: 5, borderDash: [6, 3], borderCapStyle: 'butt' }),
   ];
   const options: ChartOptions<'scatter'> = {
     animation: false,
@@ -34,7 +39,7 @@ export function ReachImpactChart({ sections, parcels }: { sections: ReachLongSec
     plugins: { legend: { position: 'bottom', labels: { font: CHART_FONT, boxWidth: 28 } }, tooltip: { callbacks: { label: (c) => `${c.dataset.label}: ${c.parsed.y?.toFixed(2)} m at ${c.parsed.x?.toFixed(0)} m` } } },
     scales: {
       x: { type: 'linear', min: 0, title: { display: true, text: 'Distance upstream of the structure (m)', font: CHART_FONT } },
-      y: { type: 'linear', suggestedMin: low - pad, suggestedMax: high + pad, title: { display: true, text: 'Level (m above datum)', font: CHART_FONT } },
+      y: { type: 'linear', suggestedMin: low - pad * 1.1, suggestedMax: high + pad, title: { display: true, text: 'Level (m above the datum)', font: CHART_FONT } },
     },
   };
   const caption = `Long-section for the flood "${section.event}": water level with and without the scheme along the reach, and the parcels' frontages along the bottom. The table below gives every number.`;

@@ -3,6 +3,7 @@
 import { useState } from 'react';
 import type { BatchProgress } from '@/lib/letters/batch-progress';
 import { inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { LetterStatusLabel } from '../../_components/letter-status-label';
 import { markPostedAction, resendLetterAction } from './actions';
 
@@ -44,7 +45,7 @@ export function BatchLetterRow({ letter, manage, busy, onChanged }: { letter: Ba
         </span>
       ) : null}
       {letter.failureReason ? <span className="w-full text-xs text-verdict-fail">{letter.failureReason}</span> : null}
-      {problem ? <span role="alert" className="w-full text-xs text-verdict-fail">✖ {problem}</span> : null}
+      {problem ? <span role="alert" className="w-full text-xs text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{problem}</span> : null}
     </li>
   );
 }

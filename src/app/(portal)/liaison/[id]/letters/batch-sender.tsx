@@ -6,6 +6,7 @@ import useSWR from 'swr';
 import type { BatchProgress } from '@/lib/letters/batch-progress';
 import { buttonClassName } from '@/components/ui/form-field';
 import { ConfirmPanel } from '@/components/ui/confirm-panel';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { withdrawBatchAction } from './actions';
 import { BatchLetterRow } from './batch-letter-row';
 import { BatchSummary } from './batch-summary';
@@ -64,7 +65,7 @@ export function BatchSender({ batchId, manage, initiallyOpen }: { batchId: strin
     router.refresh();
   };
 
-  if (error) return <p role="alert" className="text-sm text-verdict-fail">✖ {error.message}</p>;
+  if (error) return <p role="alert" className="text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{error.message}</p>;
   if (!data) return <p className="text-sm text-ink-soft">Reading the batch…</p>;
   const { counts } = data;
   const byEmail = data.total - counts['to-post'] - counts.posted - counts.withdrawn;
@@ -97,7 +98,7 @@ export function BatchSender({ batchId, manage, initiallyOpen }: { batchId: strin
           ) : <>Withdrawn before sending: none of its <span className="num">{data.total}</span> letters went out.</>}
           {counts.held > 0 ? <> <span className="num">{counts.held}</span> held and not sent: the certificate of revision <span className="num">{data.revisionNumber}</span> was revoked.</> : null}
         </p>
-        {problem ? <p role="alert" className="mt-1 text-sm text-verdict-fail">✖ {problem}</p> : null}
+        {problem ? <p role="alert" className="mt-1 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{problem}</p> : null}
       </div>
       <details open={initiallyOpen} className="mt-3">
         <summary className="cursor-pointer text-sm text-accent">The letters of this batch</summary>

@@ -7,6 +7,7 @@ import { useForm } from 'react-hook-form';
 import { revisionStanding } from '@/lib/certificates/revision-standing';
 import { type GenerateLettersInput, generateLettersSchema } from '@/lib/validation/letter-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { generateLettersAction } from './actions';
 import { ParcelChooser } from './parcel-chooser';
 
@@ -39,16 +40,16 @@ export function GenerateForm({ schemeId, revisions }: { schemeId: string; revisi
   return (
     <form onSubmit={onSubmit} noValidate className="max-w-xl">
       <h2 className="mb-3 text-lg font-semibold">Make letters</h2>
-      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-3 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}>{message.ok ? '✔ ' : '✖ '}{message.text}</p> : null}
+      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-3 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}><StatusIcon name={message.ok ? 'pass' : 'fail'} className="mr-1" />{message.text}</p> : null}
       <FormField id="letters-revision" label="From revision" hint="One letter for each parcel the impact table shows as affected, from the current parcels register and letter template." error={formState.errors.revisionId?.message}>
         <select id="letters-revision" className={inputClassName} aria-describedby="letters-revision-hint" {...revisionField} onChange={(e) => { setValue('parcelReferences', undefined); return onRevisionChange(e); }}>
           {revisions.map((r) => <option key={r.id} value={r.id}>Revision {r.number} ({revisionStanding(r)})</option>)}
         </select>
       </FormField>
-      {chosen?.revoked ? <p role="note" className="mb-4 border-l-4 border-verdict-fail bg-paper-deep px-3 py-2 text-sm"><span aria-hidden="true">✖ </span>The certificate of revision {chosen.number} was revoked: letters cannot be made from it.</p> : null}
-      {chosen && !chosen.revoked && chosen.status !== 'countersigned' ? <p role="note" className="mb-4 border-l-4 border-verdict-caution bg-paper-deep px-3 py-2 text-sm"><span aria-hidden="true">⚠ </span>Revision {chosen.number} is not countersigned: its letters will be watermarked PRELIMINARY.</p> : null}
+      {chosen?.revoked ? <p role="note" className="mb-4 border-l-4 border-verdict-fail bg-paper-deep px-3 py-2 text-sm"><StatusIcon name="fail" className="mr-1" />The certificate of revision {chosen.number} was revoked: letters cannot be made from it.</p> : null}
+      {chosen && !chosen.revoked && chosen.status !== 'countersigned' ? <p role="note" className="mb-4 border-l-4 border-verdict-caution bg-paper-deep px-3 py-2 text-sm"><StatusIcon name="caution" className="mr-1" />Revision {chosen.number} is not countersigned: its letters will be watermarked PRELIMINARY.</p> : null}
       {chosen && !chosen.revoked ? <ParcelChooser schemeId={schemeId} revisionId={chosen.id} chosen={parcelReferences} onChange={(refs) => setValue('parcelReferences', refs)} /> : null}
-      {formState.errors.parcelReferences ? <p role="alert" className="mb-3 text-sm text-verdict-fail">✖ Parcels to write to: {formState.errors.parcelReferences.message}</p> : null}
+      {formState.errors.parcelReferences ? <p role="alert" className="mb-3 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />Parcels to write to: {formState.errors.parcelReferences.message}</p> : null}
       <button type="submit" className={buttonClassName} disabled={formState.isSubmitting}>{formState.isSubmitting ? 'Making letters…' : 'Make letters'}</button>
     </form>
   );

@@ -2,6 +2,7 @@
 
 import useSWR from 'swr';
 import type { ParcelImpactTable } from '@/lib/parcels/compute-parcel-impact';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 async function fetchImpact(url: string): Promise<ParcelImpactTable> {
   const response = await fetch(url);
@@ -15,7 +16,7 @@ async function fetchImpact(url: string): Promise<ParcelImpactTable> {
  */
 export function ParcelChooser({ schemeId, revisionId, chosen, onChange }: { schemeId: string; revisionId: string; chosen: string[] | undefined; onChange: (references: string[] | undefined) => void }) {
   const { data, error } = useSWR(revisionId ? `/api/parcels/${schemeId}/impact?revision=${encodeURIComponent(revisionId)}` : null, fetchImpact, { revalidateOnFocus: false, revalidateOnReconnect: false });
-  if (error) return <p role="alert" className="mb-4 text-sm text-verdict-fail">✖ {(error as Error).message}</p>;
+  if (error) return <p role="alert" className="mb-4 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{(error as Error).message}</p>;
   if (!data) return <p className="mb-4 text-sm text-ink-soft">Reading which parcels this revision affects…</p>;
   const affected = data.rows.filter((r) => r.category === 'affected').map((r) => r.parcel);
   if (affected.length === 0) return <p className="mb-4 text-sm text-ink-soft">This revision affects no parcel of the register, so there is no one to write to.</p>;

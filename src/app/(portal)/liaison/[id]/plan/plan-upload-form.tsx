@@ -4,6 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { coordinateSystemSchema } from '@/lib/validation/plan-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 type Outcome = { ok: true; text: string } | { ok: false; text: string; problems: string[] } | null;
 
@@ -42,10 +43,10 @@ export function PlanUploadForm({ schemeId, limitBytes }: { schemeId: string; lim
         <input id="plan-system" value={system} onChange={(e) => setSystem(e.target.value)} className={inputClassName} aria-invalid={errors.system ? true : undefined} aria-describedby={errors.system ? 'plan-system-hint plan-system-error' : 'plan-system-hint'} />
       </FormField>
       <button type="submit" className={buttonClassName} disabled={busy}>Upload the plan</button>
-      {outcome?.ok ? <p role="status" className="mt-3 text-sm text-verdict-pass"><span aria-hidden="true">✔ </span>{outcome.text}</p> : null}
+      {outcome?.ok ? <p role="status" className="mt-3 text-sm text-verdict-pass"><StatusIcon name="pass" className="mr-1" />{outcome.text}</p> : null}
       {outcome && !outcome.ok ? (
         <div role="alert" className="mt-3 border-l-4 border-verdict-fail bg-paper-deep px-4 py-3 text-sm">
-          <p className="font-semibold"><span aria-hidden="true">✖ </span>{outcome.text}</p>
+          <p className="font-semibold"><StatusIcon name="fail" className="mr-1" />{outcome.text}</p>
           {outcome.problems.length ? <ul className="mt-2 list-disc pl-5">{outcome.problems.map((p, i) => <li key={i}>{p}</li>)}</ul> : null}
         </div>
       ) : null}

@@ -6,6 +6,7 @@ import { useState } from 'react';
 import { type FieldPath, useFieldArray, useForm } from 'react-hook-form';
 import { BANK_SIDES, type ParcelInput, type SaveParcelsInput, saveParcelsSchema } from '@/lib/validation/parcel-schemas';
 import { buttonClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { saveParcelEditsAction } from './actions';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 
@@ -38,15 +39,15 @@ export function RegisterForm({ schemeId, baseRegisterId, parcels }: { schemeId: 
     return (
       <td className={`py-1 pr-2 align-top ${options.className ?? ''}`}>
         <input id={id} aria-label={`${label}, row ${i + 1}`} aria-invalid={error ? true : undefined} aria-describedby={error ? `${id}-error` : undefined} type={options.type ?? 'text'} step={options.number ? 'any' : undefined} className={cell} {...form.register(`parcels.${i}.${name}`, setValueAs ? { setValueAs } : {})} />
-        {error ? <p id={`${id}-error`} className="mt-0.5 text-xs text-verdict-fail"><span aria-hidden="true">✖ </span>{error}</p> : null}
+        {error ? <p id={`${id}-error`} className="mt-0.5 text-xs text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{error}</p> : null}
       </td>
     );
   };
 
   return (
     <form onSubmit={onSubmit} noValidate>
-      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-3 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}>{message.ok ? '✔ ' : '✖ '}{message.text}</p> : null}
-      {errors.parcels?.message || errors.parcels?.root?.message ? <p role="alert" className="mb-3 text-sm text-verdict-fail">✖ Parcels: {errors.parcels?.message ?? errors.parcels?.root?.message}</p> : null}
+      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-3 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}><StatusIcon name={message.ok ? 'pass' : 'fail'} className="mr-1" />{message.text}</p> : null}
+      {errors.parcels?.message || errors.parcels?.root?.message ? <p role="alert" className="mb-3 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />Parcels: {errors.parcels?.message ?? errors.parcels?.root?.message}</p> : null}
       <ScrollRegion label="Parcels register, editable">
         <table className="w-full border-collapse text-sm">
           <caption className="sr-only">Parcels register, editable</caption>

@@ -5,6 +5,7 @@ import type { LetterPreview as Preview } from '@/lib/letters/preview-letter';
 import { longDate } from '@/lib/dates/calendar-dates';
 import type { SaveLetterTemplateInput } from '@/lib/validation/letter-schemas';
 import { buttonClassName, inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { previewLetterAction } from './actions';
 import { fieldWords } from './template-fields';
 
@@ -31,7 +32,7 @@ export function LetterPreview({ parcels, values }: { parcels: { reference: strin
         </select>
         <button type="button" className={buttonClassName} onClick={show}>Preview the letter</button>
       </div>
-      {problem ? <p role="alert" className="mt-2 text-sm text-verdict-fail">✖ {problem}</p> : null}
+      {problem ? <p role="alert" className="mt-2 text-sm text-verdict-fail"><StatusIcon name="fail" className="mr-1" />{problem}</p> : null}
       {preview ? (
         <article aria-label={`Preview of the letter to ${preview.address[0]}`} className="mt-4 rounded border border-paper-edge bg-white p-5 text-sm leading-relaxed" data-testid="letter-preview">
           <p className="font-semibold">{preview.organisation}</p>

@@ -6,6 +6,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { type LetterParagraphs, MAX_RESPONSE_DAYS, MIN_RESPONSE_DAYS, type SaveLetterTemplateInput, saveLetterTemplateSchema } from '@/lib/validation/letter-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { saveLetterTemplateAction } from './actions';
 import { LetterPreview } from './letter-preview';
 import { FIELDS } from './template-fields';
@@ -29,7 +30,7 @@ export function TemplateForm({ schemeId, paragraphs, responseDays, version, read
   return (
     <form onSubmit={onSubmit} noValidate>
       <h2 className="mb-3 text-lg font-semibold">Letter paragraphs{version ? <span className="num ml-2 text-sm font-normal text-ink-soft">version {version}</span> : null}</h2>
-      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-3 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}>{message.ok ? '✔ ' : '✖ '}{message.text}</p> : null}
+      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-3 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}><StatusIcon name={message.ok ? 'pass' : 'fail'} className="mr-1" />{message.text}</p> : null}
       {FIELDS.map((f) => (
         <FormField key={f.name} id={`template-${f.name}`} label={f.label} hint={f.hint} error={formState.errors[f.name]?.message}>
           <textarea id={`template-${f.name}`} rows={f.rows} readOnly={readOnly} aria-describedby={`template-${f.name}-hint${formState.errors[f.name] ? ` template-${f.name}-error` : ''}`} aria-invalid={formState.errors[f.name] ? true : undefined} className={inputClassName} {...register(f.name)} />

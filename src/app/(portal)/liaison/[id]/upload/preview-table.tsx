@@ -1,6 +1,7 @@
 import { PARCEL_COLUMNS, type ParcelColumn } from '@/lib/parcels/parcel-columns';
 import type { ParcelsCsvPreview } from '@/lib/parcels/preview-parcels-csv';
 import { ScrollRegion } from '@/components/ui/scroll-region';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 const COLUMNS = Object.keys(PARCEL_COLUMNS) as ParcelColumn[];
 
@@ -21,7 +22,7 @@ export function PreviewTable({ preview }: { preview: ParcelsCsvPreview }) {
         <tbody>
           {preview.rows.map((row) => (
             <tr key={row.line} className={`border-b border-paper-edge align-top ${badLine.has(row.line) ? 'bg-paper-deep' : ''}`}>
-              <th scope="row" className="num py-1 pr-2 text-left">{row.line}{badLine.has(row.line) ? <span className="text-verdict-fail"> ✖<span className="sr-only"> has problems</span></span> : null}</th>
+              <th scope="row" className="num py-1 pr-2 text-left">{row.line}{badLine.has(row.line) ? <span className="text-verdict-fail"> <StatusIcon name="fail" /><span className="sr-only"> has problems</span></span> : null}</th>
               {COLUMNS.map((c) => (
                 <td key={c} className={`py-1 pr-2 ${bad.has(`${row.line}:${c}`) ? 'font-semibold text-verdict-fail underline decoration-dotted' : ''}`}>
                   {row.values[c] || <span className="text-ink-faint">—</span>}

@@ -6,6 +6,7 @@ import { useState } from 'react';
 import type { CsvIssue } from '@/lib/parcels/parcel-columns';
 import type { ParcelsCsvPreview } from '@/lib/parcels/preview-parcels-csv';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { PreviewTable } from './preview-table';
 
 type State = { kind: 'idle' } | { kind: 'checking' } | { kind: 'previewed'; preview: ParcelsCsvPreview } | { kind: 'refused'; message: string } | { kind: 'stored'; version: number; parcels: number };
@@ -51,17 +52,17 @@ export function UploadForm({ schemeId, limitBytes }: { schemeId: string; limitBy
       {state.kind === 'checking' ? <p role="status" className="text-sm">Checking the file…</p> : null}
       {state.kind === 'stored' ? (
         <p role="status" className="rounded border border-verdict-pass px-4 py-3 text-sm">
-          <span aria-hidden="true">✔ </span>Stored as register version <span className="num">{state.version}</span> with <span className="num">{state.parcels}</span> parcels.{' '}
+          <StatusIcon name="pass" className="mr-1" />Stored as register version <span className="num">{state.version}</span> with <span className="num">{state.parcels}</span> parcels.{' '}
           <Link className="text-accent underline" href={`/liaison/${schemeId}/impact`}>See the impact on each parcel</Link>
         </p>
       ) : null}
       {state.kind === 'previewed' ? (
         <>
           {state.preview.ok ? (
-            <p role="status" className="mb-3 text-sm"><span aria-hidden="true">✔ </span>All <span className="num">{state.preview.rowCount}</span> parcels are valid.</p>
+            <p role="status" className="mb-3 text-sm"><StatusIcon name="pass" className="mr-1" />All <span className="num">{state.preview.rowCount}</span> parcels are valid.</p>
           ) : (
             <div role="alert" className="mb-3 border-l-4 border-verdict-fail bg-paper-deep px-4 py-3 text-sm">
-              <p className="font-semibold"><span aria-hidden="true">✖ </span>{issues.length} problem{issues.length === 1 ? '' : 's'} to correct in the file; nothing can be stored until they are fixed.</p>
+              <p className="font-semibold"><StatusIcon name="fail" className="mr-1" />{issues.length} problem{issues.length === 1 ? '' : 's'} to correct in the file; nothing can be stored until they are fixed.</p>
               <ul className="mt-2 list-disc pl-5">{issues.map((i, n) => <li key={n}><span className="num">Line {i.line}</span>{i.column ? <>, <span className="num">{i.column}</span></> : null}: {i.message}</li>)}</ul>
             </div>
           )}

@@ -3,6 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useState, useTransition } from 'react';
 import { buttonClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { adoptSizedCrestAction } from '../actions';
 
 type Governing = { margin: number; event: string; limit: string };
@@ -23,7 +24,7 @@ export function CrestSizingPanel({ revisionId, vary, value, reason, governing, c
       </p>
       {governing ? <p className="text-sm" data-testid="sizing-governing">Governed by <strong>{governing.limit}</strong> in <strong>{governing.event}</strong>, margin <span className="num">{governing.margin.toFixed(3)} {u}</span> at the sized value.</p> : null}
       <p className="text-xs text-ink-faint">{reason}. The {what} in the draft now: <span className="num">{current === null ? '—' : `${current.toFixed(3)} ${u}`}</span>.</p>
-      {adopted ? <p role="status" className="mt-2 text-sm text-verdict-pass"><span aria-hidden="true">✔ </span>The draft already uses this {what}.</p> : null}
+      {adopted ? <p role="status" className="mt-2 text-sm text-verdict-pass"><StatusIcon name="pass" className="mr-1" />The draft already uses this {what}.</p> : null}
       {editable && value !== null && !adopted ? (
         <button
           type="button"
@@ -38,7 +39,7 @@ export function CrestSizingPanel({ revisionId, vary, value, reason, governing, c
           {pending ? 'Adopting…' : `Adopt ${value.toFixed(3)} ${u} as the ${what}`}
         </button>
       ) : null}
-      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mt-2 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}>{message.ok ? '✔ ' : '✖ '}{message.text}</p> : null}
+      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mt-2 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}><StatusIcon name={message.ok ? 'pass' : 'fail'} className="mr-1" />{message.text}</p> : null}
     </div>
   );
 }

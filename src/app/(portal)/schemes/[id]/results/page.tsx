@@ -10,7 +10,9 @@ import { indexQuery, numberFromOneQuery, readQuery } from '@/lib/http/query-para
 import { completedSteps, unitWords } from '@/lib/revisions/draft-inputs';
 import { evaluateDraft } from '@/lib/revisions/evaluate-draft';
 import { frozenIntegrity } from '@/lib/revisions/frozen-integrity';
+import { ratingForSheet } from '@/lib/revisions/rating-for-sheet';
 import { featuredEventIndex } from '@/lib/revisions/results-sheet';
+import { listAvailableCheckers } from '@/lib/review/list-available-checkers';
 import { findSchemeRevision } from '@/lib/schemes/find-scheme-revision';
 import { isEditable } from '@/lib/schemes/scheme-access';
 import { WizardProgress } from '@/components/forms/wizard/wizard-progress';
@@ -20,6 +22,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { RevocationNotice } from '@/components/ui/revocation-notice';
 import { StatusLabel } from '@/components/ui/status-label';
 import { UnreadableAddress } from '@/components/ui/unreadable-address';
+import { SubmitForCheckForm } from '../../../revisions/[id]/submit-for-check-form';
 import { IncompleteNotice } from './incomplete-notice';
 import { ResultsSheet } from './results-sheet';
 
@@ -61,8 +64,12 @@ export default async function ResultsPage({ params, searchParams }: { params: Pr
           governing={draft.wizard?.governing ?? 'all'}
           datum={draft.wizard?.datum ?? null}
           units={unitWords(evaluation.input.units)}
+          rating={await ratingForSheet(evaluation.input)}
           editable={editable}
         />
+      ) : null}
+      {editable && evaluation.status === 'evaluated' ? (
+        <SubmitForCheckForm className="mt-10" revisionId={revision.id} checkers={await listAvailableCheckers(revision.authorId)} submittedHref={`/revisions/${revision.id}`} />
       ) : null}
     </>
   );

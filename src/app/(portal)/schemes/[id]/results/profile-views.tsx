@@ -7,15 +7,16 @@ import { CrossSectionChart } from '@/components/charts/cross-section-chart';
 import { LongSectionChart } from '@/components/charts/long-section-chart';
 import { drawingHeight, prismaticOutline } from '@/components/charts/section-outline';
 
-type Props = { data: LongSectionData; profile: ProfilePoint[]; outline: SectionOutline; lengthUnit: string; levelTitle: string; caption: string };
+type Props = { data: LongSectionData; profile: ProfilePoint[]; outline: SectionOutline; lengthUnit: string; levelTitle: string; levelWords: string; caption: string };
 
 function nearestSection(outline: Extract<SectionOutline, { kind: 'surveyed' }>, distance: number) {
   return outline.sections.reduce((best, s) => (Math.abs(s.distanceUpstream - distance) < Math.abs(best.distanceUpstream - distance) ? s : best));
 }
 
 /** The long-section, and the cross-section at whichever computed point the designer picks. */
-export function ProfileViews({ data, profile, outline, lengthUnit: u, levelTitle, caption }: Props) {
+export function ProfileViews({ data, profile, outline, lengthUnit: u, levelTitle, levelWords, caption }: Props) {
   const [index, setIndex] = useState(0);
+  const [energy, setEnergy] = useState(false);
   const point = profile[Math.min(index, profile.length - 1)];
   let section: ReactNode = null;
   if (point && outline.kind === 'prismatic') {
@@ -30,7 +31,10 @@ export function ProfileViews({ data, profile, outline, lengthUnit: u, levelTitle
   }
   return (
     <div className="space-y-6">
-      <LongSectionChart data={data} lengthUnit={u} levelTitle={levelTitle} caption={caption} />
+      <div>
+        <label className="mb-2 flex items-center gap-2 text-sm print:hidden"><input type="checkbox" checked={energy} onChange={(e) => setEnergy(e.target.checked)} /> Show the energy line (water level plus the velocity head)</label>
+        <LongSectionChart data={data} lengthUnit={u} levelTitle={levelTitle} levelWords={levelWords} caption={caption} showEnergyLine={energy} />
+      </div>
       <div className="grid gap-6 lg:grid-cols-[1fr_2fr]">
         <div>
           <label htmlFor="profile-point" className="block text-sm font-semibold">Cross-section at</label>

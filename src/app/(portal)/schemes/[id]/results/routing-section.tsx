@@ -9,6 +9,7 @@ import { RoutingChartTable } from './routing-chart-table';
 import { RoutingFacts } from './routing-facts';
 import { RoutingInputs } from './routing-inputs';
 import { RoutingTable } from './routing-table';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 type Props = {
   event: EventResult;
@@ -37,7 +38,7 @@ export function RoutingSection({ event, routing, caseUnits, units, datum, csvHre
         <h3 className="mb-2 mt-6 font-semibold">Assumptions</h3>
         <ul className="list-disc space-y-1 pl-5 text-sm">{routing.assumptions.map((a) => <li key={a}>{a}</li>)}</ul>
         <p role="note" className="mt-4 border-l-4 border-verdict-caution bg-paper-deep px-4 py-3 text-sm text-ink-soft">
-          <span aria-hidden="true">⚠ </span>
+          <StatusIcon name="caution" className="mr-1" />
           <strong className="font-semibold text-ink">Caution.</strong> The reservoir is taken as level from the structure to its head (level-pool routing). Wind set-up,
           waves, a spillway partly blocked by debris, and a reservoir already above the start level when the flood arrives all raise the peak level above the figure shown.
         </p>

@@ -14,7 +14,7 @@ export function StepTable({ rows, columns, csvHref, eventName }: { rows: Profile
   const shown = rows.slice(page * PAGE, page * PAGE + PAGE);
   return (
     <div>
-      <div className="overflow-x-auto">
+      <div role="region" aria-label={`Step table of ${eventName}`} tabIndex={0} className="scroll-cue relative overflow-x-auto">
         <table className="w-full border-collapse text-sm">
           <caption className="mb-2 text-left text-sm text-ink-soft">Step table of {eventName} with the scheme: rows {page * PAGE + 1}–{page * PAGE + shown.length} of {rows.length}.</caption>
           <thead>

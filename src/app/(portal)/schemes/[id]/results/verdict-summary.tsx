@@ -1,12 +1,13 @@
 import type { ReactNode } from 'react';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
+import { StatusIcon } from '@/components/ui/status-icon';
 
 const f = (x: number, d = 3) => x.toFixed(d);
 
 export function VerdictWord({ pass, children }: { pass: boolean; children?: ReactNode }) {
   return (
     <span className={`inline-flex items-center gap-1 font-semibold ${pass ? 'text-verdict-pass' : 'text-verdict-fail'}`}>
-      <span aria-hidden="true">{pass ? '✔' : '✖'}</span>
+      <StatusIcon name={pass ? 'pass' : 'fail'} />
       {children ?? (pass ? 'Pass' : 'Fail')}
     </span>
   );
@@ -24,7 +25,7 @@ export function VerdictSummary({ result, lengthUnit, governingName }: { result: 
       </h2>
       {result.robustness?.status === 'not-robust' ? (
         <p className="mt-2 text-sm font-semibold text-verdict-caution" data-testid="robustness">
-          <span aria-hidden="true">⚠ </span>Passes, but not robustly: {result.robustness.reasons.join('; ')}.
+          <StatusIcon name="caution" className="mr-1" />Passes, but not robustly: {result.robustness.reasons.join('; ')}.
         </p>
       ) : result.robustness?.status === 'robust' && !noLimits ? (
         <p className="mt-2 text-sm" data-testid="robustness">Robust: the least margin is at least the minimum margin of <span className="num">{f(result.robustness.minimumMargin)} {u}</span>{result.sensitivity ? ', and every sensitivity run passes' : ' (no sensitivity runs were asked for)'}.</p>
@@ -33,16 +34,16 @@ export function VerdictSummary({ result, lengthUnit, governingName }: { result: 
         <p className="mt-1 text-sm">Governing event (least margin): <strong>{result.governingEvent.name}</strong>, margin <span className="num">{f(result.governingEvent.leastMargin)} {u}</span>.{governingName && governingName !== result.governingEvent.name ? ` You marked ${governingName} as the design event.` : ''}</p>
       ) : null}
       {result.events.map((e) => (e.limits.length === 0 ? null : (
-        <div key={e.name} className="mt-4 overflow-x-auto">
+        <div key={e.name} role="region" aria-label={`Limits in ${e.name}`} tabIndex={0} className="scroll-cue relative mt-4 overflow-x-auto">
           <table className="w-full border-collapse text-sm">
             <caption className="mb-1 text-left font-semibold">{e.name}: <VerdictWord pass={e.verdict === 'pass'} /></caption>
             <thead>
               <tr className="border-b border-paper-edge text-left text-ink-soft">
                 <th scope="col" className="py-1 pr-3">Limit</th>
-                <th scope="col" className="py-1 pr-3 text-right">Distance ({u})</th>
-                <th scope="col" className="py-1 pr-3 text-right">Maximum level ({u})</th>
-                <th scope="col" className="py-1 pr-3 text-right">Freeboard ({u})</th>
-                <th scope="col" className="py-1 pr-3 text-right">Water level with / without ({u})</th>
+                <th scope="col" className="hidden py-1 pr-3 text-right sm:table-cell">Distance ({u})</th>
+                <th scope="col" className="hidden py-1 pr-3 text-right sm:table-cell">Maximum level ({u})</th>
+                <th scope="col" className="hidden py-1 pr-3 text-right sm:table-cell">Freeboard ({u})</th>
+                <th scope="col" className="hidden py-1 pr-3 text-right sm:table-cell">Water level with / without ({u})</th>
                 <th scope="col" className="py-1 pr-3 text-right">Margin ({u})</th>
                 <th scope="col" className="py-1">Result</th>
               </tr>
@@ -50,11 +51,15 @@ export function VerdictSummary({ result, lengthUnit, governingName }: { result: 
             <tbody>
               {e.limits.map((l) => (
                 <tr key={l.label} className="border-b border-paper-edge">
-                  <th scope="row" className="py-1 pr-3 text-left font-normal">{l.label}{l.source === 'beyond-profile' ? <span className="block text-xs text-ink-faint">beyond the backwater: level without the scheme</span> : null}{l.source === 'reservoir' ? <span className="block text-xs text-ink-faint">within the reservoir: checked against the peak reservoir level</span> : null}</th>
-                  <td className="num py-1 pr-3 text-right">{f(l.distanceUpstream, 1)}</td>
-                  <td className="num py-1 pr-3 text-right">{f(l.maxLevel)}</td>
-                  <td className="num py-1 pr-3 text-right">{f(l.freeboard)}</td>
-                  <td className="num py-1 pr-3 text-right">{f(l.waterLevel)} / {f(l.withoutSchemeLevel)}</td>
+                  <th scope="row" className="py-1 pr-3 text-left font-normal">
+                    {l.label}{l.source === 'beyond-profile' ? <span className="block text-xs text-ink-faint">beyond the backwater: level without the scheme</span> : null}{l.source === 'reservoir' ? <span className="block text-xs text-ink-faint">within the reservoir: checked against the peak reservoir level</span> : null}
+                    {/* On a phone the key columns (margin, result) stay; the rest are stacked under the limit's name. */}
+                    <span className="num block text-xs text-ink-soft sm:hidden">{f(l.distanceUpstream, 1)} {u} upstream · maximum {f(l.maxLevel)} · freeboard {f(l.freeboard)} · water {f(l.waterLevel)} / {f(l.withoutSchemeLevel)} without</span>
+                  </th>
+                  <td className="num hidden py-1 pr-3 text-right sm:table-cell">{f(l.distanceUpstream, 1)}</td>
+                  <td className="num hidden py-1 pr-3 text-right sm:table-cell">{f(l.maxLevel)}</td>
+                  <td className="num hidden py-1 pr-3 text-right sm:table-cell">{f(l.freeboard)}</td>
+                  <td className="num hidden py-1 pr-3 text-right sm:table-cell">{f(l.waterLevel)} / {f(l.withoutSchemeLevel)}</td>
                   <td className="num py-1 pr-3 text-right">{f(l.margin)}</td>
                   <td className="py-1"><VerdictWord pass={l.pass} /></td>
                 </tr>

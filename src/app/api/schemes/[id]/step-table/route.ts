@@ -19,5 +19,6 @@ export const GET = authorizedRoute<{ id: string }>(ANY_ROLE, async (request, use
   const event = evaluation.result.events[index];
   if (!event) throw new InvalidRequestError([{ path: 'event', message: `must be the number of one of the ${evaluation.result.events.length} events, from 0` }]);
   const fileName = `${scheme.reference}-rev${revision.number}-event${index + 1}-step-table.csv`;
-  return new Response(stepTableCsv(event, evaluation.result.units), { headers: { 'content-type': 'text/csv; charset=utf-8', 'content-disposition': `attachment; filename="${fileName}"` } });
+  const csv = stepTableCsv({ scheme, revisionNumber: revision.number, datum: evaluation.draft.wizard?.datum ?? null, event, units: evaluation.result.units, engineVersion: evaluation.result.engineVersion });
+  return new Response(csv, { headers: { 'content-type': 'text/csv; charset=utf-8', 'content-disposition': `attachment; filename="${fileName}"` } });
 });

@@ -6,6 +6,7 @@ import type { LetterDetail } from '@/lib/letters/load-letter';
 import { longDate } from '@/lib/dates/calendar-dates';
 import { buttonClassName } from '@/components/ui/form-field';
 import { LocalTime } from '@/components/ui/local-time';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { makeReminderAction } from './actions';
 
 /** The letter's deadline, its reminders (a postal one opens as a PDF to print), and making one for an unanswered letter. */
@@ -29,7 +30,7 @@ export function ReminderPanel({ detail, manage }: { detail: LetterDetail; manage
           {reminders.map((r) => <li key={r.id}>Reminder {r.channel === 'email' ? 'e-mailed' : 'to post'} <LocalTime iso={r.createdAt} /> by {r.madeBy}{r.channel === 'post' ? <> · <a className="text-accent underline" href={`/api/letters/reminders/${r.id}`} target="_blank" rel="noreferrer">Print the reminder</a></> : null}</li>)}
         </ul>
       ) : null}
-      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mt-2 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}>{message.ok ? '✔ ' : '✖ '}{message.text}</p> : null}
+      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mt-2 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}><StatusIcon name={message.ok ? 'pass' : 'fail'} className="mr-1" />{message.text}</p> : null}
       {manage && letter.canRemind ? <button type="button" className={`${buttonClassName} mt-3`} onClick={make}>{letter.recipientEmail && letter.status === 'sent' ? 'E-mail a reminder' : 'Make a reminder letter to post'}</button> : null}
     </section>
   );

@@ -6,6 +6,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { type LogResponseInput, RESPONSE_CHANNELS, RESPONSE_TYPES, logResponseSchema } from '@/lib/validation/letter-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { editLetterResponseAction, logLetterResponseAction } from './actions';
 
 type Values = Omit<LogResponseInput, 'letterId'>;
@@ -34,7 +35,7 @@ export function ResponseForm({ letterId, responseId, initial, onDone }: { letter
   return (
     <form onSubmit={onSubmit} noValidate className="mt-6">
       <h3 className="mb-2 font-semibold">{responseId ? 'Correct this response' : 'Log a response'}</h3>
-      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-3 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}>{message.ok ? '✔ ' : '✖ '}{message.text}</p> : null}
+      {message ? <p role={message.ok ? 'status' : 'alert'} className={`mb-3 text-sm ${message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}`}><StatusIcon name={message.ok ? 'pass' : 'fail'} className="mr-1" />{message.text}</p> : null}
       <FormField id={`${prefix}-received`} label="Received on" error={formState.errors.receivedOn?.message}>
         <input id={`${prefix}-received`} type="date" className={inputClassName} aria-invalid={invalid('receivedOn')} {...register('receivedOn')} />
       </FormField>

@@ -2,6 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
+import { StatusIcon } from '@/components/ui/status-icon';
 import { restoreRegisterVersionAction } from './actions';
 
 /** Saves an earlier version's parcels as the next version, after the officer confirms; the history keeps both. */
@@ -26,7 +27,7 @@ export function RestoreButton({ schemeId, baseRegisterId, version }: { schemeId:
       ) : (
         <button type="button" className="text-accent underline" onClick={() => setAsking(true)}>Restore v{version}</button>
       )}
-      {message ? <p role={message.ok ? 'status' : 'alert'} className={message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}><span aria-hidden="true">{message.ok ? '✔ ' : '✖ '}</span>{message.text}</p> : null}
+      {message ? <p role={message.ok ? 'status' : 'alert'} className={message.ok ? 'text-verdict-pass' : 'text-verdict-fail'}><StatusIcon name={message.ok ? 'pass' : 'fail'} className="mr-1" />{message.text}</p> : null}
     </div>
   );
 }
