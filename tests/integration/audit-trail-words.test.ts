@@ -6,6 +6,7 @@ import { describeAuditEvent } from '@/lib/audit/describe-audit-event';
 import { signIn } from '@/lib/auth/sign-in';
 import { THROTTLE_RULES } from '@/lib/auth/throttle-rules';
 import { AuditEvent } from '@/lib/db';
+import { appendEventAt } from './support/audit-fixtures';
 import { RAFE_CLIENT, useAuditScenario, view } from './support/audit-scenario';
 import { databaseDigest } from './support/database-digest';
 
@@ -68,7 +69,7 @@ describe('filters', () => {
     expect(expected.length).toBeGreaterThan(3);
   });
 
-  it('by kind of event, by scheme and by day (UTC, both ends included)', async () => {
+  it('by kind of event, by scheme and by day (both ends included)', async () => {
     const roleChanges = await view({ action: 'user.role-changed' });
     expect(roleChanges.entries.map((e) => e.what)).toEqual(['changed Rafe Calloway’s role from landowner liaison to planning officer']);
     const onScheme = await view({ scheme: scenario.s.schemeId });
@@ -117,3 +118,30 @@ describe('search', () => {
   });
 });
 
+
+// Last in the file: the events it adds are seen by no other test. BST in 2026 runs from 29 March to 25 October
+// (common knowledge of the UK rule: the last Sundays of March and October, at 01:00 UTC).
+describe('days in the portal’s time zone', () => {
+  const at = (entries: { at: string }[]) => entries.map((e) => e.at);
+
+  it('a day is the portal’s day, 23 or 25 hours long across a change of clocks, not the UTC day', async () => {
+    await appendEventAt('2026-07-01T23:30:00.000Z', { action: 'scheme.created', entityType: 'scheme' });
+    await appendEventAt('2026-10-24T23:30:00.000Z', { action: 'scheme.created', entityType: 'scheme' });
+    await appendEventAt('2026-10-25T23:30:00.000Z', { action: 'scheme.created', entityType: 'scheme' });
+    await appendEventAt('2026-10-26T00:30:00.000Z', { action: 'scheme.created', entityType: 'scheme' });
+    const saved = process.env.PORTAL_TIME_ZONE;
+    try {
+      process.env.PORTAL_TIME_ZONE = 'Europe/London';
+      expect(at((await view({ from: '2026-07-02', to: '2026-07-02' })).entries)).toEqual(['2026-07-01T23:30:00.000Z']);
+      expect((await view({ from: '2026-07-01', to: '2026-07-01' })).entries).toEqual([]);
+      expect(at((await view({ from: '2026-10-25', to: '2026-10-25' })).entries)).toEqual(['2026-10-25T23:30:00.000Z', '2026-10-24T23:30:00.000Z']);
+      expect(at((await view({ from: '2026-10-26', to: '2026-10-26' })).entries)).toEqual(['2026-10-26T00:30:00.000Z']);
+      process.env.PORTAL_TIME_ZONE = 'UTC';
+      expect(at((await view({ from: '2026-07-01', to: '2026-07-01' })).entries)).toEqual(['2026-07-01T23:30:00.000Z']);
+      expect(at((await view({ from: '2026-10-25', to: '2026-10-25' })).entries)).toEqual(['2026-10-25T23:30:00.000Z']);
+    } finally {
+      if (saved === undefined) delete process.env.PORTAL_TIME_ZONE;
+      else process.env.PORTAL_TIME_ZONE = saved;
+    }
+  });
+});

@@ -1,3 +1,4 @@
+import { portalTime } from '@/lib/dates/portal-time';
 import { StatusIcon } from '@/components/ui/status-icon';
 
 export interface RevocationView {
@@ -6,8 +7,6 @@ export interface RevocationView {
   revokedAt: string;
   reason: string;
 }
-
-const when = (iso: string) => `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
 
 /** A revoked certificate, said plainly wherever its revision's figures are read or letters are made from them. */
 export function RevocationNotice({ revocations, className = '' }: { revocations: RevocationView[]; className?: string }) {
@@ -19,7 +18,7 @@ export function RevocationNotice({ revocations, className = '' }: { revocations:
           <h2 id={`revoked-${r.certificateNumber}`} className="font-semibold text-verdict-fail">
             <StatusIcon name="fail" className="mr-1" />Certificate <span className="num">{r.certificateNumber}</span> of revision <span className="num">{r.revisionNumber}</span> is revoked
           </h2>
-          <p className="mt-1">Revoked <span className="num">{when(r.revokedAt)}</span>. Reason: {r.reason}</p>
+          <p className="mt-1">Revoked <span className="num">{portalTime(r.revokedAt)}</span>. Reason: {r.reason}</p>
           <p className="mt-1 text-ink-soft">Revision {r.revisionNumber} is no longer certified: do not rely on its figures. No letter can be made from it, and its letters that were waiting to be sent are held.</p>
         </section>
       ))}

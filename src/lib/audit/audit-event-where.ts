@@ -1,17 +1,20 @@
 import 'server-only';
 import { Op, type WhereOptions, fn, col, where as sqlWhere } from 'sequelize';
+import { portalTimeZone } from '@/lib/config/portal-time-zone';
 import type { AuditEvent } from '@/lib/db';
+import { addDays } from '@/lib/dates/calendar-dates';
+import { startOfDayIn } from '@/lib/dates/zone-day-range';
 import { InvalidRequestError } from '@/lib/http/app-errors';
 import type { AuditFilter } from '@/lib/validation/audit-filter-schema';
 import { AUDIT_ACTIONS } from './audit-actions';
 import type { AuditDirectory } from './audit-directory';
 
-const nextDay = (isoDate: string) => new Date(Date.parse(`${isoDate}T00:00:00Z`) + 86_400_000).toISOString();
 const contains = (haystack: string, needle: string) => haystack.toLowerCase().includes(needle);
 
 /**
  * The SQL conditions for a filter. A person or scheme that is not on record is a mistake in the address, reported
  * by field, rather than an empty trail. The search matches people's and schemes' names, kinds of event and details.
+ * The days are days in the portal's time zone (as the trail shows its times), queried as the UTC instants they span.
  */
 export function auditEventWhere(filter: AuditFilter, directory: AuditDirectory): WhereOptions<AuditEvent> {
   if (filter.person && !directory.people.some((p) => p.id === filter.person)) throw new InvalidRequestError([{ path: 'person', message: 'That person is not on record: choose one from the list.' }]);
@@ -20,8 +23,9 @@ export function auditEventWhere(filter: AuditFilter, directory: AuditDirectory):
   if (filter.person) conditions.push({ [Op.or]: [{ actorId: filter.person }, { entityType: 'user', entityId: filter.person }] });
   if (filter.action) conditions.push({ action: filter.action });
   if (filter.scheme) conditions.push({ schemeId: filter.scheme });
-  if (filter.from) conditions.push({ at: { [Op.gte]: `${filter.from}T00:00:00.000Z` } });
-  if (filter.to) conditions.push({ at: { [Op.lt]: nextDay(filter.to) } });
+  const timeZone = portalTimeZone();
+  if (filter.from) conditions.push({ at: { [Op.gte]: startOfDayIn(timeZone, filter.from).toISOString() } });
+  if (filter.to) conditions.push({ at: { [Op.lt]: startOfDayIn(timeZone, addDays(filter.to, 1)).toISOString() } });
   if (filter.before !== null) conditions.push({ id: { [Op.lt]: filter.before } });
   if (filter.q) conditions.push(searchCondition(filter.q.toLowerCase(), directory));
   return { [Op.and]: conditions };

@@ -41,7 +41,7 @@ export function longDate(isoDate: string): string {
   return new Date(`${isoDate}T12:00:00Z`).toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 }
 
-/** A moment for people, in the portal's zone: "3 Dec 2026, 14:05 GMT". */
-export function localDateTime(timeZone: string, instant: string): string {
-  return new Intl.DateTimeFormat('en-GB', { timeZone, day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZoneName: 'short' }).format(new Date(instant));
+/** A moment for people, in the portal's zone: "3 Dec 2026, 14:05 GMT" (with seconds, "14:05:09 GMT"). */
+export function localDateTime(timeZone: string, instant: string, { seconds = false }: { seconds?: boolean } = {}): string {
+  return new Intl.DateTimeFormat('en-GB', { timeZone, day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', ...(seconds ? { second: '2-digit' } : {}), timeZoneName: 'short' }).format(new Date(instant));
 }

@@ -3,6 +3,7 @@ import { randomUUID } from 'node:crypto';
 import { recordAuditEvent } from '@/lib/audit/record-audit-event';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { type Letter, LetterResponse, database } from '@/lib/db';
+import { portalDate } from '@/lib/dates/portal-time';
 import { ConflictError, InvalidRequestError } from '@/lib/http/app-errors';
 import type { LogResponseInput } from '@/lib/validation/letter-schemas';
 import { ANSWERABLE } from './letter-statuses';
@@ -10,7 +11,8 @@ import { requireLetterAccess } from './load-letter';
 
 /** A response cannot arrive before its letter went out (the day it was e-mailed or posted). */
 export function refuseBeforeSent(letter: Letter, receivedOn: string): void {
-  const sentOn = letter.sentAt?.slice(0, 10);
+  // The day in the portal's zone; a posted letter keeps the day it was posted as given.
+  const sentOn = letter.postedOn ?? (letter.sentAt ? portalDate(letter.sentAt) : undefined);
   if (sentOn && receivedOn < sentOn) throw new InvalidRequestError([{ path: 'receivedOn', message: `must be on or after ${sentOn}, the day the letter was ${letter.status === 'posted' ? 'posted' : 'sent'}` }]);
 }
 

@@ -1,10 +1,18 @@
 import { z } from 'zod';
+import { portalTimeZone } from '@/lib/config/portal-time-zone';
+import { calendarDateIn } from '@/lib/dates/calendar-dates';
 import { MAX_PARCELS } from './input-limits';
 import { isoDateText } from './iso-date';
 import { unknownPlaceholderMessage, unknownPlaceholders } from './letter-placeholders';
 import { multiLineText } from './plain-text';
 
 // Letters to landowners: the template's free-text paragraphs, generating, sending and logging responses.
+
+/**
+ * A day no later than today in the portal's zone (just after midnight in summer, today there is tomorrow in UTC). In
+ * the browser the setting is not readable, so the default zone is used there; the server's check is the one that counts.
+ */
+const notAfterToday = (isoDate: string) => isoDate <= calendarDateIn(portalTimeZone(), new Date());
 
 const id = z.string().trim().min(1, 'is required').max(64, 'is not a valid id');
 /** A level, depth, distance or flow typed into the free text would go out unchecked: the letter's numbers come from the engine. */
@@ -69,7 +77,7 @@ export const RESPONSE_CHANNELS = { email: 'E-mail', post: 'Post', telephone: 'Te
 const keysOf = <T extends object>(o: T) => Object.keys(o) as [keyof T & string, ...(keyof T & string)[]];
 
 const responseFields = {
-  receivedOn: isoDateText('the day the response arrived').refine((d) => Date.parse(`${d}T00:00:00Z`) <= Date.now(), { error: 'must not be in the future' }),
+  receivedOn: isoDateText('the day the response arrived').refine(notAfterToday, { error: 'must not be in the future' }),
   responseType: z.enum(keysOf(RESPONSE_TYPES), 'must be no objection, objection, question or other'),
   channel: z.enum(keysOf(RESPONSE_CHANNELS), 'must be e-mail, post, telephone or meeting'),
   summary: multiLineText('what the landowner said').min(3, 'is required (what the landowner said, at least 3 characters)').max(2000, 'must be at most 2000 characters'),
@@ -80,7 +88,7 @@ export type LogResponseInput = z.infer<typeof logResponseSchema>;
 export const editResponseSchema = z.object({ responseId: id, ...responseFields });
 export type EditResponseInput = z.infer<typeof editResponseSchema>;
 
-const pastDay = (what: string) => isoDateText(what).refine((d) => Date.parse(`${d}T00:00:00Z`) <= Date.now(), { error: 'must not be in the future' });
+const pastDay = (what: string) => isoDateText(what).refine(notAfterToday, { error: 'must not be in the future' });
 
 export const markPostedSchema = z.object({ letterId: id, postedOn: pastDay('the day the letter was posted') });
 export type MarkPostedInput = z.infer<typeof markPostedSchema>;

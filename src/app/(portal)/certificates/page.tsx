@@ -8,7 +8,7 @@ import { type CertificateRegisterQuery, certificateRegisterQuerySchema } from '@
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusLabel } from '@/components/ui/status-label';
-import { utc } from '../checks/_components/quantities';
+import { portalTime } from '@/lib/dates/portal-time';
 import { registerHref, sortHref } from './register-links';
 import { RegisterSearchForm } from './register-search-form';
 
@@ -59,7 +59,7 @@ export default async function CertificatesPage({ searchParams }: { searchParams:
                   <td className="num py-2 pr-3"><Link className="text-accent underline" href={`/verify?number=${c.number}`}>{c.number}</Link></td>
                   <td className="py-2 pr-3">{c.scheme ? `${c.scheme.reference} ${c.scheme.name}` : '—'} <span className="num text-ink-faint">rev. {c.revisionNumber}</span></td>
                   <td className="py-2 pr-3">{c.scheme ? `${c.scheme.watercourse} at ${c.scheme.site}` : '—'}</td>
-                  <td className="num py-2 pr-3">{utc(c.issuedAt)}</td>
+                  <td className="num py-2 pr-3">{portalTime(c.issuedAt)}</td>
                   <td className="py-2 pr-3"><StatusLabel status={c.status} /></td>
                   <td className="py-2"><a className="text-accent underline" href={`/api/certificates/${c.id}/pdf`} download>Download {c.number}</a></td>
                 </tr>

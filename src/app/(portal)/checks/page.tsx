@@ -5,7 +5,7 @@ import { listCheckQueue } from '@/lib/review/list-check-queue';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusLabel } from '@/components/ui/status-label';
-import { utc } from './_components/quantities';
+import { portalTime } from '@/lib/dates/portal-time';
 
 export const metadata: Metadata = { title: 'Checks' };
 
@@ -25,7 +25,7 @@ export default async function ChecksPage() {
               <li key={r.id} className="flex flex-wrap items-center justify-between gap-3 px-4 py-3">
                 <div>
                   <Link href={`/checks/${r.id}`} className="font-semibold text-accent underline">{r.scheme.reference} {r.scheme.name} — revision {r.number}</Link>
-                  <p className="text-sm text-ink-soft">{r.scheme.watercourse} at {r.scheme.site} · by {r.author} · submitted <span className="num">{utc(r.submittedAt)}</span></p>
+                  <p className="text-sm text-ink-soft">{r.scheme.watercourse} at {r.scheme.site} · by {r.author} · submitted <span className="num">{portalTime(r.submittedAt)}</span></p>
                 </div>
                 <span className="text-sm">{r.assignedToMe ? 'Assigned to you' : 'In the queue'}</span>
               </li>
@@ -42,7 +42,7 @@ export default async function ChecksPage() {
             {queue.decided.map((r) => (
               <li key={`${r.id}-${r.decidedAt}`} className="flex flex-wrap items-center justify-between gap-3 px-4 py-3">
                 <Link href={`/revisions/${r.id}`} className="text-accent underline">{r.scheme.reference} {r.scheme.name} — revision {r.number}</Link>
-                <span className="flex items-center gap-2 text-sm">{r.decision ? <StatusLabel status={r.decision} /> : null}<span className="num text-ink-faint">{utc(r.decidedAt)}</span></span>
+                <span className="flex items-center gap-2 text-sm">{r.decision ? <StatusLabel status={r.decision} /> : null}<span className="num text-ink-faint">{portalTime(r.decidedAt)}</span></span>
               </li>
             ))}
           </ul>

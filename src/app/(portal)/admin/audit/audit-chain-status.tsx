@@ -1,6 +1,6 @@
 import type { ChainCheck } from '@/lib/audit/verify-audit-chain';
 import { StatusIcon } from '@/components/ui/status-icon';
-import { utc } from '../../checks/_components/quantities';
+import { portalTime } from '@/lib/dates/portal-time';
 
 /** The result of recomputing every hash of the trail as the page was drawn: a calm note, or the alarm naming the break. */
 export function AuditChainStatus({ check, alarm }: { check: ChainCheck; alarm: string | null }) {
@@ -19,7 +19,7 @@ export function AuditChainStatus({ check, alarm }: { check: ChainCheck; alarm: s
         <StatusIcon name="fail" className="mr-1" />{alarm ?? `The chain breaks at event ${number}.`}
       </p>
       <p className="mt-1">
-        Event {number}, recorded {utc(at)}: {problem}. Events from {number} onwards cannot be relied on as recorded. Keep a copy of the database file as it is now and
+        Event {number}, recorded {portalTime(at)}: {problem}. Events from {number} onwards cannot be relied on as recorded. Keep a copy of the database file as it is now and
         compare it with the latest backup before anything else changes.
       </p>
     </div>

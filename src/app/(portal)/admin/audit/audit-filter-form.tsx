@@ -1,5 +1,6 @@
 import Link from 'next/link';
 import { AUDIT_ACTIONS } from '@/lib/audit/audit-actions';
+import { portalTimeZone } from '@/lib/config/portal-time-zone';
 import type { FieldIssue } from '@/lib/http/app-errors';
 import type { AuditFilterInput } from '@/lib/validation/audit-filter-schema';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
@@ -15,6 +16,8 @@ const text = (value: unknown) => (typeof value === 'string' ? value : '');
 /** A plain GET form, so a filtered trail is an address an investigator can keep, and it works without JavaScript. */
 export function AuditFilterForm({ values, issues, choices }: { values: AuditFilterInput; issues: FieldIssue[]; choices: Choices }) {
   const error = (path: string) => issues.find((i) => i.path === path)?.message;
+  // Days as the trail shows its times, in the portal's zone; the server turns them into the instants it queries.
+  const zone = portalTimeZone();
   return (
     <form method="get" action="/admin/audit" role="search" aria-label="Filter the audit trail" className="mb-6 grid gap-x-4 sm:grid-cols-2 lg:grid-cols-3">
       <FormField id="audit-person" label="Person (who did it, or whom it was about)" error={error('person')}>
@@ -35,10 +38,10 @@ export function AuditFilterForm({ values, issues, choices }: { values: AuditFilt
           {choices.schemes.map((s) => <option key={s.id} value={s.id}>{s.reference} {s.name}</option>)}
         </select>
       </FormField>
-      <FormField id="audit-from" label="From (UTC day)" error={error('from')}>
+      <FormField id="audit-from" label={`From (day, ${zone} time)`} error={error('from')}>
         <input id="audit-from" name="from" type="date" defaultValue={text(values.from)} className={inputClassName} />
       </FormField>
-      <FormField id="audit-to" label="To (UTC day, included)" error={error('to')}>
+      <FormField id="audit-to" label={`To (day, ${zone} time, included)`} error={error('to')}>
         <input id="audit-to" name="to" type="date" defaultValue={text(values.to)} className={inputClassName} />
       </FormField>
       <FormField id="audit-q" label="Search names, e-mail addresses and details" error={error('q')}>

@@ -8,7 +8,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusLabel } from '@/components/ui/status-label';
 import { UnreadableAddress } from '@/components/ui/unreadable-address';
-import { utc } from '../../checks/_components/quantities';
+import { portalTime } from '@/lib/dates/portal-time';
 import { RevokeForm } from './revoke-form';
 
 export const metadata: Metadata = { title: 'Revoke certificates' };
@@ -30,7 +30,7 @@ export default async function AdminCertificatesPage({ searchParams }: { searchPa
               <div className="text-sm">
                 <p className="flex items-center gap-2"><span className="num font-semibold">{c.number}</span><StatusLabel status={c.status} /></p>
                 <p>{c.scheme ? `${c.scheme.reference} ${c.scheme.name}, revision ${c.revisionNumber}` : '—'}</p>
-                <p className="text-ink-soft">Issued <span className="num">{utc(c.issuedAt)}</span> · <Link className="text-accent underline" href={`/verify?number=${c.number}`}>Verification page</Link></p>
+                <p className="text-ink-soft">Issued <span className="num">{portalTime(c.issuedAt)}</span> · <Link className="text-accent underline" href={`/verify?number=${c.number}`}>Verification page</Link></p>
               </div>
               {c.status === 'revoked' ? <p className="text-sm text-ink-soft">Revoked; nothing more to do.</p> : <RevokeForm certificateId={c.id} number={c.number} />}
             </li>

@@ -2,7 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { longDate } from '@/lib/dates/calendar-dates';
+import { LocalTime } from '@/components/ui/local-time';
 import { StatusIcon } from '@/components/ui/status-icon';
 import { cancelInvitationAction, resendInvitationAction } from './actions';
 
@@ -25,7 +25,7 @@ export function InvitationList({ invitations }: { invitations: Pending[] }) {
         <ul className="divide-y divide-paper-edge text-sm">
           {invitations.map((i) => (
             <li key={i.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
-              <span>{i.name} <span className="text-ink-soft">· {i.email} · {i.expired ? 'link expired' : `link valid until ${longDate(i.expiresAt.slice(0, 10))}`}</span></span>
+              <span>{i.name} <span className="text-ink-soft">· {i.email} · {i.expired ? 'link expired' : <>link valid until <LocalTime iso={i.expiresAt} /></>}</span></span>
               <span className="flex gap-3">
                 <button type="button" className="text-accent underline" onClick={() => run(i, 'resend')}>Resend<span className="sr-only"> the invitation to {i.email}</span></button>
                 <button type="button" className="text-verdict-fail underline" onClick={() => run(i, 'cancel')}>Cancel<span className="sr-only"> the invitation to {i.email}</span></button>

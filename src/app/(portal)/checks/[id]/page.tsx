@@ -12,7 +12,7 @@ import { StatusLabel } from '@/components/ui/status-label';
 import { ChangesTable } from '../_components/changes-table';
 import { DesignerResults } from '../_components/designer-results';
 import { InputsTable } from '../_components/inputs-table';
-import { utc } from '../_components/quantities';
+import { portalTime } from '@/lib/dates/portal-time';
 import { RerunComparison } from '../_components/rerun-comparison';
 import { ResultsSummary } from '../_components/results-summary';
 import { ReviewThread } from '../_components/review-thread';
@@ -50,7 +50,7 @@ export default async function CheckPage({ params, searchParams }: { params: Prom
       <PageHeader eyebrow={`Check · ${scheme.reference} · revision ${revision.number}`} title={scheme.name}>
         <span className="flex flex-wrap items-center gap-3">
           <StatusLabel status={revision.status} />
-          <span>{scheme.watercourse} at {scheme.site} · designed by {revision.author} · submitted <span className="num">{utc(revision.submittedAt)}</span></span>
+          <span>{scheme.watercourse} at {scheme.site} · designed by {revision.author} · submitted <span className="num">{portalTime(revision.submittedAt)}</span></span>
           <Link className="text-accent underline" href={`/revisions/${revision.id}`}>Revision record and history</Link>
         </span>
       </PageHeader>

@@ -22,7 +22,3 @@ export function shownValue(value: string | number | boolean | null, kind: Quanti
   if (kind === 'discharge') return quantity(value, u.discharge, 2);
   return String(value);
 }
-
-export function utc(iso: string | null | undefined): string {
-  return iso ? `${iso.replace('T', ' ').slice(0, 16)} UTC` : '—';
-}

@@ -10,7 +10,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { StatusLabel } from '@/components/ui/status-label';
 import { StatusIcon } from '@/components/ui/status-icon';
 import { InputsTable } from '../../checks/_components/inputs-table';
-import { utc } from '../../checks/_components/quantities';
+import { portalTime } from '@/lib/dates/portal-time';
 import { ResultsSummary } from '../../checks/_components/results-summary';
 import { ReviewThread } from '../../checks/_components/review-thread';
 import { SchemeHistory } from '../../checks/_components/scheme-history';
@@ -60,8 +60,8 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
           <dl className="grid grid-cols-[12rem_1fr] gap-x-4 gap-y-1">
             <dt className="text-ink-soft">Designer</dt><dd>{revision.author}</dd>
             <dt className="text-ink-soft">Checker</dt><dd>{revision.checker ?? (revision.status === 'submitted' ? 'in the checkers’ queue' : '—')}</dd>
-            <dt className="text-ink-soft">Submitted</dt><dd className="num">{utc(revision.submittedAt)}</dd>
-            <dt className="text-ink-soft">Countersigned</dt><dd className="num">{utc(revision.countersignedAt)}</dd>
+            <dt className="text-ink-soft">Submitted</dt><dd className="num">{portalTime(revision.submittedAt)}</dd>
+            <dt className="text-ink-soft">Countersigned</dt><dd className="num">{portalTime(revision.countersignedAt)}</dd>
             <dt className="text-ink-soft">Engine version</dt><dd className="num">{revision.engineVersion ?? '—'}</dd>
             <dt className="text-ink-soft">SHA-256 of the revision</dt><dd className="num break-all text-xs">{revision.revisionSha256 ?? 'not frozen yet'}</dd>
             <dt className="text-ink-soft">SHA-256 of the inputs</dt><dd className="num break-all text-xs">{revision.inputsSha256 ?? '—'}</dd>

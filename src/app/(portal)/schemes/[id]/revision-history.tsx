@@ -1,9 +1,8 @@
 import Link from 'next/link';
 import type { RevisionHistory as History } from '@/lib/revisions/list-revision-history';
+import { portalTime as when } from '@/lib/dates/portal-time';
 import { StatusLabel } from '@/components/ui/status-label';
 import { StartDraftButton } from './start-draft-button';
-
-const when = (iso: string) => `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
 
 /** Every revision, newest first, with who did what and when; a submitted revision is read at /revisions/<id>. */
 export function RevisionHistory({ schemeId, revisions, revokedRevisionIds, canStartDraft }: { schemeId: string; revisions: History[]; revokedRevisionIds: string[]; canStartDraft: boolean }) {

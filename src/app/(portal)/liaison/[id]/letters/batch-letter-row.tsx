@@ -1,19 +1,21 @@
 'use client';
 
 import { useState } from 'react';
+import { calendarDateIn } from '@/lib/dates/calendar-dates';
 import type { BatchProgress } from '@/lib/letters/batch-progress';
 import { inputClassName } from '@/components/ui/form-field';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { usePortalTimeZone } from '@/components/ui/time-zone-context';
 import { LetterStatusLabel } from '../../_components/letter-status-label';
 import { markPostedAction, resendLetterAction } from './actions';
 
 type BatchLetter = BatchProgress['letters'][number];
 
-const today = () => new Date().toISOString().slice(0, 10);
-
 /** One letter of a batch: to whom, how it goes, its state; a failed one can be tried again, one to post marked posted. */
 export function BatchLetterRow({ letter, manage, busy, onChanged }: { letter: BatchLetter; manage: boolean; busy: boolean; onChanged: (resend: boolean) => void }) {
-  const [postedOn, setPostedOn] = useState(today());
+  // Today in the portal's zone: just after midnight in summer it is already tomorrow there, not yet in UTC.
+  const today = calendarDateIn(usePortalTimeZone(), new Date());
+  const [postedOn, setPostedOn] = useState(today);
   const [problem, setProblem] = useState<string | null>(null);
   const dateId = `posted-on-${letter.id}`;
 
@@ -40,7 +42,7 @@ export function BatchLetterRow({ letter, manage, busy, onChanged }: { letter: Ba
       {manage && letter.status === 'to-post' ? (
         <span className="flex w-full flex-wrap items-end gap-2 text-xs">
           <label htmlFor={dateId}>Posted on<span className="sr-only"> (the letter to {letter.parcelReference})</span></label>
-          <input id={dateId} type="date" value={postedOn} max={today()} onChange={(e) => setPostedOn(e.target.value)} aria-invalid={problem ? true : undefined} className={`${inputClassName} max-w-[11rem] py-1`} />
+          <input id={dateId} type="date" value={postedOn} max={today} onChange={(e) => setPostedOn(e.target.value)} aria-invalid={problem ? true : undefined} className={`${inputClassName} max-w-[11rem] py-1`} />
           <button type="button" className="rounded border border-accent px-2 py-1 font-semibold text-accent" disabled={busy} onClick={markPosted}>Mark posted<span className="sr-only"> (the letter to {letter.parcelReference})</span></button>
         </span>
       ) : null}

@@ -3,10 +3,12 @@
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import useSWR from 'swr';
+import { calendarDateIn } from '@/lib/dates/calendar-dates';
 import type { BatchProgress } from '@/lib/letters/batch-progress';
 import { buttonClassName } from '@/components/ui/form-field';
 import { ConfirmPanel } from '@/components/ui/confirm-panel';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { usePortalTimeZone } from '@/components/ui/time-zone-context';
 import { withdrawBatchAction } from './actions';
 import { BatchLetterRow } from './batch-letter-row';
 import { BatchSummary } from './batch-summary';
@@ -26,6 +28,7 @@ async function fetchProgress(url: string): Promise<BatchProgress> {
  * and withdrawing each ask for confirmation, with the count, first.
  */
 export function BatchSender({ batchId, manage, initiallyOpen }: { batchId: string; manage: boolean; initiallyOpen: boolean }) {
+  const timeZone = usePortalTimeZone();
   const router = useRouter();
   const url = `/api/letters/batches/${batchId}`;
   const [sending, setSending] = useState(false);
@@ -74,7 +77,7 @@ export function BatchSender({ batchId, manage, initiallyOpen }: { batchId: strin
   const gone = counts.sending + counts.sent + counts.acknowledged + counts.posted;
   const open = data.status !== 'withdrawn';
   return (
-    <section aria-label={`Batch of ${data.createdAt.slice(0, 10)}`} className="rounded border border-paper-edge bg-white/60 p-4" data-testid="letter-batch">
+    <section aria-label={`Batch of ${calendarDateIn(timeZone, data.createdAt)}`} className="rounded border border-paper-edge bg-white/60 p-4" data-testid="letter-batch">
       <div className="flex flex-wrap items-baseline justify-between gap-3">
         <BatchSummary data={data} />
         <div className="flex flex-wrap gap-3">

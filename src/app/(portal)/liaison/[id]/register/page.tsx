@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { numberFromOneQuery, readQuery } from '@/lib/http/query-params';
+import { portalTime } from '@/lib/dates/portal-time';
 import { loadParcelRegister } from '@/lib/parcels/load-parcel-register';
 import { parcelInputOf } from '@/lib/parcels/parcel-record';
 import { isSearching, searchRegister } from '@/lib/parcels/search-register';
@@ -35,7 +36,7 @@ export default async function RegisterPage({ params, searchParams }: { params: P
       <div className="mb-4 flex flex-wrap items-baseline justify-between gap-3">
         <h2 className="text-lg font-semibold">
           Version <span className="num">{loaded.register.version}</span>{loaded.register.isLatest ? ' (current)' : ' (earlier version, read only)'}
-          <span className="ml-2 text-sm font-normal text-ink-soft">{loaded.register.note} · <span className="num">{loaded.register.createdAt.replace('T', ' ').slice(0, 16)}</span> UTC</span>
+          <span className="ml-2 text-sm font-normal text-ink-soft">{loaded.register.note} · <time className="num" dateTime={loaded.register.createdAt}>{portalTime(loaded.register.createdAt)}</time></span>
         </h2>
         <span className="flex gap-4 text-sm">
           <Link className="text-accent underline" href={`/liaison/${id}/register/history`}>History of the register</Link>

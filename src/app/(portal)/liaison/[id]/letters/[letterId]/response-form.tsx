@@ -4,9 +4,11 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { calendarDateIn } from '@/lib/dates/calendar-dates';
 import { type LogResponseInput, RESPONSE_CHANNELS, RESPONSE_TYPES, logResponseSchema } from '@/lib/validation/letter-schemas';
 import { FormField, buttonClassName, inputClassName } from '@/components/ui/form-field';
 import { StatusIcon } from '@/components/ui/status-icon';
+import { usePortalTimeZone } from '@/components/ui/time-zone-context';
 import { editLetterResponseAction, logLetterResponseAction } from './actions';
 
 type Values = Omit<LogResponseInput, 'letterId'>;
@@ -14,8 +16,9 @@ type Values = Omit<LogResponseInput, 'letterId'>;
 /** Logs a new response, or (given `responseId`) corrects one, keeping its earlier wording. */
 export function ResponseForm({ letterId, responseId, initial, onDone }: { letterId: string; responseId?: string; initial?: Values; onDone?: () => void }) {
   const router = useRouter();
+  const timeZone = usePortalTimeZone();
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
-  const blank: Values = { receivedOn: new Date().toISOString().slice(0, 10), responseType: 'no-objection', channel: 'email', summary: '' };
+  const blank: Values = { receivedOn: calendarDateIn(timeZone, new Date()), responseType: 'no-objection', channel: 'email', summary: '' };
   const { register, handleSubmit, setError, reset, formState } = useForm<LogResponseInput>({ resolver: zodResolver(logResponseSchema), defaultValues: { letterId, ...(initial ?? blank) } });
   const prefix = responseId ? `edit-${responseId}` : 'response';
 

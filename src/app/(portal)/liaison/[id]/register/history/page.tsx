@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { portalTime } from '@/lib/dates/portal-time';
 import { listRegisterHistory } from '@/lib/parcels/list-register-history';
 import { EmptyState } from '@/components/ui/empty-state';
 import { orNotFound, requireLiaisonPage } from '../../../_components/scheme-page-access';
@@ -24,7 +25,7 @@ export default async function RegisterHistoryPage({ params }: { params: Promise<
         {versions.map((v) => (
           <tr key={v.id} className="border-b border-paper-edge align-top" data-testid={`register-version-${v.version}`}>
             <th scope="row" className="py-2 pr-3 text-left"><Link className="num text-accent underline" href={`/liaison/${id}/register?version=${v.version}`}>v{v.version}</Link>{v.isLatest ? <span className="block text-xs text-ink-soft">current</span> : null}</th>
-            <td className="py-2 pr-3"><span className="num">{v.createdAt.replace('T', ' ').slice(0, 16)}</span> UTC<span className="block text-ink-soft">{v.createdBy}</span></td>
+            <td className="py-2 pr-3"><time className="num" dateTime={v.createdAt}>{portalTime(v.createdAt)}</time><span className="block text-ink-soft">{v.createdBy}</span></td>
             <td className="py-2 pr-3">{v.source}{v.note && v.note !== v.source ? <span className="block text-ink-soft">{v.note}</span> : null}</td>
             <td className="num py-2 pr-3 text-right">{v.parcelCount}</td>
             <td className="num py-2 pr-3">{list(v.changes.added)}</td>
