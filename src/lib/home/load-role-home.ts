@@ -1,9 +1,14 @@
 import 'server-only';
 import { Op, type WhereOptions } from 'sequelize';
+import { AUDIT_ACTIONS } from '@/lib/audit/audit-actions';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { AuditEvent, Certificate, Invitation, Letter, Revision, Scheme, User, database } from '@/lib/db';
 import { longDate } from '@/lib/dates/calendar-dates';
+import { portalDate, portalTime } from '@/lib/dates/portal-time';
 import { type FollowUpLetter, listFollowUp } from '@/lib/letters/list-follow-up';
+
+// The trail's words for a kind of event; a code it has no words for is shown as plain words, never as the code.
+const auditActionLabel = (action: string) => (action in AUDIT_ACTIONS ? AUDIT_ACTIONS[action as keyof typeof AUDIT_ACTIONS] : action.replace(/[.-]/g, ' '));
 
 export interface HomeItem {
   id: string;
@@ -59,15 +64,15 @@ export async function loadRoleHome(user: SessionUser): Promise<RoleHome> {
     }
     case 'planning': {
       const certificates = await Certificate.findAll({ order: [['issuedAt', 'DESC']], limit: 20 });
-      return { sections: [{ heading: 'Certificates to download', empty: 'No certificate has been issued yet.', items: certificates.map((c) => ({ id: c.id, title: c.number, detail: `Issued ${c.issuedAt.slice(0, 10)}`, status: c.status, href: `/api/certificates/${c.id}/pdf`, download: true })) }] };
+      return { sections: [{ heading: 'Certificates to download', empty: 'No certificate has been issued yet.', items: certificates.map((c) => ({ id: c.id, title: c.number, detail: `Issued ${portalDate(c.issuedAt)}`, status: c.status, href: `/api/certificates/${c.id}/pdf`, download: true })) }] };
     }
     case 'admin': {
       const invitations = await Invitation.findAll({ where: { acceptedAt: null, cancelledAt: null }, order: [['createdAt', 'DESC']], limit: 20 });
       const events = await AuditEvent.findAll({ order: [['id', 'DESC']], limit: 8 });
       return {
         sections: [
-          { heading: 'Invitations not yet accepted', empty: 'Every invited user has accepted.', items: invitations.map((i) => ({ id: i.id, title: i.email, detail: `Invited as ${i.role}, expires ${i.expiresAt.slice(0, 10)}`, status: 'invited' })) },
-          { heading: `Recent audit events (${await User.count()} users)`, empty: 'No audit events yet.', items: events.map((e) => ({ id: String(e.id), title: e.action, detail: `${e.at.replace('T', ' ').slice(0, 19)} UTC`, status: e.entityType })) },
+          { heading: 'Invitations not yet accepted', empty: 'Every invited user has accepted.', items: invitations.map((i) => ({ id: i.id, title: i.email, detail: `Invited as ${i.role}, expires ${portalTime(i.expiresAt)}`, status: 'invited' })) },
+          { heading: `Recent audit events (${await User.count()} users)`, empty: 'No audit events yet.', items: events.map((e) => ({ id: String(e.id), title: auditActionLabel(e.action), detail: portalTime(e.at), status: e.entityType })) },
         ],
       };
     }
