@@ -1,5 +1,5 @@
 import { execFileSync } from 'node:child_process';
-import { createHash, randomUUID } from 'node:crypto';
+import { createHash } from 'node:crypto';
 import { mkdirSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
@@ -8,16 +8,14 @@ import Database from 'better-sqlite3';
 import { simpleParser } from 'mailparser';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { evaluateCase } from '@/lib/hydraulics/evaluate-case';
 import { parseParcelsCsv } from '@/lib/parcels/parcels-csv';
-import { parseCase } from '@/lib/validation/parse-case';
 import { DEMO_USERS } from '../../db/seeds/demo-users';
 import { seriousAccessibilityViolations } from './support/accessibility';
 import { startApp, type RunningApp } from './support/app-server';
+import { addCountersignedRevision } from './support/countersigned-revision';
 import { launchBrowser, signInAs } from './support/browser';
 
 const CSV = path.resolve('db', 'seeds', 'parcels', 'harrowfield-parcels.csv');
-const CASE = path.resolve('db', 'seeds', 'cases', 'wendle-harrowfield-broad-crested.json');
 const user = (role: string) => DEMO_USERS.find((u) => u.role === role)!;
 const sha256 = (b: Buffer | string) => createHash('sha256').update(b).digest('hex');
 
@@ -32,29 +30,6 @@ function freePort(): Promise<number> {
       server.close(() => resolve(port));
     });
   });
-}
-
-/** The checker's countersigning belongs to another part of the portal: here the demo scheme gets a countersigned revision directly. */
-function addCountersignedRevision(databasePath: string): string {
-  const db = new Database(databasePath);
-  try {
-    const scheme = db.prepare("SELECT id, designer_id FROM schemes WHERE reference = 'SM-0001'").get() as { id: string; designer_id: string };
-    const checker = db.prepare("SELECT id FROM users WHERE role = 'checker' LIMIT 1").get() as { id: string };
-    const inputsJson = readFileSync(CASE, 'utf8');
-    const parsed = parseCase(JSON.parse(inputsJson));
-    if (!parsed.ok) throw new Error('the demo case does not parse');
-    const result = evaluateCase(parsed.value);
-    const resultsJson = JSON.stringify(result);
-    const number = ((db.prepare('SELECT MAX(number) AS n FROM revisions WHERE scheme_id = ?').get(scheme.id) as { n: number | null }).n ?? 0) + 1;
-    const now = new Date().toISOString();
-    db.prepare(
-      `INSERT INTO revisions (id, scheme_id, number, status, wizard_step, inputs_json, results_json, inputs_sha256, results_sha256, revision_sha256, engine_version, author_id, checker_id, submitted_at, countersigned_at, created_at, updated_at)
-       VALUES (?, ?, ?, 'countersigned', 'results', ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
-    ).run(randomUUID(), scheme.id, number, inputsJson, resultsJson, sha256(inputsJson), sha256(resultsJson), sha256(inputsJson + resultsJson), result.engineVersion, scheme.designer_id, checker.id, now, now, now, now);
-    return scheme.id;
-  } finally {
-    db.close();
-  }
 }
 
 /** A screenshot to look at; no serious or critical accessibility violation; nothing wider than the window (wide tables scroll inside it). */

@@ -6,7 +6,7 @@ import type { FlowSection, SectionState } from './section';
 import type { SectionSample } from './section-sample';
 import { requireDepth, sectionState } from './section-state';
 import { type PieceValues, SurveyTable } from './surveyed-table';
-import { type SurveyedSectionSpec, type ValidatedSurvey, validatedSurvey } from './surveyed-spec';
+import { type SurveyedSectionSpec, type ValidatedSurvey, validatedSurvey, withGroundPointAt } from './surveyed-spec';
 import type { Metres } from './units';
 
 export type { SurveyedSectionSpec } from './surveyed-spec';
@@ -28,14 +28,6 @@ export interface SurveyedSection extends FlowSection {
 const SUB_AREAS = ['left', 'channel', 'right'] as const;
 type Point = ValidatedSurvey['points'][number];
 
-function withPointAt(points: Point[], station: Metres): Point[] {
-  if (points.some((p) => p.station === station)) return points;
-  const i = points.findIndex((p) => p.station > station);
-  const a = points[i - 1];
-  const b = points[i];
-  const elevation = a.elevation + ((station - a.station) * (b.elevation - a.elevation)) / (b.station - a.station);
-  return [...points.slice(0, i), { station, elevation }, ...points.slice(i)];
-}
 
 function highestGroundAt(points: Point[], station: Metres): Metres {
   return points.reduce((highest, p) => (p.station === station ? Math.max(highest, p.elevation) : highest), -Infinity);
@@ -81,7 +73,7 @@ function dividedEnergyCoefficient(parts: readonly PieceValues[], conveyances: re
 export function surveyedSection(spec: SurveyedSectionSpec, opts: { field?: string } = {}): SurveyedSection {
   const field = opts.field ?? 'reach.section';
   const survey = validatedSurvey(spec, field);
-  const ground = withPointAt(withPointAt(survey.points, survey.banks.left), survey.banks.right);
+  const ground = withGroundPointAt(withGroundPointAt(survey.points, survey.banks.left), survey.banks.right);
   const segmentsBySubArea: GroundSegment[][] = [[], [], []];
   let invertLevel = ground[0].elevation;
   for (let i = 1; i < ground.length; i++) {

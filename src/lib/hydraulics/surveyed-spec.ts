@@ -78,3 +78,15 @@ export function validatedSurvey(spec: SurveyedSectionSpec, field: string): Valid
   const banks = checkedBanks(spec, points[0].station, points[points.length - 1].station, field);
   return { points, roughness, banks };
 }
+
+type GroundPoint = ValidatedSurvey['points'][number];
+
+/** The ground with a point at `station` (on the line between its neighbours), so that a bank station is a vertex. */
+export function withGroundPointAt(points: GroundPoint[], station: Metres): GroundPoint[] {
+  if (points.some((p) => p.station === station)) return points;
+  const i = points.findIndex((p) => p.station > station);
+  const a = points[i - 1];
+  const b = points[i];
+  const elevation = a.elevation + ((station - a.station) * (b.elevation - a.elevation)) / (b.station - a.station);
+  return [...points.slice(0, i), { station, elevation }, ...points.slice(i)];
+}

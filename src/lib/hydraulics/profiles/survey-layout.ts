@@ -1,5 +1,5 @@
 // A survey laid out for interpolation: each sub-area (left overbank, channel, right overbank) spans one unit of position.
-import { type SurveyedSectionSpec, type ValidatedSurvey, validatedSurvey } from '../surveyed-spec';
+import { type SurveyedSectionSpec, type ValidatedSurvey, validatedSurvey, withGroundPointAt } from '../surveyed-spec';
 import type { Metres } from '../units';
 
 interface GroundPoint {
@@ -16,14 +16,6 @@ export interface LaidOutSurvey {
   roughness: ValidatedSurvey['roughness'];
 }
 
-function withPointAt(points: GroundPoint[], station: Metres): GroundPoint[] {
-  if (points.some((p) => p.station === station)) return points;
-  const i = points.findIndex((p) => p.station > station);
-  const a = points[i - 1];
-  const b = points[i];
-  const elevation = a.elevation + ((station - a.station) * (b.elevation - a.elevation)) / (b.station - a.station);
-  return [...points.slice(0, i), { station, elevation }, ...points.slice(i)];
-}
 
 /** Surveys already laid out. Why: refinement interpolates many sections between the same two surveys. */
 const laidOutSurveys = new WeakMap<SurveyedSectionSpec, LaidOutSurvey>();
@@ -36,7 +28,7 @@ export function laidOut(spec: SurveyedSectionSpec, field: string): LaidOutSurvey
 
 function layOut(spec: SurveyedSectionSpec, field: string): LaidOutSurvey {
   const survey = validatedSurvey(spec, field);
-  const points = withPointAt(withPointAt(survey.points, survey.banks.left), survey.banks.right);
+  const points = withGroundPointAt(withGroundPointAt(survey.points, survey.banks.left), survey.banks.right);
   const first = points[0].station;
   const last = points[points.length - 1].station;
   const zones = [
