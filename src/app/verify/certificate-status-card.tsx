@@ -1,6 +1,6 @@
 import type { CertificateLookup } from '@/lib/certificates/lookup-certificate';
-import { portalTime } from '@/lib/dates/portal-time';
 import { StatusLabel } from '@/components/ui/status-label';
+import { LocalTime } from '@/components/ui/local-time';
 import { StatusIcon } from '@/components/ui/status-icon';
 
 const STATUS_WORDS = {
@@ -23,12 +23,12 @@ export function CertificateStatusCard({ certificate }: { certificate: Certificat
         {STATUS_WORDS[certificate.status]}
         {certificate.status === 'superseded' && certificate.supersededBy ? ` Superseded by ${certificate.supersededBy}.` : ''}
       </p>
-      {certificate.status === 'revoked' ? <p className="mt-1 text-sm">Revoked <span className="num">{portalTime(certificate.revokedAt)}</span>. Reason: {certificate.revocationReason}</p> : null}
+      {certificate.status === 'revoked' ? <p className="mt-1 text-sm">Revoked <LocalTime iso={certificate.revokedAt} />. Reason: {certificate.revocationReason}</p> : null}
       <dl className="mt-3 grid grid-cols-[11rem_1fr] gap-x-4 gap-y-1 text-sm">
         <dt className="text-ink-soft">Scheme</dt><dd>{certificate.scheme ? `${certificate.scheme.reference} ${certificate.scheme.name}` : '—'}</dd>
         <dt className="text-ink-soft">Watercourse and site</dt><dd>{certificate.scheme ? `${certificate.scheme.watercourse} at ${certificate.scheme.site}` : '—'}</dd>
         <dt className="text-ink-soft">Revision</dt><dd className="num">{certificate.revision?.number ?? '—'}</dd>
-        <dt className="text-ink-soft">Issued</dt><dd className="num">{portalTime(certificate.issuedAt)}</dd>
+        <dt className="text-ink-soft">Issued</dt><dd><LocalTime iso={certificate.issuedAt} /></dd>
         <dt className="text-ink-soft">SHA-256 of the revision</dt><dd className="num break-all text-xs">{certificate.revision?.revisionSha256 ?? '—'}</dd>
         <dt className="text-ink-soft">SHA-256 of the PDF</dt><dd className="num break-all text-xs">{certificate.pdfSha256}</dd>
       </dl>
