@@ -1,18 +1,17 @@
 import 'server-only';
 import PDFDocument from 'pdfkit';
-import { discharge, distance, metres } from '@/lib/parcels/format-quantity';
-import { registerPdfFonts } from '@/lib/pdf/fonts';
-import type { LetterParagraphs } from '@/lib/validation/letter-schemas';
-import { drawPlanPdf } from '@/lib/plan/draw-plan-pdf';
-import { LETTER_PLAN_SIZE, type LetterPlan } from '@/lib/plan/letter-plan';
 import { longDate } from '@/lib/dates/calendar-dates';
+import { distance } from '@/lib/parcels/format-quantity';
+import { registerPdfFonts } from '@/lib/pdf/fonts';
+import type { LetterPlan } from '@/lib/plan/letter-plan';
+import type { LetterParagraphs } from '@/lib/validation/letter-schemas';
 import { drawLetterDiagram } from './draw-letter-diagram';
 import { ADDRESS_FIELD, addressLines } from './letter-address';
-import { cautionText, eventParagraph } from './letter-content';
+import { eventParagraph } from './letter-content';
 import type { LetterImpact } from './letter-impact';
+import { cautionBox, certificateCheck, eventTable, planOfTheLand } from './letter-impact-sections';
+import { type Doc, INK, MARGIN, SOFT, heading, paragraph } from './letter-page-style';
 import { letterText } from './pdf-text';
-
-type Doc = InstanceType<typeof PDFDocument>;
 
 export interface LetterDocument {
   reference: string;
@@ -35,10 +34,6 @@ export interface LetterDocument {
   reminderOf?: { firstLetterDate: string };
 }
 
-const INK = '#1f2a2e';
-const SOFT = '#4a5a60';
-const CAUTION = '#8a6212';
-const MARGIN = 56;
 const BANK_WORDS: Record<string, string> = { left: 'left bank', right: 'right bank', both: 'both banks' };
 
 function watermark(doc: Doc): void {
@@ -48,36 +43,6 @@ function watermark(doc: Doc): void {
   doc.restore().fillOpacity(1);
   doc.x = x;
   doc.y = y;
-}
-
-function heading(doc: Doc, text: string): void {
-  doc.moveDown(0.8).font('sansSemiBold').fontSize(11.5).fillColor(INK).text(letterText(text));
-  doc.moveDown(0.2).font('sans').fontSize(10);
-}
-
-function paragraph(doc: Doc, text: string): void {
-  doc.font('sans').fontSize(10).fillColor(INK).text(letterText(text), { align: 'left', lineGap: 1.5 }).moveDown(0.5);
-}
-
-function eventTable(doc: Doc, impact: LetterImpact): void {
-  const widths = [118, 70, 95, 100, 100];
-  // Plex Sans figures are tabular already; the Plex Mono files fail in pdfkit's font engine on the space glyph.
-  const row = (cells: string[], font: 'sans' | 'sansSemiBold') => {
-    const y = doc.y;
-    let x = MARGIN;
-    cells.forEach((cell, i) => {
-      doc.font(font).fontSize(8.5).fillColor(INK).text(letterText(cell), x, y, { width: widths[i] - 6 });
-      x += widths[i];
-    });
-    doc.x = MARGIN;
-    doc.y = Math.max(doc.y, y + 12) + 2;
-  };
-  row(['Flood', 'River flow', 'Greatest rise', 'Under water without', 'Under water with'], 'sansSemiBold');
-  doc.save().lineWidth(0.5).strokeColor(SOFT).moveTo(MARGIN, doc.y - 1).lineTo(MARGIN + 483, doc.y - 1).stroke().restore();
-  for (const e of impact.events) {
-    const wet = (f: typeof e.withScheme) => (f ? (f.inundatedLength === 0 ? 'none' : `${distance(f.inundatedLength)}, ${metres(f.maxDepth)} deep`) : 'not known');
-    row([e.event, discharge(e.dischargeM3s), metres(e.maxAfflux), wet(e.withoutScheme), wet(e.withScheme)], 'sans');
-  }
 }
 
 function letterhead(doc: Doc, letter: LetterDocument, top: number): void {
@@ -94,38 +59,6 @@ function letterhead(doc: Doc, letter: LetterDocument, top: number): void {
   addressLines(letter.recipient.name, letter.recipient.address).forEach((line, i) => doc.text(letterText(line), leftPt, addressTopPt + i * 12.7, { width: widthPt, lineBreak: false, ellipsis: true }));
   doc.x = MARGIN;
   doc.y = topPt + heightPt + 6;
-}
-
-function cautionBox(doc: Doc, impact: LetterImpact): void {
-  doc.moveDown(0.6);
-  const text = `Caution. ${cautionText(impact)}`;
-  doc.font('sans').fontSize(9);
-  const height = doc.heightOfString(letterText(text), { width: 463 }) + 14;
-  if (doc.y + height > 842 - MARGIN - 20) doc.addPage();
-  const top = doc.y;
-  doc.save().rect(MARGIN, top, 483, height).fill('#f2eee4').restore();
-  doc.save().rect(MARGIN, top, 3, height).fill(CAUTION).restore();
-  doc.fillColor(INK).text(letterText(text), MARGIN + 12, top + 7, { width: 463 });
-  doc.x = MARGIN;
-  doc.y = top + height + 4;
-}
-
-/** How the landowner can check, on the public verification page, that the design's certificate is genuine and still in force. */
-function certificateCheck(doc: Doc, certificate: NonNullable<LetterImpact['certificate']>): void {
-  heading(doc, 'Checking the design certificate');
-  paragraph(doc, `The design behind these figures was checked independently and certified: certificate ${certificate.number}. You can check that this certificate is genuine and has not been withdrawn at:`);
-  doc.font('sans').fontSize(10).fillColor(INK).text(letterText(certificate.verificationUrl), { link: certificate.verificationUrl, underline: true }).moveDown(0.5);
-}
-
-/** The plan round the parcel: the same drawing the portal shows, cropped, with a key in words. */
-function planOfTheLand(doc: Doc, plan: LetterPlan, reference: string): void {
-  if (doc.y + LETTER_PLAN_SIZE.height + 70 > 842 - MARGIN) doc.addPage();
-  doc.moveDown(0.8).font('sansSemiBold').fontSize(9).fillColor(INK).text(letterText(`Plan: where your land (${reference}) lies`));
-  const top = doc.y + 4;
-  const used = drawPlanPdf(doc, plan.drawing, { x: MARGIN, y: top, ...LETTER_PLAN_SIZE }, reference);
-  doc.x = MARGIN;
-  doc.y = top + used + 8;
-  doc.font('sansItalic').fontSize(8).fillColor(SOFT).text(letterText(`Your land has the heavy outline. Grid north is up (${plan.coordinateSystem}). The river marks show the flood "${plan.event}".`));
 }
 
 function footers(doc: Doc, letter: LetterDocument, firstPage: number): void {
