@@ -65,6 +65,16 @@ describe('the results sheet', () => {
     expect(csv).toContain('Level datum,not given');
     expect(csv.find((l) => l.startsWith('Event,Distance'))).toContain('Water level without the scheme (m above the datum),Afflux (m)');
 
+    // The page's step table has the level without the scheme and the afflux beside the level with it, as the CSV does.
+    const steps = page.locator('table', { has: page.locator('caption', { hasText: /^Step table of/ }) });
+    const heads = await steps.locator('thead th').allInnerTexts();
+    const at = (label: string) => heads.findIndex((h) => h.startsWith(label));
+    expect(heads.slice(at('Water level with the scheme'), at('Water level with the scheme') + 3)).toEqual(['Water level with the scheme (m)', 'Water level without the scheme (m)', 'Afflux (m)']);
+    const first = (await steps.locator('tbody tr').first().locator('td').allInnerTexts()).map(Number);
+    const [withLevel, withoutLevel, rise] = [first[at('Water level with the scheme')], first[at('Water level without the scheme')], first[at('Afflux')]];
+    expect(Math.abs(withLevel - withoutLevel - rise)).toBeLessThanOrEqual(0.0015);
+    expect(rise).toBeGreaterThan(0);
+
     // Printed on A4 (about 794 px wide at 96 dpi): no navigation or form controls, nothing wider than the page.
     await page.emulateMedia({ media: 'print' });
     await page.setViewportSize({ width: 794, height: 1123 });

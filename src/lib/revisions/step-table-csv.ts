@@ -63,3 +63,12 @@ export function stepTableCsv({ scheme, revisionNumber, datum, event, units, engi
   const header = ['Event', `Distance upstream (${u.length})`, `Bed level (${level})`, `Depth (${u.length})`, `Water level with the scheme (${level})`, `Water level without the scheme (${level})`, `Afflux (${u.length})`, `Energy level (${level})`, `Velocity (${u.velocity})`, 'Froude number', `Friction slope (${u.length}/${u.length})`];
   return toSafeCsv(['Step table', 'the with-scheme profile point by point'], [...block, header, ...rows]);
 }
+
+/** The afflux at each point of the with-scheme profile, for the page's table; none (shown as dashes) if the stored without-scheme profile falls short. */
+export function stepTableAfflux(event: EventResult): number[] {
+  try {
+    return affluxAlong(event.profile, event.withoutScheme.profile).map((a) => a.afflux);
+  } catch {
+    return [];
+  }
+}

@@ -5,7 +5,7 @@ import type { CaseResult } from '@/lib/hydraulics/case-result';
 import { unitWords } from '@/lib/revisions/draft-inputs';
 import { eventRouting } from '@/lib/routing-sheet/event-routing';
 import { longSectionData, sectionOutline } from '@/lib/revisions/results-sheet';
-import { stepTableColumns } from '@/lib/revisions/step-table-csv';
+import { stepTableAfflux, stepTableColumns } from '@/lib/revisions/step-table-csv';
 import type { SheetRating } from '@/lib/revisions/rating-for-sheet';
 import type { CaseInput } from '@/lib/validation/case-schema';
 import { RatingChart } from '@/components/charts/rating-chart';
@@ -69,7 +69,7 @@ export function DesignerResults({ input, results, eventIndex, datum, href, stepT
         {results.sensitivity ? <SensitivityTable sensitivity={results.sensitivity} limits={input.limits.map((l) => l.label)} lengthUnit={u} /> : <p className="text-sm text-ink-soft">The designer did not ask for sensitivity runs.</p>}
       </Part>
       <Part id="h-stored-steps" title={`Step table: ${event.name}`}>
-        <StepTable rows={event.profile} columns={stepTableColumns(input.units)} csvHref={stepTableCsvHref} eventName={event.name} />
+        <StepTable rows={event.profile} columns={stepTableColumns(input.units)} afflux={stepTableAfflux(event)} lengthUnit={u} csvHref={stepTableCsvHref} eventName={event.name} />
       </Part>
     </div>
   );

@@ -5,7 +5,7 @@ import type { CaseResult } from '@/lib/hydraulics/case-result';
 import { longSectionData, sectionOutline } from '@/lib/revisions/results-sheet';
 import { eventRouting } from '@/lib/routing-sheet/event-routing';
 import type { SheetRating } from '@/lib/revisions/rating-for-sheet';
-import { stepTableColumns } from '@/lib/revisions/step-table-csv';
+import { stepTableAfflux, stepTableColumns } from '@/lib/revisions/step-table-csv';
 import type { CaseInput } from '@/lib/validation/case-schema';
 import type { Governing } from '@/lib/validation/scheme-schemas';
 import { RatingChart } from '@/components/charts/rating-chart';
@@ -89,7 +89,7 @@ export function ResultsSheet({ scheme, revision, input, result, eventIndex, gove
         </Section>
       ) : null}
       <Section id="steps-heading" title={`Step table: ${event.name}`}>
-        <StepTable rows={event.profile} columns={stepTableColumns(input.units)} csvHref={`/api/schemes/${scheme.id}/step-table?revision=${revision.number}&event=${eventIndex}`} eventName={event.name} />
+        <StepTable rows={event.profile} columns={stepTableColumns(input.units)} afflux={stepTableAfflux(event)} lengthUnit={u} csvHref={`/api/schemes/${scheme.id}/step-table?revision=${revision.number}&event=${eventIndex}`} eventName={event.name} />
       </Section>
       <p className="flex flex-wrap gap-6 text-sm">
         <a className="text-accent underline" href={`/api/schemes/${scheme.id}/calculation-sheet?revision=${revision.number}`} target="_blank" rel="noopener">Printable draft calculation sheet (PDF, marked DRAFT)</a>

@@ -1,14 +1,24 @@
 'use client';
 
-import { useState } from 'react';
+import { Fragment, useState } from 'react';
 import type { ProfilePoint } from '@/lib/hydraulics/profiles/profile-point';
 
 const PAGE = 20;
 
 type Column = { key: keyof ProfilePoint; label: string; digits: number };
 
-/** The with-scheme profile point by point, a page at a time, with the whole table as CSV. */
-export function StepTable({ rows, columns, csvHref, eventName }: { rows: ProfilePoint[]; columns: readonly Column[]; csvHref: string; eventName: string }) {
+type Props = {
+  rows: ProfilePoint[];
+  columns: readonly Column[];
+  /** Afflux at each row (with-scheme level − without-scheme level), so the level without the scheme stands beside it. */
+  afflux: readonly number[];
+  lengthUnit: string;
+  csvHref: string;
+  eventName: string;
+};
+
+/** The with-scheme profile point by point, a page at a time, with the level without the scheme and the afflux beside it; the whole table as CSV. */
+export function StepTable({ rows, columns, afflux, lengthUnit: u, csvHref, eventName }: Props) {
   const [page, setPage] = useState(0);
   const pages = Math.max(1, Math.ceil(rows.length / PAGE));
   const shown = rows.slice(page * PAGE, page * PAGE + PAGE);
@@ -19,15 +29,28 @@ export function StepTable({ rows, columns, csvHref, eventName }: { rows: Profile
           <caption className="mb-2 text-left text-sm text-ink-soft">Step table of {eventName} with the scheme: rows {page * PAGE + 1}–{page * PAGE + shown.length} of {rows.length}.</caption>
           <thead>
             <tr className="border-b border-paper-edge text-ink-soft">
-              {columns.map((c) => <th key={c.key} scope="col" className="px-2 py-1 text-right font-semibold">{c.label}</th>)}
+              {columns.map((c) => (
+                <Fragment key={c.key}>
+                  <th scope="col" className="px-2 py-1 text-right font-semibold">{c.key === 'waterLevel' ? `Water level with the scheme (${u})` : c.label}</th>
+                  {c.key === 'waterLevel' ? <><th scope="col" className="px-2 py-1 text-right font-semibold">Water level without the scheme ({u})</th><th scope="col" className="px-2 py-1 text-right font-semibold">Afflux ({u})</th></> : null}
+                </Fragment>
+              ))}
             </tr>
           </thead>
           <tbody>
-            {shown.map((r, i) => (
-              <tr key={page * PAGE + i} className="border-b border-paper-edge">
-                {columns.map((c) => <td key={c.key} className="num px-2 py-1 text-right">{r[c.key].toFixed(c.digits)}</td>)}
-              </tr>
-            ))}
+            {shown.map((r, i) => {
+              const rise = afflux[page * PAGE + i];
+              return (
+                <tr key={page * PAGE + i} className="border-b border-paper-edge">
+                  {columns.map((c) => (
+                    <Fragment key={c.key}>
+                      <td className="num px-2 py-1 text-right">{r[c.key].toFixed(c.digits)}</td>
+                      {c.key === 'waterLevel' ? <><td className="num px-2 py-1 text-right">{rise === undefined ? '—' : (r.waterLevel - rise).toFixed(c.digits)}</td><td className="num px-2 py-1 text-right">{rise === undefined ? '—' : rise.toFixed(c.digits)}</td></> : null}
+                    </Fragment>
+                  ))}
+                </tr>
+              );
+            })}
           </tbody>
         </table>
       </div>
