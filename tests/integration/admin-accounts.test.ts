@@ -77,4 +77,25 @@ describe('invitations', () => {
     await expect(acceptInvitation({ token, password: 'a-long-new-password', confirmPassword: 'a-long-new-password' })).rejects.toMatchObject({ status: 404 });
     expect(await cancelInvitationAction({ invitationId: invitation.id })).toMatchObject({ ok: false, error: expect.stringMatching(/cancelled/) });
   });
+
+  it('can be sent again to an address whose invitation was cancelled: the same account, a new link that works, the old one still refused', async () => {
+    const email = 'nell.ashby@wendle-valley.test';
+    await inviteUser({ input: { email, name: 'Nell Ashby', role: 'designer' }, admin: admin.sessionUser, baseUrl: 'http://localhost:3000' });
+    const first = (await Invitation.findOne({ where: { email } }))!;
+    const accountId = (await User.findOne({ where: { email } }))!.id;
+    expect(await cancelInvitationAction({ invitationId: first.id })).toMatchObject({ ok: true });
+    await inviteUser({ input: { email, name: 'Nell Ashby', role: 'checker' }, admin: admin.sessionUser, baseUrl: 'http://localhost:3000' });
+    const [oldToken, newToken] = await tokensFor(email);
+    expect(await invitationStanding(oldToken)).toEqual({ ok: false, reason: 'cancelled' });
+    expect(await invitationStanding(newToken)).toMatchObject({ ok: true, email });
+    await acceptInvitation({ token: newToken, password: 'a-long-new-password', confirmPassword: 'a-long-new-password' });
+    const account = (await User.findOne({ where: { email } }))!;
+    expect({ id: account.id, role: account.role, status: account.status }).toEqual({ id: accountId, role: 'checker', status: 'active' });
+  });
+
+  it('still refuses an address whose account was used, even when it is deactivated', async () => {
+    const designer = await createTestUser('designer');
+    expect(await setUserActiveAction({ userId: designer.user.id, active: false })).toMatchObject({ ok: true });
+    await expect(inviteUser({ input: { email: designer.user.email, name: 'Someone Else', role: 'designer' }, admin: admin.sessionUser, baseUrl: 'http://localhost:3000' })).rejects.toMatchObject({ status: 409 });
+  });
 });

@@ -20,9 +20,14 @@ export async function inviteUser({ input, admin, baseUrl }: { input: InviteUserI
   const sequelize = database();
   const token = randomBytes(32).toString('base64url');
   const invitation = await sequelize.transaction(async (transaction) => {
-    if (await User.findOne({ where: { email: input.email }, transaction })) throw new ConflictError(`An account for ${input.email} exists already.`);
-    const userId = randomUUID();
-    await User.create({ id: userId, email: input.email, name: input.name, role: input.role, passwordHash: null, status: 'invited', organisation: null }, { transaction });
+    const existing = await User.findOne({ where: { email: input.email }, transaction });
+    // An account whose invitation was cancelled before anyone set its password never signed in: invite it afresh
+    // (keeping its id, so its trail stays one person's) rather than refuse the address for ever.
+    const neverUsed = existing !== null && existing.status === 'disabled' && existing.passwordHash === null;
+    if (existing && !neverUsed) throw new ConflictError(`An account for ${input.email} exists already.`);
+    const userId = existing?.id ?? randomUUID();
+    if (existing) await existing.update({ name: input.name, role: input.role, status: 'invited', updatedAt: new Date().toISOString() }, { transaction });
+    else await User.create({ id: userId, email: input.email, name: input.name, role: input.role, passwordHash: null, status: 'invited', organisation: null }, { transaction });
     const created = await Invitation.create(
       { id: randomUUID(), email: input.email, role: input.role, tokenHash: invitationTokenHash(token), invitedBy: admin.id, expiresAt: new Date(Date.now() + INVITATION_DAYS * 86400_000).toISOString(), acceptedAt: null },
       { transaction },
