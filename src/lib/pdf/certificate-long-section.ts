@@ -1,26 +1,12 @@
 import type PDFDocument from 'pdfkit';
 import type { EventResult } from '@/lib/hydraulics/case-result';
 import { fixed, levelUnit, pdfText } from './certificate-text';
+import { type Box, niceStep, polyline } from './chart-drawing';
 
 type Doc = InstanceType<typeof PDFDocument>;
-interface Box { x: number; y: number; width: number; height: number }
 
 const COLOURS = { ink: '#1f2a2e', soft: '#4a5a60', faint: '#7d8b90', edge: '#d9d2c3', accent: '#17636b', fail: '#a33a2a', bank: '#8a6212' };
 
-function niceStep(span: number, count: number): number {
-  const raw = span / count;
-  const power = 10 ** Math.floor(Math.log10(raw));
-  return [1, 2, 2.5, 5, 10].map((f) => f * power).find((s) => s >= raw) ?? 10 * power;
-}
-
-function polyline(doc: Doc, points: [number, number][], colour: string, width: number, dash?: number): void {
-  if (points.length < 2) return;
-  doc.save().lineWidth(width).strokeColor(colour);
-  if (dash) doc.dash(dash, { space: dash * 0.8 });
-  doc.moveTo(...points[0]);
-  for (const p of points.slice(1)) doc.lineTo(...p);
-  doc.stroke().restore();
-}
 
 /**
  * The long-section of one event as vector graphics: distance upstream on x, level on y; the bed, the bank line
