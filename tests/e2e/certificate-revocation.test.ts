@@ -1,4 +1,3 @@
-import { createServer } from 'node:net';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { Op } from 'sequelize';
@@ -10,17 +9,9 @@ import { demoParcelsCsv } from '../integration/support/liaison-fixtures';
 import { createCertifiedScheme } from '../integration/support/scheme-factory';
 import { createTestUser } from '../integration/support/user-factory';
 import { ARTIFACTS, useServedPortal } from './support/served-portal';
+import { freePort } from './support/app-server';
 
 type Person = Awaited<ReturnType<typeof createTestUser>>;
-
-function freePort(): Promise<number> {
-  return new Promise((resolve) => {
-    const server = createServer().listen(0, '127.0.0.1', () => {
-      const { port } = server.address() as { port: number };
-      server.close(() => resolve(port));
-    });
-  });
-}
 
 // Before the portal starts: its own local mail server on a free port, so the outbox read below is this portal's.
 beforeAll(async () => {

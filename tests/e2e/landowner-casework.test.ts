@@ -1,13 +1,12 @@
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_USERS } from '../../db/seeds/demo-users';
 import { seriousAccessibilityViolations } from './support/accessibility';
-import { type RunningApp, startApp } from './support/app-server';
+import { freePort, startApp, type RunningApp } from './support/app-server';
 import { launchBrowser, signInAs } from './support/browser';
 import { addCountersignedRevision, makeLetterOverdue } from './support/countersigned-revision';
 
@@ -18,15 +17,6 @@ const folder = mkdtempSync(path.join(tmpdir(), 'sillmark-e2e-casework-'));
 let app: RunningApp;
 let browser: Awaited<ReturnType<typeof launchBrowser>>;
 let schemeId: string;
-
-function freePort(): Promise<number> {
-  return new Promise((resolve) => {
-    const server = createServer().listen(0, '127.0.0.1', () => {
-      const { port } = server.address() as { port: number };
-      server.close(() => resolve(port));
-    });
-  });
-}
 
 async function checked(page: Page, name: string) {
   await page.screenshot({ path: `tests/.artifacts/casework-${name}.png`, fullPage: true });

@@ -1,7 +1,6 @@
 import { execFileSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { mkdirSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import Database from 'better-sqlite3';
@@ -11,7 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseParcelsCsv } from '@/lib/parcels/parcels-csv';
 import { DEMO_USERS } from '../../db/seeds/demo-users';
 import { seriousAccessibilityViolations } from './support/accessibility';
-import { startApp, type RunningApp } from './support/app-server';
+import { freePort, startApp, type RunningApp } from './support/app-server';
 import { addCountersignedRevision } from './support/countersigned-revision';
 import { launchBrowser, signInAs } from './support/browser';
 
@@ -22,15 +21,6 @@ const sha256 = (b: Buffer | string) => createHash('sha256').update(b).digest('he
 let app: RunningApp;
 let browser: Browser;
 let schemeId: string;
-
-function freePort(): Promise<number> {
-  return new Promise((resolve) => {
-    const server = createServer().listen(0, '127.0.0.1', () => {
-      const { port } = server.address() as { port: number };
-      server.close(() => resolve(port));
-    });
-  });
-}
 
 /** A screenshot to look at; no serious or critical accessibility violation; nothing wider than the window (wide tables scroll inside it). */
 async function shot(page: Page, name: string) {

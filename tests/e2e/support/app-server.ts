@@ -8,7 +8,8 @@ import { buildIfNeeded } from '../../../src/cli/build-if-needed.mjs';
 
 const TSX = ['tsx', '--conditions=react-server', '--tsconfig', 'tsconfig.json'];
 
-function freePort(): Promise<number> {
+/** A loopback port nobody is listening on (for the app, or a test's own mail server). */
+export function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
     const server = createServer();
     server.listen(0, '127.0.0.1', () => {
