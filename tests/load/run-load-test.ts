@@ -3,7 +3,8 @@
 // percentiles are computed from every response's latency; each target is printed with PASS or MISSED.
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
-import autocannon from 'autocannon';
+import { execFile } from 'node:child_process';
+import type autocannon from 'autocannon';
 import { lucia } from '@/lib/auth/lucia';
 import { User, closeSequelize, database } from '@/lib/db';
 import { startApp } from '../e2e/support/app-server';
@@ -22,15 +23,17 @@ async function designerCookie(databasePath: string): Promise<string> {
   return `${lucia().sessionCookieName}=${session.id}`;
 }
 
+/** One run in its own process (tests/load/autocannon-child.mjs): two runs at once must not share an event loop. */
 function run(name: string, options: autocannon.Options): Promise<LoadRow> {
   console.log(`▶ ${name}: ${CONNECTIONS} connections for ${DURATION_S} s`);
-  const latencies: number[] = [];
+  const settings = { ...options, connections: CONNECTIONS, duration: DURATION_S, maxConnectionRequests: MAX_REQUESTS_PER_CONNECTION };
   return new Promise((resolve, reject) => {
-    const instance = autocannon({ ...options, connections: CONNECTIONS, duration: DURATION_S, maxConnectionRequests: MAX_REQUESTS_PER_CONNECTION }, (error, result) =>
-      // autocannon counts a time-out among its errors too: adding result.timeouts would count it twice.
-      error ? reject(error) : resolve(loadRow(name, latencies, result.duration, { errors: result.errors, non2xx: result.non2xx })),
-    );
-    instance.on('response', (_client, _status, _bytes, responseTime) => latencies.push(responseTime));
+    execFile(process.execPath, ['tests/load/autocannon-child.mjs', JSON.stringify(settings)], { maxBuffer: 256 * 2 ** 20 }, (error, stdout) => {
+      if (error) return reject(error);
+      const outcome = JSON.parse(stdout) as { latencies: number[]; seconds: number; errors: number; non2xx: number };
+      // autocannon counts a time-out among its errors too: adding its time-outs would count them twice.
+      resolve(loadRow(name, outcome.latencies, outcome.seconds, { errors: outcome.errors, non2xx: outcome.non2xx }));
+    });
   });
 }
 
