@@ -23,6 +23,9 @@ export function buildEngineWorker({ outfile = engineWorkerPath(), cwd = process.
     target: 'node20',
     tsconfig: 'tsconfig.json',
     logLevel: 'warning',
+    // The worker returns piscina's move() marks, which piscina checks against its own module's private symbol: a
+    // bundled copy of piscina would mark with another symbol, and the result would be cloned empty.
+    external: ['piscina'],
     // Bundled CommonJS packages may call require(); an ES module has none of its own.
     banner: { js: "import { createRequire as sillmarkCreateRequire } from 'node:module'; const require = sillmarkCreateRequire(import.meta.url);" },
   });

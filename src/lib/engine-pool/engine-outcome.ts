@@ -1,9 +1,10 @@
-// What crosses the thread boundary: the result as JSON text, or an engine error as plain data (a class does not survive
-// the structured clone, and the portal maps EngineError subclasses to their HTTP status by class).
+// What crosses the thread boundary: the result as UTF-8 JSON bytes, moved rather than copied (a result of some 100 KB
+// as a string cost its clone on both threads and then an encoding on the way out), or an engine error as plain data (a
+// class does not survive the structured clone, and the portal maps EngineError subclasses to their HTTP status by class).
 import { EngineError, InvalidInputError, NoPhysicalSolutionError } from '@/lib/hydraulics/errors';
 
 export type EngineOutcome =
-  | { ok: true; resultJson: string }
+  | { ok: true; resultJson: Uint8Array }
   | { ok: false; kind: 'invalid-input' | 'no-physical-solution' | 'engine'; field: string; code: string; message: string }
   | { ok: false; kind: 'too-deep'; message: string };
 

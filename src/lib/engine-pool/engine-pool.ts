@@ -26,6 +26,7 @@ export const ENGINE_TIME_LIMIT_MS = positiveInteger(process.env.ENGINE_TIME_LIMI
 // 32 cases waiting per core, as when every core had a worker: fewer workers must not turn more callers away.
 const QUEUE_LIMIT = positiveInteger(process.env.ENGINE_QUEUE_LIMIT) ?? os.availableParallelism() * 32;
 const RETRY_AFTER_SECONDS = 5;
+const utf8 = new TextDecoder();
 const WORKER_NICE_INCREMENT = 10;
 
 /** Built by src/cli/build-engine-worker.mjs; the same rule for where it lives is there. */
@@ -77,10 +78,10 @@ async function runOffThread(caseInput: CaseInput, cancelled?: AbortSignal, job: 
 }
 
 /**
- * The engine's result for a parsed case, as JSON text, computed on a worker thread. Throws the engine's own errors
+ * The engine's result for a parsed case, as UTF-8 JSON bytes, computed on a worker thread. Throws the engine's own errors
  * (InvalidInputError, NoPhysicalSolutionError), a 422 when the case is too large or too slow, and a 429 when busy.
  */
-export async function evaluateCaseJsonOffThread(caseInput: CaseInput, cancelled?: AbortSignal): Promise<string> {
+export async function evaluateCaseJsonOffThread(caseInput: CaseInput, cancelled?: AbortSignal): Promise<Uint8Array> {
   const outcome = await runOffThread(caseInput, cancelled);
   if (outcome.ok) return outcome.resultJson;
   if (outcome.kind === 'too-deep') throw caseTooLarge(caseInput);
@@ -89,7 +90,7 @@ export async function evaluateCaseJsonOffThread(caseInput: CaseInput, cancelled?
 
 /** As evaluateCase, but on a worker thread: the request thread stays free for other requests. */
 export async function evaluateCaseOffThread(caseInput: CaseInput): Promise<CaseResult> {
-  const result = JSON.parse(await evaluateCaseJsonOffThread(caseInput)) as CaseResult;
+  const result = JSON.parse(utf8.decode(await evaluateCaseJsonOffThread(caseInput))) as CaseResult;
   // Results are frozen with the server's engine version, so a worker bundled from older sources must not supply them.
   if (result.engineVersion !== ENGINE_VERSION) throw new Error(`The engine worker runs ${result.engineVersion}, the server ${ENGINE_VERSION}: rebuild it (npm run build).`);
   return result;
@@ -98,7 +99,7 @@ export async function evaluateCaseOffThread(caseInput: CaseInput): Promise<CaseR
 /** The structure's head and upstream level across the range of the case's events, on a worker thread. */
 export async function structureRatingOffThread(caseInput: CaseInput): Promise<StructureRating> {
   const outcome = await runOffThread(caseInput, undefined, 'rating');
-  if (outcome.ok) return JSON.parse(outcome.resultJson) as StructureRating;
+  if (outcome.ok) return JSON.parse(utf8.decode(outcome.resultJson)) as StructureRating;
   if (outcome.kind === 'too-deep') throw caseTooLarge(caseInput);
   throw engineErrorOf(outcome);
 }

@@ -1,6 +1,7 @@
 // The entry of each engine worker thread. Bundled to one plain .mjs file by src/cli/build-engine-worker.mjs, because
 // neither Next's server bundle nor vitest can hand a TypeScript file to a worker thread.
 import type { MessagePort } from 'node:worker_threads';
+import { move, transferableSymbol, valueSymbol } from 'piscina';
 import { evaluateCase, structureRating } from '@/lib/hydraulics';
 import type { CaseInput } from '@/lib/validation/case-schema';
 import { type EngineOutcome, outcomeOfError } from './engine-outcome';
@@ -13,11 +14,19 @@ export interface EngineTask {
   started: MessagePort;
 }
 
+const utf8 = new TextEncoder();
+
+/** The outcome with its bytes' buffer in piscina's transfer list: a nested buffer is otherwise cloned. */
+function movedBytes(resultJson: Uint8Array): EngineOutcome {
+  const outcome: EngineOutcome = { ok: true, resultJson };
+  return move({ [transferableSymbol]: [resultJson.buffer], [valueSymbol]: outcome }) as unknown as EngineOutcome;
+}
+
 export default function evaluateInWorker({ caseInput, job = 'case', started }: EngineTask): EngineOutcome {
   started.postMessage('started');
   started.close();
   try {
-    return { ok: true, resultJson: JSON.stringify(job === 'rating' ? structureRating(caseInput) : evaluateCase(caseInput)) };
+    return movedBytes(utf8.encode(JSON.stringify(job === 'rating' ? structureRating(caseInput) : evaluateCase(caseInput))));
   } catch (error) {
     return outcomeOfError(error);
   }

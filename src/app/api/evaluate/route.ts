@@ -10,6 +10,8 @@ import { evaluateDraft } from '@/lib/revisions/evaluate-draft';
 import { parseCase } from '@/lib/validation/parse-case';
 import { evaluateRequestSchema } from '@/lib/validation/scheme-schemas';
 
+const EVALUATED_OPENING = Buffer.from('{"status":"evaluated","result":');
+const EVALUATED_CLOSING = Buffer.from('}');
 const objectBody = z.record(z.string(), z.unknown(), { error: 'The request body must be a JSON object: a case file, or { "revisionId": … }.' });
 
 /**
@@ -21,9 +23,10 @@ export const POST = authorizedRoute(ANY_ROLE, async (request, user) => {
   if ('format' in body) {
     const parsed = parseCase(body);
     if (!parsed.ok) throw new InvalidRequestError(caseIssuesInWords(parsed.issues, body));
-    // The worker's JSON text is sent as it is: parsing and re-serialising it would put the work back on this thread.
+    // The worker's JSON bytes are sent as they are: decoding, parsing or re-serialising them would put the work back
+    // on this thread (a string body is also scanned and encoded again on the way out).
     const resultJson = await evaluateCaseJsonOffThread(parsed.value, request.signal);
-    return new Response(`{"status":"evaluated","result":${resultJson}}`, { headers: { 'content-type': 'application/json' } });
+    return new Response(Buffer.concat([EVALUATED_OPENING, resultJson, EVALUATED_CLOSING]), { headers: { 'content-type': 'application/json' } });
   }
   const draftRequest = evaluateRequestSchema.safeParse(body);
   if (!draftRequest.success) throw new InvalidRequestError(fieldIssuesFromZod(draftRequest.error));
