@@ -7,7 +7,7 @@ import type { CertificateContent } from '@/lib/pdf/certificate-content';
 import { renderCertificatePdf } from '@/lib/pdf/certificate-pdf';
 import { frozenCaseFile } from '@/lib/revisions/revision-hashes';
 import { signPdf } from '@/lib/signing/sign-pdf';
-import { signingIdentity } from '@/lib/signing/signing-identity';
+import { type SigningIdentity, signingIdentity } from '@/lib/signing/signing-identity';
 import { parseCase } from '@/lib/validation/parse-case';
 import { createTestRevision, createTestScheme } from '../integration/support/liaison-fixtures';
 import { useTestDatabase } from '../integration/support/test-database';
@@ -21,6 +21,7 @@ let db: Awaited<ReturnType<typeof useTestDatabase>>;
 let people: { scheme: Scheme; revision: Revision; designer: User; checker: User };
 let content: CertificateContent;
 let unsigned: Buffer;
+let identity: SigningIdentity;
 
 function certificateContent(revision: Revision, scheme: Scheme): CertificateContent {
   const parsed = parseCase(frozenCaseFile(revision.inputsJson));
@@ -51,7 +52,7 @@ beforeAll(async () => {
   people = { scheme, revision, designer, checker };
   content = certificateContent(revision, scheme);
   unsigned = await renderCertificatePdf(content);
-  await signingIdentity();
+  identity = await signingIdentity();
 });
 afterAll(async () => db.cleanup());
 
@@ -63,10 +64,10 @@ describe('certificate PDF (demo case, one countersigned revision)', () => {
   }, once);
 
   bench('sign: detached PKCS#7 (RSA 2048) over the rendered PDF', async () => {
-    await signPdf({ pdf: unsigned, reason: 'Sillmark benchmark', location: 'River Wendle at Harrowfield Mill', contactInfo: content.verificationUrl });
+    await signPdf(unsigned, identity, { reason: 'Sillmark benchmark', location: 'River Wendle at Harrowfield Mill', contactInfo: content.verificationUrl });
   }, once);
 
-  bench('issue: render, sign, store the file and record the row and audit event (rolled back)', async () => {
+  bench('issue: render and sign on the PDF pool, store the file and record the row and audit event (rolled back)', async () => {
     const transaction = await database().transaction();
     let written: string | null = null;
     try {

@@ -7,13 +7,13 @@ import { startLocalSmtpServer, stopLocalSmtpServer } from '@/lib/mail/local-smtp
 import { computeParcelImpact } from '@/lib/parcels/compute-parcel-impact';
 import { importParcelRegister } from '@/lib/parcels/import-parcel-register';
 import { MAX_LETTERS_PER_SEND } from '@/lib/validation/letter-schemas';
-import { createTestRevision, createTestScheme } from '../integration/support/liaison-fixtures';
+import { createTestRevision, createTestScheme, inventedHoldingsCsv } from '../integration/support/liaison-fixtures';
 import { useTestDatabase } from '../integration/support/test-database';
 import { createTestUser } from '../integration/support/user-factory';
 import { machineDescription } from './machine';
 
-// A batch of 100 letters: 100 invented holdings of 20 m frontage each along the Harrowfield Mill reach, every one
-// affected by a countersigned revision of the demo case. Making renders and stores the 100 PDFs and records the
+// A batch of 100 letters: 100 invented holdings (inventedHoldingsCsv), every one affected by a countersigned
+// revision of the demo case. Making renders the 100 PDFs on the PDF pool, stores them and records the
 // batch; sending mails them, PDF attached, to the local SMTP server on loopback (which stores each in the outbox).
 
 const PARCELS = 100;
@@ -27,18 +27,9 @@ let checkerId: string;
 let toMake: { schemeId: string; revisionId: string };
 const toSend: string[] = [];
 
-function hundredHoldingsCsv(): Buffer {
-  const rows = Array.from({ length: PARCELS }, (_, i) => {
-    const n = String(i + 1).padStart(3, '0');
-    const from = 20 + i * 20;
-    return `WH-${n},Wendle holding ${n},"${n} Mill Lane, Harrowfield, HF3 2WD",holding-${n}@harrowfield.test,${from},${from + 20},${i % 2 ? 'left' : 'right'},,grazing pasture`;
-  });
-  return Buffer.from(['parcel_reference,owner_name,postal_address,email,distance_from_m,distance_to_m,bank_side,ground_level_m,land_use', ...rows].join('\n'));
-}
-
 async function schemeWithHundredAffected() {
   const schemeId = (await createTestScheme(designerId)).id;
-  await importParcelRegister({ user: liaison, schemeId, bytes: hundredHoldingsCsv(), originalName: 'holdings.csv' });
+  await importParcelRegister({ user: liaison, schemeId, bytes: inventedHoldingsCsv(PARCELS), originalName: 'holdings.csv' });
   const revision = await createTestRevision({ schemeId, authorId: designerId, checkerId, status: 'countersigned' });
   const affected = (await computeParcelImpact({ user: liaison, schemeId })).rows.filter((r) => r.category === 'affected').length;
   if (affected !== PARCELS) throw new Error(`expected ${PARCELS} affected holdings, the demo case affects ${affected}`);

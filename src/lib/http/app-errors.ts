@@ -10,7 +10,7 @@ export interface FieldIssue {
 export class AppError extends Error {
   constructor(
     message: string,
-    readonly status: 400 | 401 | 403 | 404 | 409 | 413 | 422 | 429,
+    readonly status: 400 | 401 | 403 | 404 | 409 | 413 | 422 | 429 | 503,
   ) {
     super(message);
     this.name = new.target.name;
@@ -41,13 +41,15 @@ export class ConflictError extends AppError {
   }
 }
 
+/** 429 when one client asks too often; 503 when the server as a whole is too busy, whoever asks. */
 export class ThrottledError extends AppError {
   constructor(
     message: string,
     /** Sent as Retry-After when set. */
     readonly retryAfterSeconds?: number,
+    status: 429 | 503 = 429,
   ) {
-    super(message, 429);
+    super(message, status);
   }
 }
 

@@ -9,7 +9,7 @@ export function toHttpResponse(error: unknown): Response {
     return Response.json({ error: error.message, issues: error.issues }, { status: error.status });
   }
   if (error instanceof ThrottledError && error.retryAfterSeconds !== undefined) {
-    return Response.json({ error: error.message }, { status: 429, headers: { 'Retry-After': String(error.retryAfterSeconds) } });
+    return Response.json({ error: error.message }, { status: error.status, headers: { 'Retry-After': String(error.retryAfterSeconds) } });
   }
   if (error instanceof AppError) return Response.json({ error: error.message }, { status: error.status });
   if (error instanceof EngineError) {

@@ -1,7 +1,7 @@
 import 'server-only';
 import { discharge, distance, metres } from '@/lib/parcels/format-quantity';
 import { drawPlanPdf } from '@/lib/plan/draw-plan-pdf';
-import { LETTER_PLAN_SIZE, type LetterPlan } from '@/lib/plan/letter-plan';
+import { LETTER_PLAN_SIZE, type LetterPlan } from '@/lib/plan/letter-plan-page';
 import { cautionText } from './letter-content';
 import type { LetterImpact } from './letter-impact';
 import { CAUTION, type Doc, INK, MARGIN, SOFT, heading, paragraph } from './letter-page-style';

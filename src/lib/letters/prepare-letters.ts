@@ -11,13 +11,14 @@ import { calendarDateIn, responseDeadline } from '@/lib/dates/calendar-dates';
 import { InvalidRequestError, UnprocessableError } from '@/lib/http/app-errors';
 import { type ParcelImpactRow, impactForRevision } from '@/lib/parcels/compute-parcel-impact';
 import { isPreliminary } from '@/lib/parcels/select-revision';
+import { letterPdfOffThread } from '@/lib/pdf-pool/render-off-thread';
 import { letterPlans } from '@/lib/plan/letter-plan';
 import { writeLetterPdf } from './letter-files';
 import type { LetterImpact } from './letter-impact';
 import { namedMethods } from './letter-methods';
 import { fillParagraphs, placeholderValues } from './letter-placeholder-values';
 import { loadLetterTemplate } from './letter-template';
-import { type LetterDocument, renderLetterPdf } from './render-letter-pdf';
+import type { LetterDocument } from './render-letter-pdf';
 
 export interface PreparedLetter {
   id: string;
@@ -72,7 +73,7 @@ function chosenRows(affected: ParcelImpactRow[], references: string[] | undefine
 
 /**
  * Everything a batch needs before it is recorded: the chosen affected parcels' impact, and each letter's PDF rendered
- * and written under the data directory. Outside any transaction, so rendering many letters never holds the write lock.
+ * on the PDF pool and written under the data directory. Outside any transaction, so rendering many letters never holds the write lock.
  * `written` collects the files, for the caller to remove if recording fails.
  */
 export async function prepareLetters({ user, scheme, revision, written, baseUrl, parcelReferences }: { user: SessionUser; scheme: Scheme; revision: Revision; written: string[]; baseUrl: string; parcelReferences?: string[] }) {
@@ -115,7 +116,7 @@ export async function prepareLetters({ user, scheme, revision, written, baseUrl,
       impact,
       plan: planOf ? planOf(row) : null,
     };
-    const pdf = await renderLetterPdf(document);
+    const pdf = await letterPdfOffThread(document);
     const pdfPath = await writeLetterPdf(id, pdf);
     written.push(pdfPath);
     letters.push({ id, parcelId: parcel.id, reference: parcel.reference, version, category: row.category, impactJson: JSON.stringify(impact), documentJson: JSON.stringify(document), pdfPath, pdfSha256: createHash('sha256').update(pdf).digest('hex'), recipientEmail: parcel.email, responseDueOn: respondBy, createdAt });

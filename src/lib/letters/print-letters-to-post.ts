@@ -3,9 +3,10 @@ import { recordAuditEvent } from '@/lib/audit/record-audit-event';
 import type { SessionUser } from '@/lib/auth/current-session';
 import { Letter, database } from '@/lib/db';
 import { UnprocessableError } from '@/lib/http/app-errors';
+import { lettersToPostOffThread } from '@/lib/pdf-pool/render-off-thread';
 import { requireSchemeLiaisonAccess } from '@/lib/parcels/scheme-liaison-access';
 import { loadBatch } from './batch-progress';
-import { type LetterDocument, renderLettersForPrint } from './render-letter-pdf';
+import type { LetterDocument } from './render-letter-pdf';
 
 /** Parcel references compared as people read them: HM-2 before HM-10. */
 const byReference = (a: LetterDocument, b: LetterDocument) => a.impact.parcel.reference.localeCompare(b.impact.parcel.reference, 'en', { numeric: true });
@@ -21,7 +22,7 @@ export async function printLettersToPost({ user, batchId }: { user: SessionUser;
   const documents = letters.flatMap((l) => (l.documentJson ? [JSON.parse(l.documentJson) as LetterDocument] : [])).sort(byReference);
   if (documents.length === 0) throw new UnprocessableError('This batch has no letters to post: every one went by e-mail or is marked posted.');
   const printedAt = new Date().toISOString();
-  const pdf = await renderLettersForPrint(documents, printedAt);
+  const pdf = await lettersToPostOffThread(documents, printedAt);
   await database().transaction((transaction) => recordAuditEvent({ actorId: user.id, action: 'letters.printed', entityType: 'letter_batch', entityId: batchId, schemeId: scheme.id, details: { letters: documents.length } }, transaction));
   return { pdf, fileName: `${scheme.reference}-letters-to-post-${printedAt.slice(0, 10)}.pdf`.replace(/[^A-Za-z0-9._-]/g, '-') };
 }

@@ -3,7 +3,7 @@ import PDFDocument from 'pdfkit';
 import { longDate } from '@/lib/dates/calendar-dates';
 import { distance } from '@/lib/parcels/format-quantity';
 import { registerPdfFonts } from '@/lib/pdf/fonts';
-import type { LetterPlan } from '@/lib/plan/letter-plan';
+import type { LetterPlan } from '@/lib/plan/letter-plan-page';
 import type { LetterParagraphs } from '@/lib/validation/letter-schemas';
 import { drawLetterDiagram } from './draw-letter-diagram';
 import { ADDRESS_FIELD, addressLines } from './letter-address';

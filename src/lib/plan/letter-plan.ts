@@ -3,17 +3,9 @@ import type { ParcelImpactRow } from '@/lib/parcels/compute-parcel-impact';
 import { reachLongSections } from '@/lib/parcels/reach-long-section';
 import type { RevisionResults } from '@/lib/parcels/revision-results';
 import { loadParcelPlan } from './load-parcel-plan';
-import { type PlanDrawing, layOutPlan } from './plan-drawing';
+import { LETTER_PLAN_SIZE, type LetterPlan } from './letter-plan-page';
+import { layOutPlan } from './plan-drawing';
 import { impactExtent, inundatedStretches } from './river-stretches';
-
-export interface LetterPlan {
-  drawing: PlanDrawing;
-  coordinateSystem: string;
-  event: string;
-}
-
-/** Page size of the plan in a letter, in PDF points (the text width of an A4 page with 56 pt margins). */
-export const LETTER_PLAN_SIZE = { width: 483, height: 250 } as const;
 
 /**
  * For a batch of letters: a function giving each parcel's plan cropped round it, with the river marks of the event

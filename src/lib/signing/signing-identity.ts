@@ -4,7 +4,7 @@ import { link, mkdir, readFile, unlink, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import forge from 'node-forge';
 import { dataDirectory } from '@/lib/db/database-path';
-import { createSelfSignedIdentity } from './self-signed-identity';
+import { signingIdentityOffThread } from '@/lib/pdf-pool/render-off-thread';
 
 /** The portal's signing identity: what a hosted signing service would hold for it. */
 export interface SigningIdentity {
@@ -49,9 +49,10 @@ function fromStored(stored: StoredIdentity): SigningIdentity {
 async function createOnce(file: string): Promise<void> {
   await mkdir(path.dirname(file), { recursive: true, mode: 0o700 });
   const passphrase = randomBytes(24).toString('base64url');
-  const created = createSelfSignedIdentity(passphrase);
+  // Making the RSA key and the PKCS#12 bag is CPU work: it runs on the PDF pool, as signing does.
+  const created = await signingIdentityOffThread(passphrase);
   const temporary = `${file}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`;
-  await writeFile(temporary, JSON.stringify({ passphrase, p12Base64: created.p12.toString('base64'), certificatePem: created.certificatePem }), { mode: 0o600 });
+  await writeFile(temporary, JSON.stringify({ passphrase, p12Base64: Buffer.from(created.p12).toString('base64'), certificatePem: created.certificatePem }), { mode: 0o600 });
   // link() refuses to replace an existing file, so when two processes start at once the first identity wins.
   await link(temporary, file).catch((error: NodeJS.ErrnoException) => {
     if (error.code !== 'EEXIST') throw error;

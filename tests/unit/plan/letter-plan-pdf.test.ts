@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import type { LetterImpact } from '@/lib/letters/letter-impact';
 import { DEFAULT_PARAGRAPHS } from '@/lib/letters/letter-template';
 import { type LetterDocument, renderLetterPdf } from '@/lib/letters/render-letter-pdf';
-import { LETTER_PLAN_SIZE } from '@/lib/plan/letter-plan';
+import { LETTER_PLAN_SIZE } from '@/lib/plan/letter-plan-page';
 import { parsePlanGeoJson } from '@/lib/plan/outlines-geojson';
 import { layOutPlan } from '@/lib/plan/plan-drawing';
 
