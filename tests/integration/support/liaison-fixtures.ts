@@ -58,12 +58,12 @@ export async function createTestRevision(options: { schemeId: string; authorId: 
   });
 }
 
-/** A register of `count` invented holdings of 20 m frontage each along the Harrowfield Mill reach, each with an e-mail address. */
-export function inventedHoldingsCsv(count: number): Buffer {
+/** A register of `count` invented holdings of 20 m frontage each along the Harrowfield Mill reach; without e-mail, their letters go by post. */
+export function inventedHoldingsCsv(count: number, { withEmail = true } = {}): Buffer {
   const rows = Array.from({ length: count }, (_, i) => {
     const n = String(i + 1).padStart(3, '0');
     const from = 20 + i * 20;
-    return `WH-${n},Wendle holding ${n},"${n} Mill Lane, Harrowfield, HF3 2WD",holding-${n}@harrowfield.test,${from},${from + 20},${i % 2 ? 'left' : 'right'},,grazing pasture`;
+    return `WH-${n},Wendle holding ${n},"${n} Mill Lane, Harrowfield, HF3 2WD",${withEmail ? `holding-${n}@harrowfield.test` : ''},${from},${from + 20},${i % 2 ? 'left' : 'right'},,grazing pasture`;
   });
   return Buffer.from(['parcel_reference,owner_name,postal_address,email,distance_from_m,distance_to_m,bank_side,ground_level_m,land_use', ...rows].join('\n'));
 }
