@@ -44,7 +44,7 @@ const makeBatch = () => generateLetters({ user: liaison, input: { schemeId: peop
 
 async function batchLetters(batchId: string): Promise<{ document: LetterDocument; stored: Buffer }[]> {
   const letters = await Letter.findAll({ where: { batchId } });
-  return letters.map((l) => ({ document: JSON.parse(l.documentJson ?? 'null') as LetterDocument, stored: readFileSync(path.resolve(path.dirname(db.file), l.pdfPath)) }));
+  return letters.map((l) => ({ document: JSON.parse(l.documentJson ?? 'null') as LetterDocument, stored: readFileSync(path.resolve(path.dirname(db.file), l.pdfPath ?? '')) }));
 }
 
 beforeAll(async () => {
