@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { atMost, finite, missingOr, nonNegative, positive, text, type UnitLabels } from './case-schema-primitives';
 import { multiLineText } from './plain-text';
 import { dischargeMatchesHydrograph, hydrographSchema } from './case-schema-routing';
+import { MAX_MANNING_N, MIN_MANNING_N } from './manning-range';
 import { MAX_POINTS_PER_SECTION, MAX_RATING_TABLE_ROWS, MAX_SURVEYED_SECTIONS } from './input-limits';
 
 // Building blocks of the case-file schema: one schema per part of the file, with messages in the case's units.
@@ -37,7 +38,9 @@ function sectionSchema(u: UnitLabels) {
   );
 }
 
-export const manningN = positive().max(0.5, { error: "must be at most 0.5 (Manning's n is dimensionless, typically 0.01–0.15)" });
+export const manningN = finite()
+  .min(MIN_MANNING_N, { error: `must be at least ${MIN_MANNING_N} (Manning's n is dimensionless, typically 0.01–0.15)` })
+  .max(MAX_MANNING_N, { error: `must be at most ${MAX_MANNING_N} (Manning's n is dimensionless, typically 0.01–0.15)` });
 export const energyCoefficient = finite().min(1, { error: 'must be 1 or more' }).max(3, { error: 'must be at most 3' });
 
 export function prismaticReachSchema(u: UnitLabels) {
@@ -86,12 +89,17 @@ export function surveyedReachSchema(u: UnitLabels) {
   });
 }
 
+// Below this (a litre a second, or a thirtieth of one in ft³/s) depths underflow to nothing in a wide channel.
+const MIN_EVENT_DISCHARGE = 0.001;
+
 export function eventSchema(u: UnitLabels) {
   return z
     .object({
       name: text('the event name'),
       /** With a hydrograph table it may be left out of the file: it is then the table's peak (see withDischargeFromHydrograph). */
-      discharge: positive(u.discharge),
+      discharge: finite(u.discharge)
+        .positive({ error: `must be greater than 0 ${u.discharge}`, abort: true })
+        .min(MIN_EVENT_DISCHARGE, { error: `must be at least ${MIN_EVENT_DISCHARGE} ${u.discharge} (a smaller flow is below what the depth calculations resolve)` }),
       annualExceedanceProbability: finite().gt(0, { error: 'must be greater than 0' }).lte(1, { error: 'must be at most 1' }).optional(),
       returnPeriod: finite('years').gte(1, { error: 'must be at least 1 year' }).optional(),
       climateChangeAllowance: finite('%').gte(0, { error: 'must be 0 % or more' }).lte(200, { error: 'must be at most 200 %' }).optional(),

@@ -1,5 +1,6 @@
 import type { CaseUnits } from './case-schema';
 import { excerpt } from '@/lib/case-words/excerpt';
+import { MAX_MANNING_N, MIN_MANNING_N } from './manning-range';
 
 // Reading a survey CSV's header and rows into numbers, one line-numbered message per bad cell.
 
@@ -73,7 +74,7 @@ function rowOf(record: string[], line: number, columns: Map<Column, number>, uni
   let manningN: number | null = null;
   if (nText !== '') {
     if (!NUMBER.test(nText)) issues.push({ line, message: `manning_n "${excerpt(nText)}" is not a number (Manning's n, dimensionless, typically 0.02–0.15)` });
-    else if (!(Number(nText) > 0 && Number(nText) <= 0.5)) issues.push({ line, message: `manning_n ${excerpt(nText)} must be greater than 0 and at most 0.5 (typically 0.02–0.15)` });
+    else if (!(Number(nText) >= MIN_MANNING_N && Number(nText) <= MAX_MANNING_N)) issues.push({ line, message: `manning_n ${excerpt(nText)} must be at least ${MIN_MANNING_N} and at most ${MAX_MANNING_N} (typically 0.02–0.15)` });
     manningN = Number(nText);
   }
   const bank = columns.has('bank') ? bankOf(cell('bank')) : null;

@@ -34,8 +34,11 @@ export function distancePerDepth(section: FlowSection, discharge: CubicMetresPer
 function integratedDistances(f: (y: Metres) => number, depths: readonly Metres[]): number[] | null {
   const solver = new Solver(1);
   solver.denseOutput = true;
-  solver.relativeTolerance = 1e-11;
-  solver.absoluteTolerance = 1e-9;
+  // A reference a million times finer than what it checks: the profiles are converged to about 0.1 % in extent, and
+  // 1e-9 keeps the integration's own error in micrometres over kilometres. At 1e-11 it cost a fifth more of the whole
+  // case and moved the reported differences only in their tenth digit.
+  solver.relativeTolerance = 1e-9;
+  solver.absoluteTolerance = 1e-7;
   solver.maxSteps = MAX_SOLVER_STEPS;
   const rising = depths[depths.length - 1] > depths[0];
   const distances: number[] = [0];
