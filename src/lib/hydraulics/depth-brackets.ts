@@ -2,6 +2,7 @@
 import type { Bracket } from './root-scan';
 import type { FlowSection } from './section';
 import { expandBracketUpward } from './solvers';
+import { sortedDistinct } from './sorted-distinct';
 import type { Metres } from './units';
 
 const UNIFORM_STEPS = 400;
@@ -48,13 +49,25 @@ export function breakpointDepthGrid(section: FlowSection & { breakpointDepths: r
   if (grid === undefined) {
     const top = section.maxDepth;
     const nudge = top * SHALLOWEST_FRACTION;
-    const depths: Metres[] = [nudge, top];
-    for (const d of section.breakpointDepths) if (d > 0 && d < top) depths.push(d);
-    for (const d of section.jumpDepths ?? section.breakpointDepths) if (d > 0 && d < top) depths.push(Math.min(top, d + nudge));
-    grid = withGapsFilled(sortedDistinct(depths), top * WIDEST_TABULATED_GAP);
+    const nudged = (section.jumpDepths ?? section.breakpointDepths).map((d) => Math.min(top, d + nudge));
+    const depths = mergedAscending(mergedAscending([nudge], section.breakpointDepths), nudged).filter((d) => d > 0 && d < top);
+    depths.push(top);
+    grid = withGapsFilled(depths, top * WIDEST_TABULATED_GAP);
     breakpointGrids.set(section, grid);
   }
   return grid;
+}
+
+/** The values of two ascending lists, ascending, each once. Why not a sort: both lists come ascending from the table. */
+function mergedAscending(a: readonly number[], b: readonly number[]): number[] {
+  const merged: number[] = [];
+  let i = 0;
+  let j = 0;
+  while (i < a.length || j < b.length) {
+    const next = j >= b.length || (i < a.length && a[i] <= b[j]) ? a[i++] : b[j++];
+    if (merged.length === 0 || next !== merged[merged.length - 1]) merged.push(next);
+  }
+  return merged;
 }
 
 function withGapsFilled(depths: readonly Metres[], widestGap: Metres): Metres[] {
@@ -68,14 +81,6 @@ function withGapsFilled(depths: readonly Metres[], widestGap: Metres): Metres[] 
 }
 
 const breakpointGrids = new WeakMap<FlowSection, readonly Metres[]>();
-
-function sortedDistinct(depths: Metres[]): Metres[] {
-  // A typed array sorts numbers without a comparator call per comparison; equal neighbours are then dropped.
-  const sorted = Float64Array.from(depths).sort();
-  const distinct: Metres[] = [];
-  for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) distinct.push(sorted[i]);
-  return distinct;
-}
 
 function depthGrid(section: FlowSection, from: Metres, to: Metres): Metres[] {
   const span = to - from;

@@ -53,22 +53,14 @@ function balanceResidual(down: ReachStation, downDepth: Metres, up: ReachStation
   };
 }
 
-/** Critical depth per section and discharge, remembered: the stations of a prismatic reach share one section. */
-const criticalDepths = new WeakMap<FlowSection, Map<CubicMetresPerSecond, Metres | null>>();
-
-/** Null when critical depth lies above the top of the section. */
+/** Null when critical depth lies above the top of the section (criticalDepth remembers it per section and discharge). */
 function criticalDepthOf(section: FlowSection, discharge: CubicMetresPerSecond): Metres | null {
-  let known = criticalDepths.get(section);
-  if (known === undefined) criticalDepths.set(section, (known = new Map()));
-  if (!known.has(discharge)) {
-    try {
-      known.set(discharge, criticalDepth(section, discharge));
-    } catch (error) {
-      if (!(error instanceof EngineError && error.code === 'section-overtopped')) throw error;
-      known.set(discharge, null);
-    }
+  try {
+    return criticalDepth(section, discharge);
+  } catch (error) {
+    if (error instanceof EngineError && error.code === 'section-overtopped') return null;
+    throw error;
   }
-  return known.get(discharge) ?? null;
 }
 
 /**

@@ -1,10 +1,10 @@
 // A reach as a list of cross-sections by distance upstream of the control, filled in where too far apart.
 import { InvalidInputError, requireFinite, requirePositive } from '../errors';
 import type { FlowSection } from '../section';
-import { surveyedSection } from '../surveyed-section';
+import { sectionOfGround, surveyedSection } from '../surveyed-section';
 import type { SurveyedSectionSpec } from '../surveyed-spec';
 import type { Metres, Slope } from '../units';
-import { interpolatedSurvey } from './survey-interpolation';
+import { interpolatedGround, interpolatedSurvey } from './survey-interpolation';
 
 export interface ReachStation {
   distanceUpstream: Metres;
@@ -63,9 +63,19 @@ export function stationBetween(a: ReachStation, b: ReachStation, weight: number)
   const bankLevel = a.bankLevel !== undefined && b.bankLevel !== undefined ? a.bankLevel + weight * (b.bankLevel - a.bankLevel) : undefined;
   if (a.section === b.section) return { distanceUpstream, section: a.section, bedLevel: a.bedLevel + weight * (b.bedLevel - a.bedLevel), bankLevel };
   if (a.survey === undefined || b.survey === undefined) throw new InvalidInputError('reach.sections', 'differing sections need surveys to be interpolated');
-  const survey = interpolatedSurvey(a.survey, b.survey, weight);
-  const section = surveyedSection(survey, { field: 'reach.sections' });
-  return { distanceUpstream, section, bedLevel: section.invertLevel, bankLevel, survey };
+  const [from, to] = [a.survey, b.survey];
+  const section = sectionOfGround(interpolatedGround(from, to, weight));
+  // The survey is written out only if a station is interpolated from this one in turn (a step halved near critical depth).
+  let survey: SurveyedSectionSpec | undefined;
+  return {
+    distanceUpstream,
+    section,
+    bedLevel: section.invertLevel,
+    bankLevel,
+    get survey() {
+      return (survey ??= interpolatedSurvey(from, to, weight));
+    },
+  };
 }
 
 /**

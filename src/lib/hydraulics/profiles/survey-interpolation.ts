@@ -1,5 +1,6 @@
 // A cross-section between two surveyed ones, by linear interpolation of the ground itself.
-import type { SurveyedSectionSpec } from '../surveyed-spec';
+import { type SurveyedGround, withBankPoints } from '../surveyed-ground';
+import { type SurveyedSectionSpec, requireHoldsWater } from '../surveyed-spec';
 import type { Metres } from '../units';
 import { type LaidOutSurvey, laidOut, stationAt } from './survey-layout';
 
@@ -85,23 +86,42 @@ function rememberedPair(from: SurveyedSectionSpec, to: SurveyedSectionSpec, fiel
 }
 
 /**
- * The section a fraction `weight` of the way from `from` (0) to `to` (1). Each sub-area (left overbank, channel,
+ * The ground a fraction `weight` of the way from `from` (0) to `to` (1). Each sub-area (left overbank, channel,
  * right overbank) is matched to its counterpart by relative position across it, and at every breakpoint of
  * either survey the stations, ground levels, bank stations and Manning's n are blended linearly (common
  * practice for filling in sections between surveyed ones). Vertical walls are blended point by point.
+ * Blending two checked surveys keeps stations in order, a width and the bank stations inside it; it may lose the
+ * low point between the ends (a channel moving across the valley under a higher bank), which is checked here.
  */
-export function interpolatedSurvey(from: SurveyedSectionSpec, to: SurveyedSectionSpec, weight: number, field = 'reach.sections'): SurveyedSectionSpec {
+export function interpolatedGround(from: SurveyedSectionSpec, to: SurveyedSectionSpec, weight: number, field = 'reach.sections'): SurveyedGround {
   const pair = rememberedPair(from, to, field);
   const { from: a, to: b } = pair;
-  const points: [Metres, Metres][] = new Array(pair.stationsFrom.length);
-  for (let i = 0; i < points.length; i++) {
-    points[i] = [mix(pair.stationsFrom[i], pair.stationsTo[i], weight), mix(pair.levelsFrom[i], pair.levelsTo[i], weight)];
+  const count = pair.stationsFrom.length;
+  const stations: Metres[] = new Array(count);
+  const elevations: Metres[] = new Array(count);
+  for (let i = 0; i < count; i++) {
+    stations[i] = mix(pair.stationsFrom[i], pair.stationsTo[i], weight);
+    elevations[i] = mix(pair.levelsFrom[i], pair.levelsTo[i], weight);
   }
-  const manningN = {
+  requireHoldsWater(elevations, `${field}.points`);
+  const roughness = {
     left: mix(a.roughness.left, b.roughness.left, weight),
     channel: mix(a.roughness.channel, b.roughness.channel, weight),
     right: mix(a.roughness.right, b.roughness.right, weight),
   };
-  const bankStations: [Metres, Metres] = [mix(stationAt(a, 1), stationAt(b, 1), weight), mix(stationAt(a, 2), stationAt(b, 2), weight)];
-  return { points, manningN, bankStations };
+  const banks = { left: mix(stationAt(a, 1), stationAt(b, 1), weight), right: mix(stationAt(a, 2), stationAt(b, 2), weight) };
+  return withBankPoints({ stations, elevations, roughness, banks });
+}
+
+/** The interpolated ground of interpolatedGround as a survey, to be interpolated from in turn. */
+export function surveyOfGround(ground: SurveyedGround): SurveyedSectionSpec {
+  return {
+    points: ground.stations.map((station, i) => [station, ground.elevations[i]]),
+    manningN: { ...ground.roughness },
+    bankStations: [ground.banks.left, ground.banks.right],
+  };
+}
+
+export function interpolatedSurvey(from: SurveyedSectionSpec, to: SurveyedSectionSpec, weight: number, field = 'reach.sections'): SurveyedSectionSpec {
+  return surveyOfGround(interpolatedGround(from, to, weight, field));
 }
