@@ -44,43 +44,36 @@ const WIDEST_TABULATED_GAP = 1 / 32;
  * straight stretch of ground), which cancel, as two roots within one step of the former 400-step scan did. Why:
  * that scan cost some 450 evaluations per section; a survey has a few dozen breakpoints.
  */
-export function breakpointDepthGrid(section: FlowSection & { breakpointDepths: readonly Metres[]; jumpDepths?: readonly Metres[] }): readonly Metres[] {
-  let grid = breakpointGrids.get(section);
-  if (grid === undefined) {
-    const top = section.maxDepth;
-    const nudge = top * SHALLOWEST_FRACTION;
-    const nudged = (section.jumpDepths ?? section.breakpointDepths).map((d) => Math.min(top, d + nudge));
-    const depths = mergedAscending(mergedAscending([nudge], section.breakpointDepths), nudged).filter((d) => d > 0 && d < top);
-    depths.push(top);
-    grid = withGapsFilled(depths, top * WIDEST_TABULATED_GAP);
-    breakpointGrids.set(section, grid);
+export function breakpointDepthGrid(section: FlowSection & { breakpointDepths: readonly Metres[]; jumpDepths?: readonly Metres[] }): Metres[] {
+  const top = section.maxDepth;
+  const nudge = top * SHALLOWEST_FRACTION;
+  const widestGap = top * WIDEST_TABULATED_GAP;
+  const breakpoints = section.breakpointDepths;
+  const jumps = section.jumpDepths ?? breakpoints;
+  const grid: Metres[] = [];
+  const add = (depth: Metres) => {
+    if (grid.length === 0) return void grid.push(depth);
+    const last = grid[grid.length - 1];
+    if (!(depth > last)) return;
+    const pieces = Math.ceil((depth - last) / widestGap);
+    for (let k = 1; k < pieces; k++) grid.push(last + ((depth - last) * k) / pieces);
+    grid.push(depth);
+  };
+  // One ascending walk through three ascending sources: the shallowest depth, the breakpoints, just above the jumps.
+  let nudgeTaken = false;
+  for (let i = 0, j = 0; !nudgeTaken || i < breakpoints.length || j < jumps.length; ) {
+    const fromNudge = nudgeTaken ? Infinity : nudge;
+    const fromBreakpoints = i < breakpoints.length ? breakpoints[i] : Infinity;
+    const fromJumps = j < jumps.length ? Math.min(top, jumps[j] + nudge) : Infinity;
+    const next = Math.min(fromNudge, fromBreakpoints, fromJumps);
+    if (next === fromNudge) nudgeTaken = true;
+    else if (next === fromBreakpoints) i++;
+    else j++;
+    if (next > 0 && next < top) add(next);
   }
+  add(top);
   return grid;
 }
-
-/** The values of two ascending lists, ascending, each once. Why not a sort: both lists come ascending from the table. */
-function mergedAscending(a: readonly number[], b: readonly number[]): number[] {
-  const merged: number[] = [];
-  let i = 0;
-  let j = 0;
-  while (i < a.length || j < b.length) {
-    const next = j >= b.length || (i < a.length && a[i] <= b[j]) ? a[i++] : b[j++];
-    if (merged.length === 0 || next !== merged[merged.length - 1]) merged.push(next);
-  }
-  return merged;
-}
-
-function withGapsFilled(depths: readonly Metres[], widestGap: Metres): Metres[] {
-  const filled: Metres[] = [depths[0]];
-  for (let i = 1; i < depths.length; i++) {
-    const pieces = Math.ceil((depths[i] - depths[i - 1]) / widestGap);
-    for (let k = 1; k < pieces; k++) filled.push(depths[i - 1] + ((depths[i] - depths[i - 1]) * k) / pieces);
-    filled.push(depths[i]);
-  }
-  return filled;
-}
-
-const breakpointGrids = new WeakMap<FlowSection, readonly Metres[]>();
 
 function depthGrid(section: FlowSection, from: Metres, to: Metres): Metres[] {
   const span = to - from;

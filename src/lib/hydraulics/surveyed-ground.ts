@@ -8,6 +8,8 @@ export interface SurveyedGround {
   elevations: Metres[];
   roughness: ValidatedSurvey['roughness'];
   banks: ValidatedSurvey['banks'];
+  /** The point indices by elevation as a neighbouring section had them, if known (see ground-levels.ts). */
+  order?: number[];
 }
 
 /** Inserts a point at `station` on the line between its neighbours unless the ground has one there (a bank station must be a vertex). */

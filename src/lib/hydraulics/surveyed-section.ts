@@ -71,7 +71,7 @@ export function sectionOfGround(ground: SurveyedGround): SurveyedSection {
   for (let i = 1; i < elevations.length; i++) invertLevel = Math.min(invertLevel, elevations[i]);
   const lowerEndLevel = Math.min(elevations[0], elevations[elevations.length - 1]);
   const maxDepth = lowerEndLevel - invertLevel;
-  const table = new SurveyTable({ stations: ground.stations, elevations, segmentSubAreas: segmentSubAreas(ground) });
+  const table = new SurveyTable({ stations: ground.stations, elevations, segmentSubAreas: segmentSubAreas(ground), order: ground.order });
   const breakpointDepths = depthsOfLevels(table.levels, invertLevel, maxDepth);
   const jumpDepths = depthsOfLevels(table.jumpLevels, invertLevel, maxDepth);
   const roughness = SUB_AREAS.map((subArea) => ground.roughness[subArea]);

@@ -1,7 +1,7 @@
 // A surveyed section's wetted geometry tabulated once against the water level, exactly, for every sub-area.
+import { groundLevels } from './ground-levels';
 import { allocatedNumbers } from './number-arena';
 import { scratchNumbers } from './scratch-numbers';
-import { sortedDistinct } from './sorted-distinct';
 import type { Metres } from './units';
 
 /** Wetted area, perimeter, top width and first moment of one sub-area at one level (the same four as WettedPiece). */
@@ -20,6 +20,8 @@ export interface SurveyGround {
   stations: ArrayLike<Metres>;
   elevations: ArrayLike<Metres>;
   segmentSubAreas: ArrayLike<number>;
+  /** The point indices by elevation as a neighbouring section had them, sorted here in place (see ground-levels.ts). */
+  order?: number[];
 }
 
 const SUB_AREA_COUNT = 3;
@@ -49,7 +51,7 @@ export class SurveyTable {
 
   constructor(ground: SurveyGround) {
     const { stations: x, elevations: z, segmentSubAreas } = ground;
-    const levels = sortedDistinct(z);
+    const { levels, pointLevels } = groundLevels(z, ground.order);
     this.levels = levels;
     const count = levels.length;
     const { numbers, offset } = allocatedNumbers(6 * SUB_AREA_COUNT * count);
@@ -63,9 +65,8 @@ export class SurveyTable {
       if (j < 0) continue;
       const z1 = z[i - 1];
       const z2 = z[i];
-      // The index of a ground elevation in levels: one past the interval below it.
-      const low = 4 * (SUB_AREA_COUNT * (this.interval(z1 <= z2 ? z1 : z2) + 1) + j);
-      const high = 4 * (SUB_AREA_COUNT * (this.interval(z1 <= z2 ? z2 : z1) + 1) + j);
+      const low = 4 * (SUB_AREA_COUNT * Math.min(pointLevels[i - 1], pointLevels[i]) + j);
+      const high = 4 * (SUB_AREA_COUNT * Math.max(pointLevels[i - 1], pointLevels[i]) + j);
       const width = Math.abs(x[i] - x[i - 1]);
       const rise = Math.abs(z2 - z1);
       // Not Math.hypot: ground in metres cannot overflow a square, and hypot costs twenty times as much per segment.

@@ -2,8 +2,8 @@
 import { criticalDepth } from '../critical-depth';
 import { DEEPEST_OPEN_DEPTH } from '../depth-brackets';
 import { EngineError } from '../errors';
-import type { FlowSection, SectionState } from '../section';
-import { emptySample, sampleSection } from '../section-sample';
+import type { FlowSection } from '../section';
+import { type SectionSample, emptySample, sampleSection } from '../section-sample';
 import { requireDepth } from '../section-state';
 import { brentRoot, expandBracketUpward } from '../solvers';
 import type { CubicMetresPerSecond, Metres } from '../units';
@@ -24,7 +24,7 @@ export type BalanceResult =
   | { kind: 'section-overtopped' };
 
 /** αV²/2g with V = Q/A (Chow, Open-Channel Hydraulics, 1959, §2-7 — from memory). */
-function velocityHead(state: Pick<SectionState, 'energyCoefficient' | 'area'>, discharge: CubicMetresPerSecond): Metres {
+function velocityHead(state: Pick<SectionSample, 'energyCoefficient' | 'area'>, discharge: CubicMetresPerSecond): Metres {
   return (state.energyCoefficient * discharge * discharge) / (2 * GRAVITY * state.area * state.area);
 }
 
@@ -37,7 +37,8 @@ function velocityHead(state: Pick<SectionState, 'energyCoefficient' | 'area'>, d
  */
 function balanceResidual(down: ReachStation, downDepth: Metres, up: ReachStation, settings: BalanceSettings): (depth: Metres) => number {
   const { discharge } = settings;
-  const downState = down.section.stateAtDepth(downDepth);
+  requireDepth(downDepth);
+  const downState = sampleSection(down.section, downDepth, emptySample());
   const downHead = velocityHead(downState, discharge);
   const downEnergy = down.bedLevel + downDepth + downHead;
   const length = up.distanceUpstream - down.distanceUpstream;

@@ -51,13 +51,15 @@ interface MatchedPair {
   levelsTo: number[];
   from: LaidOutSurvey;
   to: LaidOutSurvey;
+  /** The blended points by elevation at the weight last blended (see ground-levels.ts). */
+  order: number[];
 }
 
 function matchedPair(a: LaidOutSurvey, b: LaidOutSurvey): MatchedPair {
   const positions = mergedPositions(a, b);
   const elevationsA = elevationsAlong(a, positions);
   const elevationsB = elevationsAlong(b, positions);
-  const pair: MatchedPair = { stationsFrom: [], stationsTo: [], levelsFrom: [], levelsTo: [], from: a, to: b };
+  const pair: MatchedPair = { stationsFrom: [], stationsTo: [], levelsFrom: [], levelsTo: [], from: a, to: b, order: [] };
   for (let p = 0; p < positions.length; p++) {
     const stationA = stationAt(a, positions[p]);
     const stationB = stationAt(b, positions[p]);
@@ -71,6 +73,7 @@ function matchedPair(a: LaidOutSurvey, b: LaidOutSurvey): MatchedPair {
       pair.levelsTo.push(levelsB[Math.min(k, levelsB.length - 1)]);
     }
   }
+  pair.order = pair.levelsFrom.map((_, i) => i);
   return pair;
 }
 
@@ -110,7 +113,7 @@ export function interpolatedGround(from: SurveyedSectionSpec, to: SurveyedSectio
     right: mix(a.roughness.right, b.roughness.right, weight),
   };
   const banks = { left: mix(stationAt(a, 1), stationAt(b, 1), weight), right: mix(stationAt(a, 2), stationAt(b, 2), weight) };
-  return withBankPoints({ stations, elevations, roughness, banks });
+  return withBankPoints({ stations, elevations, roughness, banks, order: pair.order });
 }
 
 /** The interpolated ground of interpolatedGround as a survey, to be interpolated from in turn. */
