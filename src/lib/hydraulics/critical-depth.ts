@@ -6,6 +6,7 @@ import { type Bracket, type SignProof, provenSignChangeBrackets, rootInBracket, 
 import type { FlowSection } from './section';
 import { type FroudeFactorBounds, emptySample, sampleSection } from './section-sample';
 import { requireDepth } from './section-state';
+import { rememberingRecent } from './solvers';
 import type { CubicMetresPerSecond, Metres } from './units';
 import { GRAVITY } from './units';
 
@@ -121,7 +122,7 @@ function knownCritical(section: FlowSection, discharge: CubicMetresPerSecond, op
     const isRoot = (y: Metres) => isCriticalRoot(section, y, discharge, false);
     const grid = hasBreakpoints(section) ? breakpointDepthGrid(section) : undefined;
     const proof = criticalResidualProof(section, discharge);
-    known.push((entry = { discharge, roots: residualRoots(section, criticalResidual(section, discharge), isRoot, dischargeField, grid, proof) }));
+    known.push((entry = { discharge, roots: residualRoots(section, rememberingRecent(criticalResidual(section, discharge)), isRoot, dischargeField, grid, proof) }));
   }
   if (entry.roots.length === 0) {
     throw new NoPhysicalSolutionError(

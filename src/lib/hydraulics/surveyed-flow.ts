@@ -59,13 +59,20 @@ export function flowAtLevel(table: SurveyTable, roughness: readonly number[], le
 const lower: PieceValues = { area: 0, wettedPerimeter: 0, topWidth: 0, firstMoment: 0 };
 const upper: PieceValues = { area: 0, wettedPerimeter: 0, topWidth: 0, firstMoment: 0 };
 
+/** (A + T·rise)³/T: A grows by at most T per metre of rise, T never falling, so this bounds A³/T at that T. */
+function cubedAreaOverWidth(area: number, topWidth: number, rise: Metres): number {
+  const most = area + topWidth * rise;
+  return (most * most * most) / topWidth;
+}
+
 /**
  * Bounds on αT/A³ holding at every level in [from, to]. Every piece of ground is wet over a length and a width that
  * never shrink as the water rises (surveyed-table.ts), so each sub-area's A, P and T at `from` and at `to` bound them
  * in between. With vᵢ = Rᵢ^(2/3)/nᵢ, dividedEnergyCoefficient's α is the greater of 1 and (Σ Aᵢvᵢ³)·A²/K³, so
  * αT/A³ ≤ T(to)·max(1/A(from)³, (Σ Aᵢ(to)Rᵢ,most²/nᵢ³)/(A(from)·K_least³)), where Rᵢ,most is the lesser of
  * Aᵢ(to)/Pᵢ(from) and the depth (Aᵢ ≤ Tᵢ·depth ≤ Pᵢ·depth) and K_least = Σ Aᵢ(from)(Aᵢ(from)/Pᵢ(to))^(2/3)/nᵢ;
- * and αT/A³ ≥ T(from)/A(to)³.
+ * and, α being at least 1, αT/A³ ≥ T(from)/A(to)³, and ≥ T/(A(from) + T·(to − from))³ (as A ≤ A(from) + T·rise), whose
+ * least over T between T(from) and T(to) is at one of the two (it falls and then rises with T).
  */
 export function froudeFactorBoundsBetween(table: SurveyTable, roughness: readonly number[], invertLevel: Metres, from: Metres, to: Metres, out: FroudeFactorBounds): FroudeFactorBounds {
   const kFrom = table.interval(from);
@@ -89,6 +96,6 @@ export function froudeFactorBoundsBetween(table: SurveyTable, roughness: readonl
   const withoutAlpha = mostTopWidth / (leastArea * leastArea * leastArea);
   const withAlpha = (mostTopWidth * mostCubedVelocityArea) / (leastArea * leastConveyance * leastConveyance * leastConveyance);
   out.most = leastArea > 0 && leastConveyance > 0 ? Math.max(withoutAlpha, withAlpha) : Infinity;
-  out.least = mostArea > 0 ? leastTopWidth / (mostArea * mostArea * mostArea) : 0;
+  out.least = Math.max(leastTopWidth / (mostArea * mostArea * mostArea), 1 / Math.max(cubedAreaOverWidth(leastArea, leastTopWidth, to - from), cubedAreaOverWidth(leastArea, mostTopWidth, to - from))) || 0;
   return out;
 }

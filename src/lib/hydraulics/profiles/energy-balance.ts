@@ -5,7 +5,7 @@ import { EngineError } from '../errors';
 import type { FlowSection } from '../section';
 import { type SectionSample, emptySample, sampleSection } from '../section-sample';
 import { requireDepth } from '../section-state';
-import { brentRoot, expandBracketUpward } from '../solvers';
+import { brentRoot, expandBracketUpward, rememberingRecent } from '../solvers';
 import type { CubicMetresPerSecond, Metres } from '../units';
 import { GRAVITY } from '../units';
 import { type FrictionAveraging, meanFrictionSlope } from './friction-averaging';
@@ -72,7 +72,7 @@ function criticalDepthOf(section: FlowSection, discharge: CubicMetresPerSecond):
 export function upstreamDepth(down: ReachStation, downDepth: Metres, up: ReachStation, settings: BalanceSettings): BalanceResult {
   const critical = criticalDepthOf(up.section, settings.discharge);
   if (critical === null) return { kind: 'section-overtopped' };
-  const residual = balanceResidual(down, downDepth, up, settings);
+  const residual = rememberingRecent(balanceResidual(down, downDepth, up, settings));
   if (residual(critical) >= 0) return { kind: 'critical-depth', criticalDepth: critical };
   const top = Number.isFinite(up.section.maxDepth) ? up.section.maxDepth : DEEPEST_OPEN_DEPTH;
   const guess = Math.min(Math.max(down.bedLevel + downDepth - up.bedLevel, critical) + Math.max(critical, 0.1), top);
