@@ -45,10 +45,10 @@ function segmentSubAreas(ground: SurveyedGround): number[] {
 }
 
 /** Distinct depths in (0, maxDepth] of the table's levels, ascending (the levels are every ground elevation, ascending). */
-function depthsOfLevels(levels: readonly Metres[], invertLevel: Metres, maxDepth: Metres): Metres[] {
+function depthsOfLevels(levels: ArrayLike<Metres>, invertLevel: Metres, maxDepth: Metres): Metres[] {
   const depths: Metres[] = [];
-  for (const level of levels) {
-    const depth = level - invertLevel;
+  for (let k = 0; k < levels.length; k++) {
+    const depth = levels[k] - invertLevel;
     if (depth > 0 && depth <= maxDepth && depth !== depths[depths.length - 1]) depths.push(depth);
   }
   return depths;
@@ -72,7 +72,6 @@ export function sectionOfGround(ground: SurveyedGround): SurveyedSection {
   const lowerEndLevel = Math.min(elevations[0], elevations[elevations.length - 1]);
   const maxDepth = lowerEndLevel - invertLevel;
   const table = new SurveyTable({ stations: ground.stations, elevations, segmentSubAreas: segmentSubAreas(ground), order: ground.order });
-  const breakpointDepths = depthsOfLevels(table.levels, invertLevel, maxDepth);
   const jumpDepths = depthsOfLevels(table.jumpLevels, invertLevel, maxDepth);
   const roughness = SUB_AREAS.map((subArea) => ground.roughness[subArea]);
 
@@ -89,7 +88,10 @@ export function sectionOfGround(ground: SurveyedGround): SurveyedSection {
     maxDepth,
     lowerEndLevel,
     bankLevels: { left: highestGroundAt(ground, ground.banks.left), right: highestGroundAt(ground, ground.banks.right) },
-    breakpointDepths,
+    // Worked out when asked for (a scan for critical depth), not kept: a refined reach holds some 1,600 sections.
+    get breakpointDepths() {
+      return depthsOfLevels(table.levels, invertLevel, maxDepth);
+    },
     jumpDepths,
     stateAtLevel,
     stateAtDepth(depth: Metres): SectionState {

@@ -37,7 +37,7 @@ const SUB_AREA_COUNT = 3;
  */
 export class SurveyTable {
   /** Distinct ground elevations, ascending. */
-  readonly levels: number[];
+  readonly levels: Float64Array;
   /** The levels just above which the top width or the wetted perimeter jumps (flat ground starts to flood), ascending. */
   readonly jumpLevels: number[] = [];
   /**
@@ -51,12 +51,16 @@ export class SurveyTable {
 
   constructor(ground: SurveyGround) {
     const { stations: x, elevations: z, segmentSubAreas } = ground;
-    const { levels, pointLevels } = groundLevels(z, ground.order);
+    const found = groundLevels(z, ground.order);
+    const { pointLevels } = found;
+    const count = found.levels.length;
+    // The levels and the values side by side in one run of numbers kept with the section (see number-arena.ts).
+    const { numbers, offset } = allocatedNumbers((1 + 6 * SUB_AREA_COUNT) * count);
+    const levels = numbers.subarray(offset, offset + count);
+    levels.set(found.levels);
     this.levels = levels;
-    const count = levels.length;
-    const { numbers, offset } = allocatedNumbers(6 * SUB_AREA_COUNT * count);
     this.values = numbers;
-    this.base = offset;
+    this.base = offset + count;
     // Per level and sub-area, from index 4(3k + j): jumps in top width and perimeter, then changes in their rates.
     const changes = scratchNumbers(4 * SUB_AREA_COUNT * count);
     const negligibleRise = 1e-13 * Math.max(levels[count - 1] - levels[0], Math.abs(levels[0]), Math.abs(levels[count - 1]), Number.MIN_VALUE);
