@@ -88,10 +88,7 @@ export function sectionOfGround(ground: SurveyedGround): SurveyedSection {
     maxDepth,
     lowerEndLevel,
     bankLevels: { left: highestGroundAt(ground, ground.banks.left), right: highestGroundAt(ground, ground.banks.right) },
-    // Worked out when asked for (a scan for critical depth), not kept: a refined reach holds some 1,600 sections.
-    get breakpointDepths() {
-      return depthsOfLevels(table.levels, invertLevel, maxDepth);
-    },
+    breakpointDepths: depthsOfLevels(table.levels, invertLevel, maxDepth),
     jumpDepths,
     stateAtLevel,
     stateAtDepth(depth: Metres): SectionState {
