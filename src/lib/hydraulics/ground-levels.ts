@@ -1,10 +1,11 @@
 // The distinct ground elevations of a section, ascending, and where among them each point's elevation stands.
+import { SCRATCH_SLOTS, scratchNumbers } from './scratch-numbers';
 import { sortedDistinct } from './sorted-distinct';
 
 export interface GroundLevels {
   levels: number[];
-  /** Per point, the index of its elevation in levels. */
-  pointLevels: number[];
+  /** Per point, the index of its elevation in levels (working space, valid until the next call). */
+  pointLevels: Float64Array;
 }
 
 /** Shifts per point an insertion sort may make before the order it was given is taken as no help. */
@@ -20,7 +21,7 @@ export function groundLevels(elevations: ArrayLike<number>, order?: number[]): G
   const usable = order !== undefined && order.length === elevations.length;
   if (usable && sortedByElevation(order, elevations)) return levelsAlong(order, elevations);
   const levels = sortedDistinct(elevations);
-  const pointLevels = new Array<number>(elevations.length);
+  const pointLevels = scratchNumbers(elevations.length, SCRATCH_SLOTS.pointLevels);
   for (let i = 0; i < elevations.length; i++) pointLevels[i] = indexOf(levels, elevations[i]);
   if (usable) orderByLevel(order, pointLevels, levels.length);
   return { levels, pointLevels };
@@ -47,7 +48,7 @@ function sortedByElevation(order: number[], elevations: ArrayLike<number>): bool
 
 function levelsAlong(order: readonly number[], elevations: ArrayLike<number>): GroundLevels {
   const levels: number[] = [];
-  const pointLevels = new Array<number>(order.length);
+  const pointLevels = scratchNumbers(order.length, SCRATCH_SLOTS.pointLevels);
   for (const point of order) {
     const elevation = elevations[point];
     if (levels.length === 0 || elevation !== levels[levels.length - 1]) levels.push(elevation);
@@ -69,7 +70,7 @@ function indexOf(levels: readonly number[], value: number): number {
 }
 
 /** Rewrites `order` as the points by level (a counting sort), for the next section to start from. */
-function orderByLevel(order: number[], pointLevels: readonly number[], levelCount: number): void {
+function orderByLevel(order: number[], pointLevels: Float64Array, levelCount: number): void {
   const starts = new Array<number>(levelCount + 1).fill(0);
   for (const level of pointLevels) starts[level + 1]++;
   for (let k = 1; k <= levelCount; k++) starts[k] += starts[k - 1];

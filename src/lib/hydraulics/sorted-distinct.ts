@@ -1,9 +1,9 @@
-import { scratchNumbers } from './scratch-numbers';
+import { SCRATCH_SLOTS, scratchNumbers } from './scratch-numbers';
 
 /** The distinct values of `values`, ascending. */
 export function sortedDistinct(values: ArrayLike<number>): number[] {
   // A typed array sorts numbers without a comparator call per comparison; equal neighbours are then dropped.
-  const sorted = scratchNumbers(values.length);
+  const sorted = scratchNumbers(values.length, SCRATCH_SLOTS.sorting);
   for (let i = 0; i < values.length; i++) sorted[i] = values[i];
   sorted.sort();
   const distinct: number[] = [];

@@ -1,5 +1,6 @@
 // A surveyed (station–elevation) cross-section as a FlowSection, with left overbank / channel / right overbank.
 import { InvalidInputError, requireFinite } from './errors';
+import { SCRATCH_SLOTS, scratchNumbers } from './scratch-numbers';
 import type { FlowSection, SectionState } from './section';
 import type { FroudeFactorBounds, SectionSample } from './section-sample';
 import { requireDepth, sectionState } from './section-state';
@@ -34,9 +35,11 @@ function highestGroundAt(ground: SurveyedGround, station: Metres): Metres {
 }
 
 /** Per point i ≥ 1, the sub-area of the segment ending there: 0, 1 or 2 for left overbank, channel, right overbank. */
-function segmentSubAreas(ground: SurveyedGround): number[] {
+function segmentSubAreas(ground: SurveyedGround): Float64Array {
   const { stations, banks } = ground;
-  const subAreas = new Array<number>(stations.length).fill(-1);
+  // Working space: the table reads it once, while it is built.
+  const subAreas = scratchNumbers(stations.length, SCRATCH_SLOTS.segmentSubAreas);
+  subAreas[0] = -1;
   for (let i = 1; i < stations.length; i++) {
     const middle = (stations[i - 1] + stations[i]) / 2;
     subAreas[i] = middle < banks.left ? 0 : middle > banks.right ? 2 : 1;

@@ -1,7 +1,7 @@
 // A surveyed section's wetted geometry tabulated once against the water level, exactly, for every sub-area.
 import { groundLevels } from './ground-levels';
 import { allocatedNumbers } from './number-arena';
-import { scratchNumbers } from './scratch-numbers';
+import { SCRATCH_SLOTS, scratchNumbers } from './scratch-numbers';
 import type { Metres } from './units';
 
 /** Wetted area, perimeter, top width and first moment of one sub-area at one level (the same four as WettedPiece). */
@@ -62,7 +62,7 @@ export class SurveyTable {
     this.values = numbers;
     this.base = offset + count;
     // Per level and sub-area, from index 4(3k + j): jumps in top width and perimeter, then changes in their rates.
-    const changes = scratchNumbers(4 * SUB_AREA_COUNT * count);
+    const changes = scratchNumbers(4 * SUB_AREA_COUNT * count, SCRATCH_SLOTS.changes);
     const negligibleRise = 1e-13 * Math.max(levels[count - 1] - levels[0], Math.abs(levels[0]), Math.abs(levels[count - 1]), Number.MIN_VALUE);
     for (let i = 1; i < z.length; i++) {
       const j = segmentSubAreas[i];

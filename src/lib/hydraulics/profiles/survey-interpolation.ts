@@ -7,27 +7,29 @@ import { type LaidOutSurvey, laidOut, stationAt } from './survey-layout';
 /**
  * Ground elevations at each of the ascending positions `at`, top to bottom as surveyed: several where a vertical wall
  * stands there, interpolated between the survey's points elsewhere, its end levels beyond its ends. One walk along
- * the survey, as both lists ascend.
+ * the survey, as both lists ascend. Position p's elevations are levels[starts[p]] to levels[starts[p + 1] − 1]: one
+ * list for all, as a pair of surveys is matched once per reach and a list per position was most of that work's garbage.
  */
-function elevationsAlong(survey: LaidOutSurvey, at: readonly number[]): Metres[][] {
+function elevationsAlong(survey: LaidOutSurvey, at: readonly number[]): { levels: Metres[]; starts: number[] } {
   const { points, positions } = survey;
   const last = points.length - 1;
-  const result: Metres[][] = [];
+  const levels: Metres[] = [];
+  const starts: number[] = [];
   let i = 0;
   for (const u of at) {
+    starts.push(levels.length);
     while (i <= last && positions[i] < u) i++;
     if (i <= last && positions[i] === u) {
-      const exact: Metres[] = [];
-      for (let j = i; j <= last && positions[j] === u; j++) exact.push(points[j].elevation);
-      result.push(exact);
-    } else if (i > last) result.push([points[last].elevation]);
-    else if (i === 0) result.push([points[0].elevation]);
+      for (let j = i; j <= last && positions[j] === u; j++) levels.push(points[j].elevation);
+    } else if (i > last) levels.push(points[last].elevation);
+    else if (i === 0) levels.push(points[0].elevation);
     else {
       const t = (u - positions[i - 1]) / (positions[i] - positions[i - 1]);
-      result.push([points[i - 1].elevation + t * (points[i].elevation - points[i - 1].elevation)]);
+      levels.push(points[i - 1].elevation + t * (points[i].elevation - points[i - 1].elevation));
     }
   }
-  return result;
+  starts.push(levels.length);
+  return { levels, starts };
 }
 
 /** The positions of both surveys, ascending, each once. */
@@ -63,14 +65,13 @@ function matchedPair(a: LaidOutSurvey, b: LaidOutSurvey): MatchedPair {
   for (let p = 0; p < positions.length; p++) {
     const stationA = stationAt(a, positions[p]);
     const stationB = stationAt(b, positions[p]);
-    const levelsA = elevationsA[p];
-    const levelsB = elevationsB[p];
-    const count = Math.max(levelsA.length, levelsB.length);
-    for (let k = 0; k < count; k++) {
+    const [startA, countA] = [elevationsA.starts[p], elevationsA.starts[p + 1] - elevationsA.starts[p]];
+    const [startB, countB] = [elevationsB.starts[p], elevationsB.starts[p + 1] - elevationsB.starts[p]];
+    for (let k = 0; k < Math.max(countA, countB); k++) {
       pair.stationsFrom.push(stationA);
       pair.stationsTo.push(stationB);
-      pair.levelsFrom.push(levelsA[Math.min(k, levelsA.length - 1)]);
-      pair.levelsTo.push(levelsB[Math.min(k, levelsB.length - 1)]);
+      pair.levelsFrom.push(elevationsA.levels[startA + Math.min(k, countA - 1)]);
+      pair.levelsTo.push(elevationsB.levels[startB + Math.min(k, countB - 1)]);
     }
   }
   pair.order = pair.levelsFrom.map((_, i) => i);
