@@ -2,10 +2,11 @@
 import { DEEPEST_OPEN_DEPTH, breakpointDepthGrid, downwardBracket, finiteDepthGrid, hasBreakpoints, openDepthBracket } from './depth-brackets';
 import { NoPhysicalSolutionError, requirePositive } from './errors';
 import { specificEnergy } from './flow-properties';
-import { type Bracket, rootInBracket, signChangeBrackets } from './root-scan';
+import { type Bracket, type SignProof, provenSignChangeBrackets, rootInBracket, signChangeBrackets } from './root-scan';
 import type { FlowSection } from './section';
-import { emptySample, sampleSection } from './section-sample';
+import { type FroudeFactorBounds, emptySample, sampleSection } from './section-sample';
 import { requireDepth } from './section-state';
+import { rememberingRecent } from './solvers';
 import type { CubicMetresPerSecond, Metres } from './units';
 import { GRAVITY } from './units';
 
@@ -53,55 +54,97 @@ export function criticalResidual(section: FlowSection, discharge: CubicMetresPer
   };
 }
 
-function finiteSectionBrackets(section: FlowSection, residual: (y: Metres) => number, grid: readonly Metres[] = finiteDepthGrid(section)): Bracket[] {
-  const shallowest = residual(grid[0]) >= 0 ? downwardBracket(residual, grid[0]) : null;
-  return [...(shallowest ? [shallowest] : []), ...signChangeBrackets(residual, grid)];
+/** Relative margin by which a bound must clear 0 to prove a sign: far above the rounding of either side. */
+const PROOF_MARGIN = 1e-9;
+
+/**
+ * The sign of criticalResidual over a range of depths, proven from the section's bounds on αT/A³ there: the residual
+ * is positive where Fr² = Q²·αT/(gA³) < 1 and negative where Fr² > 1 (Chow 1959 §4-2 criterion — from memory). Why:
+ * above and below its critical depths a section's residual keeps one sign, and a proof for a whole stretch costs
+ * about two evaluations.
+ */
+function criticalResidualProof(section: FlowSection, discharge: CubicMetresPerSecond): SignProof | undefined {
+  const boundsInto = section.froudeFactorBoundsInto?.bind(section);
+  if (boundsInto === undefined) return undefined;
+  const scale = (discharge * discharge) / GRAVITY;
+  const bounds: FroudeFactorBounds = { least: 0, most: Infinity };
+  return (from, to) => {
+    boundsInto(from, to, bounds);
+    if (scale * bounds.most < 1 - PROOF_MARGIN) return 1;
+    if (scale * bounds.least > 1 + PROOF_MARGIN) return -1;
+    return 0;
+  };
 }
 
-/** Every root of the residual in ascending order; compound sections may have several. Shared with the jump solver. */
-export function residualRoots(section: FlowSection, residual: (y: Metres) => number, isRoot: (y: Metres) => boolean, field: string, grid?: readonly Metres[]): Metres[] {
+function finiteSectionBrackets(section: FlowSection, residual: (y: Metres) => number, grid: readonly Metres[] = finiteDepthGrid(section), proof?: SignProof): Bracket[] {
+  const shallowest = residual(grid[0]) >= 0 ? downwardBracket(residual, grid[0]) : null;
+  const brackets = proof === undefined ? signChangeBrackets(residual, grid) : provenSignChangeBrackets(residual, grid, proof);
+  return shallowest ? [shallowest, ...brackets] : brackets;
+}
+
+/**
+ * Every root of the residual in ascending order; compound sections may have several. Shared with the jump solver.
+ * With `proof`, stretches of the grid proven free of a sign change are not evaluated.
+ */
+export function residualRoots(section: FlowSection, residual: (y: Metres) => number, isRoot: (y: Metres) => boolean, field: string, grid?: readonly Metres[], proof?: SignProof): Metres[] {
   if (section.maxDepth === Infinity) {
     const bracket = openDepthBracket(residual, field);
     if (bracket === null) throw new NoPhysicalSolutionError(field, 'depth-out-of-range', `no critical depth below ${DEEPEST_OPEN_DEPTH} m: check the discharge and its units`);
     return [rootInBracket(residual, bracket, field)];
   }
-  const roots = finiteSectionBrackets(section, residual, grid).map((bracket) => rootInBracket(residual, bracket, field));
+  const roots = finiteSectionBrackets(section, residual, grid, proof).map((bracket) => rootInBracket(residual, bracket, field));
   return [...new Set(roots)].filter(isRoot).sort((a, b) => a - b);
 }
 
-/** Every depth where Fr = 1 within the section (Chow 1959 §4-2 criterion — from memory), ascending. */
-export function criticalDepths(section: FlowSection, discharge: CubicMetresPerSecond, opts: CriticalDepthOptions = {}): Metres[] {
+/** The critical depths of one section at one discharge, and the one of least specific energy once asked for. */
+interface KnownCritical {
+  discharge: CubicMetresPerSecond;
+  roots: readonly Metres[];
+  leastEnergy?: Metres;
+}
+
+/**
+ * Critical depths found, per section and discharge (a short list: a section meets a few discharges). Why: one event
+ * asks for the control section's critical depth for its regime, its weir and its profile, and a march for each
+ * section's at every step onto it; sections never change once built. An empty list (overtopped) is kept too: the
+ * error is raised afresh, with the caller's field names.
+ */
+const criticalRoots = new WeakMap<FlowSection, KnownCritical[]>();
+
+function knownCritical(section: FlowSection, discharge: CubicMetresPerSecond, opts: CriticalDepthOptions): KnownCritical {
   const field = opts.field ?? 'reach.section';
   const dischargeField = opts.dischargeField ?? 'discharge';
   requirePositive(discharge, dischargeField);
   let known = criticalRoots.get(section);
-  if (known === undefined) criticalRoots.set(section, (known = new Map()));
-  let roots = known.get(discharge);
-  if (roots === undefined) {
+  if (known === undefined) criticalRoots.set(section, (known = []));
+  let entry = known.find((k) => k.discharge === discharge);
+  if (entry === undefined) {
     const isRoot = (y: Metres) => isCriticalRoot(section, y, discharge, false);
     const grid = hasBreakpoints(section) ? breakpointDepthGrid(section) : undefined;
-    known.set(discharge, (roots = residualRoots(section, criticalResidual(section, discharge), isRoot, dischargeField, grid)));
+    const proof = criticalResidualProof(section, discharge);
+    known.push((entry = { discharge, roots: residualRoots(section, rememberingRecent(criticalResidual(section, discharge)), isRoot, dischargeField, grid, proof) }));
   }
-  if (roots.length === 0) {
+  if (entry.roots.length === 0) {
     throw new NoPhysicalSolutionError(
       field,
       'section-overtopped',
       `critical depth for ${discharge} m³/s lies above the top of the section (${section.maxDepth.toPrecision(4)} m deep): the flow would overtop it`,
     );
   }
-  return [...roots];
+  return entry;
 }
 
-/**
- * Critical depths found, per section and discharge. Why: one event asks for the control section's critical depth for
- * its regime, its weir and its profile; sections never change once built. An empty list (overtopped) is kept too:
- * the error is raised afresh, with the caller's field names.
- */
-const criticalRoots = new WeakMap<FlowSection, Map<CubicMetresPerSecond, readonly Metres[]>>();
+/** Every depth where Fr = 1 within the section (Chow 1959 §4-2 criterion — from memory), ascending. */
+export function criticalDepths(section: FlowSection, discharge: CubicMetresPerSecond, opts: CriticalDepthOptions = {}): Metres[] {
+  return [...knownCritical(section, discharge, opts).roots];
+}
 
 /** The critical depth; where a compound section has several, the one with the least specific energy. */
 export function criticalDepth(section: FlowSection, discharge: CubicMetresPerSecond, opts: CriticalDepthOptions = {}): Metres {
-  const roots = criticalDepths(section, discharge, opts);
-  const energies = roots.map((y) => specificEnergy(section, y, discharge));
-  return roots[energies.indexOf(Math.min(...energies))];
+  const entry = knownCritical(section, discharge, opts);
+  if (entry.leastEnergy === undefined) {
+    const energies = entry.roots.map((y) => specificEnergy(section, y, discharge));
+    entry.leastEnergy = entry.roots[energies.indexOf(Math.min(...energies))];
+  }
+  return entry.leastEnergy;
 }

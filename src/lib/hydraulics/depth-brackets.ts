@@ -2,6 +2,7 @@
 import type { Bracket } from './root-scan';
 import type { FlowSection } from './section';
 import { expandBracketUpward } from './solvers';
+import { sortedDistinct } from './sorted-distinct';
 import type { Metres } from './units';
 
 const UNIFORM_STEPS = 400;
@@ -43,38 +44,35 @@ const WIDEST_TABULATED_GAP = 1 / 32;
  * straight stretch of ground), which cancel, as two roots within one step of the former 400-step scan did. Why:
  * that scan cost some 450 evaluations per section; a survey has a few dozen breakpoints.
  */
-export function breakpointDepthGrid(section: FlowSection & { breakpointDepths: readonly Metres[]; jumpDepths?: readonly Metres[] }): readonly Metres[] {
-  let grid = breakpointGrids.get(section);
-  if (grid === undefined) {
-    const top = section.maxDepth;
-    const nudge = top * SHALLOWEST_FRACTION;
-    const depths: Metres[] = [nudge, top];
-    for (const d of section.breakpointDepths) if (d > 0 && d < top) depths.push(d);
-    for (const d of section.jumpDepths ?? section.breakpointDepths) if (d > 0 && d < top) depths.push(Math.min(top, d + nudge));
-    grid = withGapsFilled(sortedDistinct(depths), top * WIDEST_TABULATED_GAP);
-    breakpointGrids.set(section, grid);
+export function breakpointDepthGrid(section: FlowSection & { breakpointDepths: readonly Metres[]; jumpDepths?: readonly Metres[] }): Metres[] {
+  const top = section.maxDepth;
+  const nudge = top * SHALLOWEST_FRACTION;
+  const widestGap = top * WIDEST_TABULATED_GAP;
+  const breakpoints = section.breakpointDepths;
+  const jumps = section.jumpDepths ?? breakpoints;
+  const grid: Metres[] = [];
+  const add = (depth: Metres) => {
+    if (grid.length === 0) return void grid.push(depth);
+    const last = grid[grid.length - 1];
+    if (!(depth > last)) return;
+    const pieces = Math.ceil((depth - last) / widestGap);
+    for (let k = 1; k < pieces; k++) grid.push(last + ((depth - last) * k) / pieces);
+    grid.push(depth);
+  };
+  // One ascending walk through three ascending sources: the shallowest depth, the breakpoints, just above the jumps.
+  let nudgeTaken = false;
+  for (let i = 0, j = 0; !nudgeTaken || i < breakpoints.length || j < jumps.length; ) {
+    const fromNudge = nudgeTaken ? Infinity : nudge;
+    const fromBreakpoints = i < breakpoints.length ? breakpoints[i] : Infinity;
+    const fromJumps = j < jumps.length ? Math.min(top, jumps[j] + nudge) : Infinity;
+    const next = Math.min(fromNudge, fromBreakpoints, fromJumps);
+    if (next === fromNudge) nudgeTaken = true;
+    else if (next === fromBreakpoints) i++;
+    else j++;
+    if (next > 0 && next < top) add(next);
   }
+  add(top);
   return grid;
-}
-
-function withGapsFilled(depths: readonly Metres[], widestGap: Metres): Metres[] {
-  const filled: Metres[] = [depths[0]];
-  for (let i = 1; i < depths.length; i++) {
-    const pieces = Math.ceil((depths[i] - depths[i - 1]) / widestGap);
-    for (let k = 1; k < pieces; k++) filled.push(depths[i - 1] + ((depths[i] - depths[i - 1]) * k) / pieces);
-    filled.push(depths[i]);
-  }
-  return filled;
-}
-
-const breakpointGrids = new WeakMap<FlowSection, readonly Metres[]>();
-
-function sortedDistinct(depths: Metres[]): Metres[] {
-  // A typed array sorts numbers without a comparator call per comparison; equal neighbours are then dropped.
-  const sorted = Float64Array.from(depths).sort();
-  const distinct: Metres[] = [];
-  for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) distinct.push(sorted[i]);
-  return distinct;
 }
 
 function depthGrid(section: FlowSection, from: Metres, to: Metres): Metres[] {

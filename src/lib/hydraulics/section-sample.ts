@@ -10,6 +10,12 @@ export interface SectionSample {
   energyCoefficient: Dimensionless;
 }
 
+/** Bounds on αT/A³ over a range of depths, which times Q²/g is the square of the Froude number (see FlowSection.froudeFactorBoundsInto). */
+export interface FroudeFactorBounds {
+  least: number;
+  most: number;
+}
+
 export function emptySample(): SectionSample {
   return { area: 0, topWidth: 0, conveyance: 0, energyCoefficient: 1 };
 }

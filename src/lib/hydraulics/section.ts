@@ -1,4 +1,4 @@
-import type { SectionSample } from './section-sample';
+import type { FroudeFactorBounds, SectionSample } from './section-sample';
 import type { CubicMetres, CubicMetresPerSecond, Dimensionless, Metres, SquareMetres } from './units';
 
 /** Hydraulic properties of one cross-section at one water depth (SI). */
@@ -36,4 +36,6 @@ export interface FlowSection {
   stateAtDepth(depth: Metres): SectionState;
   /** The same area, top width, conveyance and α as stateAtDepth, written into `out` (optional; see section-sample.ts). */
   sampleInto?(depth: Metres, out: SectionSample): void;
+  /** Bounds on αT/A³ holding at every depth in [from, to] (optional; lets the critical-depth scan skip stretches). */
+  froudeFactorBoundsInto?(from: Metres, to: Metres, out: FroudeFactorBounds): void;
 }

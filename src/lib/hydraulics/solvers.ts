@@ -132,3 +132,24 @@ export function expandBracketUpward(
   }
   return null;
 }
+
+const RECENT_VALUES = 4;
+
+/**
+ * f, answering again for any of the last few x it was asked for without evaluating it. Why: a caller brackets a root
+ * and Brent then starts by evaluating the bracket's ends again, so a step of a march paid for three evaluations twice.
+ * Only for pure functions of x.
+ */
+export function rememberingRecent(f: (x: number) => number): (x: number) => number {
+  const xs = new Array<number>(RECENT_VALUES).fill(NaN);
+  const values = new Array<number>(RECENT_VALUES).fill(NaN);
+  let next = 0;
+  return (x) => {
+    for (let i = 0; i < RECENT_VALUES; i++) if (xs[i] === x) return values[i];
+    const value = f(x);
+    xs[next] = x;
+    values[next] = value;
+    next = (next + 1) % RECENT_VALUES;
+    return value;
+  };
+}

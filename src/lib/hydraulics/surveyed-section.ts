@@ -1,12 +1,13 @@
 // A surveyed (station–elevation) cross-section as a FlowSection, with left overbank / channel / right overbank.
 import { InvalidInputError, requireFinite } from './errors';
-import { manningConveyance } from './manning';
-import type { GroundSegment } from './polygon-clip';
+import { SCRATCH_SLOTS, scratchNumbers } from './scratch-numbers';
 import type { FlowSection, SectionState } from './section';
-import type { SectionSample } from './section-sample';
+import type { FroudeFactorBounds, SectionSample } from './section-sample';
 import { requireDepth, sectionState } from './section-state';
-import { type PieceValues, SurveyTable } from './surveyed-table';
-import { type SurveyedSectionSpec, type ValidatedSurvey, validatedSurvey, withGroundPointAt } from './surveyed-spec';
+import { emptyFlow, flowAtLevel, froudeFactorBoundsBetween } from './surveyed-flow';
+import { SurveyTable } from './surveyed-table';
+import { type SurveyedGround, groundOfSurvey } from './surveyed-ground';
+import { type SurveyedSectionSpec, validatedSurvey } from './surveyed-spec';
 import type { Metres } from './units';
 
 export type { SurveyedSectionSpec } from './surveyed-spec';
@@ -26,96 +27,62 @@ export interface SurveyedSection extends FlowSection {
 }
 
 const SUB_AREAS = ['left', 'channel', 'right'] as const;
-type Point = ValidatedSurvey['points'][number];
 
-
-function highestGroundAt(points: Point[], station: Metres): Metres {
-  return points.reduce((highest, p) => (p.station === station ? Math.max(highest, p.elevation) : highest), -Infinity);
+function highestGroundAt(ground: SurveyedGround, station: Metres): Metres {
+  let highest = -Infinity;
+  for (let i = 0; i < ground.stations.length; i++) if (ground.stations[i] === station) highest = Math.max(highest, ground.elevations[i]);
+  return highest;
 }
 
-/** 0, 1 or 2: left overbank, channel, right overbank (the order of SUB_AREAS). */
-function subAreaOf(segment: GroundSegment, banks: ValidatedSurvey['banks']): number {
-  const middle = (segment.x1 + segment.x2) / 2;
-  if (middle < banks.left) return 0;
-  if (middle > banks.right) return 2;
-  return 1;
+/** Per point i ≥ 1, the sub-area of the segment ending there: 0, 1 or 2 for left overbank, channel, right overbank. */
+function segmentSubAreas(ground: SurveyedGround): Float64Array {
+  const { stations, banks } = ground;
+  // Working space: the table reads it once, while it is built.
+  const subAreas = scratchNumbers(stations.length, SCRATCH_SLOTS.segmentSubAreas);
+  subAreas[0] = -1;
+  for (let i = 1; i < stations.length; i++) {
+    const middle = (stations[i - 1] + stations[i]) / 2;
+    subAreas[i] = middle < banks.left ? 0 : middle > banks.right ? 2 : 1;
+  }
+  return subAreas;
 }
 
 /** Distinct depths in (0, maxDepth] of the table's levels, ascending (the levels are every ground elevation, ascending). */
-function depthsOfLevels(levels: readonly Metres[], invertLevel: Metres, maxDepth: Metres): Metres[] {
+function depthsOfLevels(levels: ArrayLike<Metres>, invertLevel: Metres, maxDepth: Metres): Metres[] {
   const depths: Metres[] = [];
-  for (const level of levels) {
-    const depth = level - invertLevel;
+  for (let k = 0; k < levels.length; k++) {
+    const depth = levels[k] - invertLevel;
     if (depth > 0 && depth <= maxDepth && depth !== depths[depths.length - 1]) depths.push(depth);
   }
   return depths;
 }
 
-/**
- * Energy coefficient of a divided section: α = Σ vᵢ³Aᵢ / (V³A) (Chow, Open-Channel Hydraulics, 1959, §2-7 — from memory)
- * with vᵢ = Kᵢ√S/Aᵢ and V = K√S/A, i.e. α = (Σ Kᵢ³/Aᵢ²) / (K³/A²).
- * Summed as Σ (vᵢ/V)³ (Aᵢ/A) so that a sliver of a sub-area cannot overflow or underflow.
- */
-function dividedEnergyCoefficient(parts: readonly PieceValues[], conveyances: readonly number[], area: number, conveyance: number): number {
-  if (area <= 0 || conveyance <= 0) return 1;
-  const meanRatio = conveyance / area;
-  let alpha = 0;
-  for (let j = 0; j < parts.length; j++) {
-    const part = parts[j];
-    if (part.area > 0) {
-      const ratio = conveyances[j] / part.area / meanRatio;
-      alpha += ratio * ratio * ratio * (part.area / area);
-    }
-  }
-  return Number.isFinite(alpha) ? Math.max(1, alpha) : 1;
-}
+// One record for every section's evaluations: the engine is synchronous, and each result is copied out at once.
+const flow = emptyFlow();
 
 export function surveyedSection(spec: SurveyedSectionSpec, opts: { field?: string } = {}): SurveyedSection {
-  const field = opts.field ?? 'reach.section';
-  const survey = validatedSurvey(spec, field);
-  const ground = withGroundPointAt(withGroundPointAt(survey.points, survey.banks.left), survey.banks.right);
-  const segmentsBySubArea: GroundSegment[][] = [[], [], []];
-  let invertLevel = ground[0].elevation;
-  for (let i = 1; i < ground.length; i++) {
-    const segment: GroundSegment = { x1: ground[i - 1].station, z1: ground[i - 1].elevation, x2: ground[i].station, z2: ground[i].elevation };
-    segmentsBySubArea[subAreaOf(segment, survey.banks)].push(segment);
-    invertLevel = Math.min(invertLevel, ground[i].elevation);
-  }
-  const lowerEndLevel = Math.min(ground[0].elevation, ground[ground.length - 1].elevation);
-  const maxDepth = lowerEndLevel - invertLevel;
-  const table = new SurveyTable(segmentsBySubArea);
-  const breakpointDepths = depthsOfLevels(table.levels, invertLevel, maxDepth);
-  const jumpDepths = depthsOfLevels(table.levels.filter((_, k) => table.jumpsAbove[k] === 1), invertLevel, maxDepth);
-  const roughness = SUB_AREAS.map((subArea) => survey.roughness[subArea]);
-  // Scratch for one evaluation at a time: the engine is synchronous, and nothing here calls back out.
-  const parts: PieceValues[] = SUB_AREAS.map(() => ({ area: 0, wettedPerimeter: 0, topWidth: 0, firstMoment: 0 }));
-  const conveyances = [0, 0, 0];
-  const whole: PieceValues = { area: 0, wettedPerimeter: 0, topWidth: 0, firstMoment: 0 };
+  return sectionOfGround(groundOfSurvey(validatedSurvey(spec, opts.field ?? 'reach.section')));
+}
 
-  /** Fills parts, conveyances and whole at `level`; returns the total conveyance. */
-  function evaluate(level: Metres): number {
-    const k = table.interval(level);
-    whole.area = whole.wettedPerimeter = whole.topWidth = whole.firstMoment = 0;
-    let conveyance = 0;
-    for (let j = 0; j < 3; j++) {
-      const part = parts[j];
-      table.fill(k, j, level, part);
-      conveyances[j] = manningConveyance(part.area, part.wettedPerimeter, roughness[j]);
-      conveyance += conveyances[j];
-      whole.area += part.area;
-      whole.wettedPerimeter += part.wettedPerimeter;
-      whole.topWidth += part.topWidth;
-      whole.firstMoment += part.firstMoment;
-    }
-    return conveyance;
-  }
+/**
+ * The section over ground already checked (as validatedSurvey checks a survey). Why: sections interpolated between
+ * two checked surveys are most of a refined reach, and checking each again would cost as much as tabulating it.
+ */
+export function sectionOfGround(ground: SurveyedGround): SurveyedSection {
+  const { elevations } = ground;
+  let invertLevel = elevations[0];
+  for (let i = 1; i < elevations.length; i++) invertLevel = Math.min(invertLevel, elevations[i]);
+  const lowerEndLevel = Math.min(elevations[0], elevations[elevations.length - 1]);
+  const maxDepth = lowerEndLevel - invertLevel;
+  const table = new SurveyTable({ stations: ground.stations, elevations, segmentSubAreas: segmentSubAreas(ground), order: ground.order });
+  const jumpDepths = depthsOfLevels(table.jumpLevels, invertLevel, maxDepth);
+  const roughness = SUB_AREAS.map((subArea) => ground.roughness[subArea]);
 
   function stateAtLevel(level: Metres): SectionState {
     requireFinite(level, 'level');
     if (level < invertLevel) throw new InvalidInputError('level', `must not be below the lowest ground point (${invertLevel} m)`);
-    const conveyance = evaluate(level);
-    const alpha = dividedEnergyCoefficient(parts, conveyances, whole.area, conveyance);
-    return sectionState({ depth: level - invertLevel, ...whole }, conveyance, alpha, level > lowerEndLevel);
+    const { area, wettedPerimeter, topWidth, firstMoment, conveyance, energyCoefficient } = flowAtLevel(table, roughness, level, flow);
+    return sectionState({ depth: level - invertLevel, area, wettedPerimeter, topWidth, firstMoment }, conveyance, energyCoefficient, level > lowerEndLevel);
   }
 
   return {
@@ -123,8 +90,8 @@ export function surveyedSection(spec: SurveyedSectionSpec, opts: { field?: strin
     invertLevel,
     maxDepth,
     lowerEndLevel,
-    bankLevels: { left: highestGroundAt(ground, survey.banks.left), right: highestGroundAt(ground, survey.banks.right) },
-    breakpointDepths,
+    bankLevels: { left: highestGroundAt(ground, ground.banks.left), right: highestGroundAt(ground, ground.banks.right) },
+    breakpointDepths: depthsOfLevels(table.levels, invertLevel, maxDepth),
     jumpDepths,
     stateAtLevel,
     stateAtDepth(depth: Metres): SectionState {
@@ -133,11 +100,14 @@ export function surveyedSection(spec: SurveyedSectionSpec, opts: { field?: strin
     },
     sampleInto(depth: Metres, out: SectionSample): void {
       requireDepth(depth);
-      const conveyance = evaluate(invertLevel + depth);
-      out.area = whole.area;
-      out.topWidth = whole.topWidth;
-      out.conveyance = conveyance;
-      out.energyCoefficient = dividedEnergyCoefficient(parts, conveyances, whole.area, conveyance);
+      flowAtLevel(table, roughness, invertLevel + depth, flow);
+      out.area = flow.area;
+      out.topWidth = flow.topWidth;
+      out.conveyance = flow.conveyance;
+      out.energyCoefficient = flow.energyCoefficient;
+    },
+    froudeFactorBoundsInto(from: Metres, to: Metres, out: FroudeFactorBounds): void {
+      froudeFactorBoundsBetween(table, roughness, invertLevel, invertLevel + from, invertLevel + to, out);
     },
   };
 }

@@ -39,11 +39,15 @@ function checkedPoints(points: unknown, field: string): { station: Metres; eleva
   const first = checked[0];
   const last = checked[checked.length - 1];
   if (!(last.station > first.station)) throw new InvalidInputError(`${field}.points`, 'must span some width (last station above the first)');
-  const endLevel = Math.min(first.elevation, last.elevation);
-  if (!checked.slice(1, -1).some((point) => point.elevation < endLevel)) {
-    throw new InvalidInputError(`${field}.points`, 'cannot hold water: no interior point lies lower than both ends');
-  }
+  requireHoldsWater(checked.map((point) => point.elevation), `${field}.points`);
   return checked;
+}
+
+/** Ground elevations across a section (at least three) hold water when some interior point lies lower than both ends. */
+export function requireHoldsWater(elevations: readonly Metres[], field: string): void {
+  const endLevel = Math.min(elevations[0], elevations[elevations.length - 1]);
+  for (let i = 1; i < elevations.length - 1; i++) if (elevations[i] < endLevel) return;
+  throw new InvalidInputError(field, 'cannot hold water: no interior point lies lower than both ends');
 }
 
 function checkedRoughness(manningN: SurveyedSectionSpec['manningN'], field: string): ValidatedSurvey['roughness'] {

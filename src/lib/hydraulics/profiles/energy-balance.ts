@@ -2,10 +2,10 @@
 import { criticalDepth } from '../critical-depth';
 import { DEEPEST_OPEN_DEPTH } from '../depth-brackets';
 import { EngineError } from '../errors';
-import type { FlowSection, SectionState } from '../section';
-import { emptySample, sampleSection } from '../section-sample';
+import type { FlowSection } from '../section';
+import { type SectionSample, emptySample, sampleSection } from '../section-sample';
 import { requireDepth } from '../section-state';
-import { brentRoot, expandBracketUpward } from '../solvers';
+import { brentRoot, expandBracketUpward, rememberingRecent } from '../solvers';
 import type { CubicMetresPerSecond, Metres } from '../units';
 import { GRAVITY } from '../units';
 import { type FrictionAveraging, meanFrictionSlope } from './friction-averaging';
@@ -24,7 +24,7 @@ export type BalanceResult =
   | { kind: 'section-overtopped' };
 
 /** αV²/2g with V = Q/A (Chow, Open-Channel Hydraulics, 1959, §2-7 — from memory). */
-function velocityHead(state: Pick<SectionState, 'energyCoefficient' | 'area'>, discharge: CubicMetresPerSecond): Metres {
+function velocityHead(state: Pick<SectionSample, 'energyCoefficient' | 'area'>, discharge: CubicMetresPerSecond): Metres {
   return (state.energyCoefficient * discharge * discharge) / (2 * GRAVITY * state.area * state.area);
 }
 
@@ -37,7 +37,8 @@ function velocityHead(state: Pick<SectionState, 'energyCoefficient' | 'area'>, d
  */
 function balanceResidual(down: ReachStation, downDepth: Metres, up: ReachStation, settings: BalanceSettings): (depth: Metres) => number {
   const { discharge } = settings;
-  const downState = down.section.stateAtDepth(downDepth);
+  requireDepth(downDepth);
+  const downState = sampleSection(down.section, downDepth, emptySample());
   const downHead = velocityHead(downState, discharge);
   const downEnergy = down.bedLevel + downDepth + downHead;
   const length = up.distanceUpstream - down.distanceUpstream;
@@ -53,22 +54,14 @@ function balanceResidual(down: ReachStation, downDepth: Metres, up: ReachStation
   };
 }
 
-/** Critical depth per section and discharge, remembered: the stations of a prismatic reach share one section. */
-const criticalDepths = new WeakMap<FlowSection, Map<CubicMetresPerSecond, Metres | null>>();
-
-/** Null when critical depth lies above the top of the section. */
+/** Null when critical depth lies above the top of the section (criticalDepth remembers it per section and discharge). */
 function criticalDepthOf(section: FlowSection, discharge: CubicMetresPerSecond): Metres | null {
-  let known = criticalDepths.get(section);
-  if (known === undefined) criticalDepths.set(section, (known = new Map()));
-  if (!known.has(discharge)) {
-    try {
-      known.set(discharge, criticalDepth(section, discharge));
-    } catch (error) {
-      if (!(error instanceof EngineError && error.code === 'section-overtopped')) throw error;
-      known.set(discharge, null);
-    }
+  try {
+    return criticalDepth(section, discharge);
+  } catch (error) {
+    if (error instanceof EngineError && error.code === 'section-overtopped') return null;
+    throw error;
   }
-  return known.get(discharge) ?? null;
 }
 
 /**
@@ -79,7 +72,7 @@ function criticalDepthOf(section: FlowSection, discharge: CubicMetresPerSecond):
 export function upstreamDepth(down: ReachStation, downDepth: Metres, up: ReachStation, settings: BalanceSettings): BalanceResult {
   const critical = criticalDepthOf(up.section, settings.discharge);
   if (critical === null) return { kind: 'section-overtopped' };
-  const residual = balanceResidual(down, downDepth, up, settings);
+  const residual = rememberingRecent(balanceResidual(down, downDepth, up, settings));
   if (residual(critical) >= 0) return { kind: 'critical-depth', criticalDepth: critical };
   const top = Number.isFinite(up.section.maxDepth) ? up.section.maxDepth : DEEPEST_OPEN_DEPTH;
   const guess = Math.min(Math.max(down.bedLevel + downDepth - up.bedLevel, critical) + Math.max(critical, 0.1), top);

@@ -1,10 +1,10 @@
 // A reach as a list of cross-sections by distance upstream of the control, filled in where too far apart.
 import { InvalidInputError, requireFinite, requirePositive } from '../errors';
 import type { FlowSection } from '../section';
-import { surveyedSection } from '../surveyed-section';
+import { sectionOfGround, surveyedSection } from '../surveyed-section';
 import type { SurveyedSectionSpec } from '../surveyed-spec';
 import type { Metres, Slope } from '../units';
-import { interpolatedSurvey } from './survey-interpolation';
+import { interpolatedGround, interpolatedSurvey } from './survey-interpolation';
 
 export interface ReachStation {
   distanceUpstream: Metres;
@@ -14,6 +14,17 @@ export interface ReachStation {
   bankLevel?: Metres;
   /** The survey the section was built from; lets sections be interpolated between this station and the next. */
   survey?: SurveyedSectionSpec;
+  /** For an interpolated station, the surveys and weight its ground was blended from: its survey, written out when asked for. */
+  blend?: { from: SurveyedSectionSpec; to: SurveyedSectionSpec; weight: number };
+}
+
+/**
+ * The station's survey, written out from its blend the first time it is asked for. Why: only a step halved near
+ * critical depth interpolates from an interpolated station, and writing out every survey would cost a list per point.
+ */
+function surveyOf(station: ReachStation): SurveyedSectionSpec | undefined {
+  if (station.survey === undefined && station.blend !== undefined) station.survey = interpolatedSurvey(station.blend.from, station.blend.to, station.blend.weight);
+  return station.survey;
 }
 
 /** Stations at most `spacing` apart over a prismatic reach, all sharing one section; the bed rises upstream at bedSlope. */
@@ -54,7 +65,7 @@ export function surveyedReach(sections: readonly { distanceUpstream: Metres; sur
 
 /** Stations between which another can be put: one shared section, or surveys on both. */
 export function canInterpolate(a: ReachStation, b: ReachStation): boolean {
-  return a.section === b.section || (a.survey !== undefined && b.survey !== undefined);
+  return a.section === b.section || ((a.survey ?? a.blend) !== undefined && (b.survey ?? b.blend) !== undefined);
 }
 
 /** The station a fraction `weight` of the way from `a` to `b`. */
@@ -62,10 +73,11 @@ export function stationBetween(a: ReachStation, b: ReachStation, weight: number)
   const distanceUpstream = a.distanceUpstream + weight * (b.distanceUpstream - a.distanceUpstream);
   const bankLevel = a.bankLevel !== undefined && b.bankLevel !== undefined ? a.bankLevel + weight * (b.bankLevel - a.bankLevel) : undefined;
   if (a.section === b.section) return { distanceUpstream, section: a.section, bedLevel: a.bedLevel + weight * (b.bedLevel - a.bedLevel), bankLevel };
-  if (a.survey === undefined || b.survey === undefined) throw new InvalidInputError('reach.sections', 'differing sections need surveys to be interpolated');
-  const survey = interpolatedSurvey(a.survey, b.survey, weight);
-  const section = surveyedSection(survey, { field: 'reach.sections' });
-  return { distanceUpstream, section, bedLevel: section.invertLevel, bankLevel, survey };
+  const [from, to] = [surveyOf(a), surveyOf(b)];
+  if (from === undefined || to === undefined) throw new InvalidInputError('reach.sections', 'differing sections need surveys to be interpolated');
+  const section = sectionOfGround(interpolatedGround(from, to, weight));
+  // Both fields present from the start, so that writing the survey out later keeps the station's shape.
+  return { distanceUpstream, section, bedLevel: section.invertLevel, bankLevel, survey: undefined, blend: { from, to, weight } };
 }
 
 /**

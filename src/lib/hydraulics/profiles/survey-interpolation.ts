@@ -1,32 +1,35 @@
 // A cross-section between two surveyed ones, by linear interpolation of the ground itself.
-import type { SurveyedSectionSpec } from '../surveyed-spec';
+import { type SurveyedGround, withBankPoints } from '../surveyed-ground';
+import { type SurveyedSectionSpec, requireHoldsWater } from '../surveyed-spec';
 import type { Metres } from '../units';
 import { type LaidOutSurvey, laidOut, stationAt } from './survey-layout';
 
 /**
  * Ground elevations at each of the ascending positions `at`, top to bottom as surveyed: several where a vertical wall
  * stands there, interpolated between the survey's points elsewhere, its end levels beyond its ends. One walk along
- * the survey, as both lists ascend.
+ * the survey, as both lists ascend. Position p's elevations are levels[starts[p]] to levels[starts[p + 1] − 1]: one
+ * list for all, as a pair of surveys is matched once per reach and a list per position was most of that work's garbage.
  */
-function elevationsAlong(survey: LaidOutSurvey, at: readonly number[]): Metres[][] {
+function elevationsAlong(survey: LaidOutSurvey, at: readonly number[]): { levels: Metres[]; starts: number[] } {
   const { points, positions } = survey;
   const last = points.length - 1;
-  const result: Metres[][] = [];
+  const levels: Metres[] = [];
+  const starts: number[] = [];
   let i = 0;
   for (const u of at) {
+    starts.push(levels.length);
     while (i <= last && positions[i] < u) i++;
     if (i <= last && positions[i] === u) {
-      const exact: Metres[] = [];
-      for (let j = i; j <= last && positions[j] === u; j++) exact.push(points[j].elevation);
-      result.push(exact);
-    } else if (i > last) result.push([points[last].elevation]);
-    else if (i === 0) result.push([points[0].elevation]);
+      for (let j = i; j <= last && positions[j] === u; j++) levels.push(points[j].elevation);
+    } else if (i > last) levels.push(points[last].elevation);
+    else if (i === 0) levels.push(points[0].elevation);
     else {
       const t = (u - positions[i - 1]) / (positions[i] - positions[i - 1]);
-      result.push([points[i - 1].elevation + t * (points[i].elevation - points[i - 1].elevation)]);
+      levels.push(points[i - 1].elevation + t * (points[i].elevation - points[i - 1].elevation));
     }
   }
-  return result;
+  starts.push(levels.length);
+  return { levels, starts };
 }
 
 /** The positions of both surveys, ascending, each once. */
@@ -50,26 +53,28 @@ interface MatchedPair {
   levelsTo: number[];
   from: LaidOutSurvey;
   to: LaidOutSurvey;
+  /** The blended points by elevation at the weight last blended (see ground-levels.ts). */
+  order: number[];
 }
 
 function matchedPair(a: LaidOutSurvey, b: LaidOutSurvey): MatchedPair {
   const positions = mergedPositions(a, b);
   const elevationsA = elevationsAlong(a, positions);
   const elevationsB = elevationsAlong(b, positions);
-  const pair: MatchedPair = { stationsFrom: [], stationsTo: [], levelsFrom: [], levelsTo: [], from: a, to: b };
+  const pair: MatchedPair = { stationsFrom: [], stationsTo: [], levelsFrom: [], levelsTo: [], from: a, to: b, order: [] };
   for (let p = 0; p < positions.length; p++) {
     const stationA = stationAt(a, positions[p]);
     const stationB = stationAt(b, positions[p]);
-    const levelsA = elevationsA[p];
-    const levelsB = elevationsB[p];
-    const count = Math.max(levelsA.length, levelsB.length);
-    for (let k = 0; k < count; k++) {
+    const [startA, countA] = [elevationsA.starts[p], elevationsA.starts[p + 1] - elevationsA.starts[p]];
+    const [startB, countB] = [elevationsB.starts[p], elevationsB.starts[p + 1] - elevationsB.starts[p]];
+    for (let k = 0; k < Math.max(countA, countB); k++) {
       pair.stationsFrom.push(stationA);
       pair.stationsTo.push(stationB);
-      pair.levelsFrom.push(levelsA[Math.min(k, levelsA.length - 1)]);
-      pair.levelsTo.push(levelsB[Math.min(k, levelsB.length - 1)]);
+      pair.levelsFrom.push(elevationsA.levels[startA + Math.min(k, countA - 1)]);
+      pair.levelsTo.push(elevationsB.levels[startB + Math.min(k, countB - 1)]);
     }
   }
+  pair.order = pair.levelsFrom.map((_, i) => i);
   return pair;
 }
 
@@ -85,23 +90,42 @@ function rememberedPair(from: SurveyedSectionSpec, to: SurveyedSectionSpec, fiel
 }
 
 /**
- * The section a fraction `weight` of the way from `from` (0) to `to` (1). Each sub-area (left overbank, channel,
+ * The ground a fraction `weight` of the way from `from` (0) to `to` (1). Each sub-area (left overbank, channel,
  * right overbank) is matched to its counterpart by relative position across it, and at every breakpoint of
  * either survey the stations, ground levels, bank stations and Manning's n are blended linearly (common
  * practice for filling in sections between surveyed ones). Vertical walls are blended point by point.
+ * Blending two checked surveys keeps stations in order, a width and the bank stations inside it; it may lose the
+ * low point between the ends (a channel moving across the valley under a higher bank), which is checked here.
  */
-export function interpolatedSurvey(from: SurveyedSectionSpec, to: SurveyedSectionSpec, weight: number, field = 'reach.sections'): SurveyedSectionSpec {
+export function interpolatedGround(from: SurveyedSectionSpec, to: SurveyedSectionSpec, weight: number, field = 'reach.sections'): SurveyedGround {
   const pair = rememberedPair(from, to, field);
   const { from: a, to: b } = pair;
-  const points: [Metres, Metres][] = new Array(pair.stationsFrom.length);
-  for (let i = 0; i < points.length; i++) {
-    points[i] = [mix(pair.stationsFrom[i], pair.stationsTo[i], weight), mix(pair.levelsFrom[i], pair.levelsTo[i], weight)];
+  const count = pair.stationsFrom.length;
+  const stations: Metres[] = new Array(count);
+  const elevations: Metres[] = new Array(count);
+  for (let i = 0; i < count; i++) {
+    stations[i] = mix(pair.stationsFrom[i], pair.stationsTo[i], weight);
+    elevations[i] = mix(pair.levelsFrom[i], pair.levelsTo[i], weight);
   }
-  const manningN = {
+  requireHoldsWater(elevations, `${field}.points`);
+  const roughness = {
     left: mix(a.roughness.left, b.roughness.left, weight),
     channel: mix(a.roughness.channel, b.roughness.channel, weight),
     right: mix(a.roughness.right, b.roughness.right, weight),
   };
-  const bankStations: [Metres, Metres] = [mix(stationAt(a, 1), stationAt(b, 1), weight), mix(stationAt(a, 2), stationAt(b, 2), weight)];
-  return { points, manningN, bankStations };
+  const banks = { left: mix(stationAt(a, 1), stationAt(b, 1), weight), right: mix(stationAt(a, 2), stationAt(b, 2), weight) };
+  return withBankPoints({ stations, elevations, roughness, banks, order: pair.order });
+}
+
+/** The interpolated ground of interpolatedGround as a survey, to be interpolated from in turn. */
+export function surveyOfGround(ground: SurveyedGround): SurveyedSectionSpec {
+  return {
+    points: ground.stations.map((station, i) => [station, ground.elevations[i]]),
+    manningN: { ...ground.roughness },
+    bankStations: [ground.banks.left, ground.banks.right],
+  };
+}
+
+export function interpolatedSurvey(from: SurveyedSectionSpec, to: SurveyedSectionSpec, weight: number, field = 'reach.sections'): SurveyedSectionSpec {
+  return surveyOfGround(interpolatedGround(from, to, weight, field));
 }
