@@ -2,12 +2,12 @@
 // wherever the engine worker is (build-engine-worker.mjs): `npm run build`, `npm start`, `npm run dev`, vitest's set-up.
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { buildSync } from 'esbuild';
+import { bundleWorker } from './bundle-worker.mjs';
 
 const ENTRY = 'src/lib/pdf-pool/pdf-worker.ts';
 // Loaded from node_modules at run time, as Next's server does (serverExternalPackages in next.config.mjs): pdfkit finds
-// its own data files beside itself, and piscina's move() must be the instance the worker thread runs under.
-const EXTERNAL = ['pdfkit', 'fontkit', 'node-forge', '@signpdf/*', 'piscina'];
+// its own data files beside itself (and piscina, as for every worker: bundle-worker.mjs).
+const EXTERNAL = ['pdfkit', 'fontkit', 'node-forge', '@signpdf/*'];
 
 /** Where the portal looks for the worker: SILLMARK_PDF_WORKER, or pdf-worker.mjs in the Next build folder. */
 export function pdfWorkerPath(env = process.env, cwd = process.cwd()) {
@@ -18,23 +18,8 @@ export function pdfWorkerPath(env = process.env, cwd = process.cwd()) {
 const REQUEST_SIDE_ONLY = /^(src\/lib\/db\/|node_modules\/(sequelize|sqlite3|better-sqlite3)\/)/;
 
 export function buildPdfWorker({ outfile = pdfWorkerPath(), cwd = process.cwd() } = {}) {
-  const { metafile } = buildSync({
-    absWorkingDir: cwd,
-    entryPoints: [ENTRY],
-    outfile,
-    bundle: true,
-    platform: 'node',
-    format: 'esm',
-    target: 'node20',
-    tsconfig: 'tsconfig.json',
-    external: EXTERNAL,
-    // The renderers import 'server-only', which is an empty module under the server condition (as under tsx in the CLI).
-    conditions: ['react-server', 'module'],
-    metafile: true,
-    logLevel: 'warning',
-    // Bundled CommonJS packages may call require(); an ES module has none of its own.
-    banner: { js: "import { createRequire as sillmarkCreateRequire } from 'node:module'; const require = sillmarkCreateRequire(import.meta.url);" },
-  });
+  // The renderers import 'server-only', which is an empty module under the server condition (as under tsx in the CLI).
+  const metafile = bundleWorker({ entry: ENTRY, outfile, cwd, external: EXTERNAL, conditions: ['react-server', 'module'] });
   const strays = Object.keys(metafile.inputs).filter((input) => REQUEST_SIDE_ONLY.test(input));
   if (strays.length > 0) throw new Error(`The PDF worker must not load the database, but its bundle takes in ${strays.join(', ')}`);
   return outfile;
