@@ -4,6 +4,7 @@ import { InvalidInputError } from './errors';
 import { meanBedSlope } from './profiles/reach-geometry';
 import { type ReachStation, surveyedReach } from './profiles/reach-sections';
 import { type PrismaticSection, prismaticSection } from './prismatic-sections';
+import { interpolatedAlong, prismaticBankLevelAt } from './reach-banks';
 import type { FlowSection } from './section';
 import type { SurveyedSection, SurveyedSectionSpec } from './surveyed-section';
 import type { Metres, Slope } from './units';
@@ -32,16 +33,6 @@ function scaledRoughness(n: SurveyRoughness, factor: number): SurveyRoughness {
   return { left: n.left * factor, channel: n.channel * factor, right: n.right * factor };
 }
 
-function interpolatedAlong(stations: readonly { distanceUpstream: Metres; value: Metres }[]): (d: Metres) => Metres {
-  return (d) => {
-    if (d <= stations[0].distanceUpstream) return stations[0].value;
-    const i = stations.findIndex((s) => s.distanceUpstream >= d);
-    if (i < 0) return stations[stations.length - 1].value;
-    const a = stations[i - 1];
-    const b = stations[i];
-    return a.value + ((d - a.distanceUpstream) / (b.distanceUpstream - a.distanceUpstream)) * (b.value - a.value);
-  };
-}
 
 function prismaticModel(reach: Extract<CaseInput['reach'], { kind: 'prismatic' }>, manningFactor: number): ReachModel {
   const section = prismaticSection(reach.section, reach.manningN * manningFactor, { energyCoefficient: reach.energyCoefficient });
@@ -54,7 +45,7 @@ function prismaticModel(reach: Extract<CaseInput['reach'], { kind: 'prismatic' }
     length: reach.length,
     prismatic: { section },
     stations: null,
-    bankLevelAt: bankHeight === undefined ? null : (d) => reach.bedLevelAtControl + reach.bedSlope * d + bankHeight,
+    bankLevelAt: prismaticBankLevelAt(reach),
     bankLevelSource: bankHeight === undefined ? null : 'reach.bankHeight above the bed',
   };
 }

@@ -1,7 +1,7 @@
 import 'server-only';
-import { reachModel } from '@/lib/hydraulics/case-reach';
 import type { CaseResult, EventResult } from '@/lib/hydraulics/case-result';
 import { caseToSI } from '@/lib/hydraulics/case-units';
+import { bankLevelAlong, reachLengthOf } from '@/lib/hydraulics/reach-banks';
 import { DEFAULT_IMPACT_THRESHOLD } from '@/lib/hydraulics/event-impact';
 import type { ProfilePoint } from '@/lib/hydraulics/profiles/profile-point';
 import { METRES_PER_FOOT, type Metres } from '@/lib/hydraulics/units';
@@ -51,14 +51,13 @@ export async function revisionResults(revision: Revision): Promise<RevisionResul
   const stored = revision.resultsJson !== null;
   const result: CaseResult = stored ? (JSON.parse(revision.resultsJson as string) as CaseResult) : await evaluateCaseOffThread(parsed.value);
   const si = caseToSI(parsed.value);
-  const model = reachModel(si.reach);
   return {
     caseInput: parsed.value,
     engineVersion: result.engineVersion ?? revision.engineVersion ?? 'unknown',
     stored,
     events: result.events.map((e) => eventProfiles(e, result.units)),
-    bankLevelAt: model.bankLevelAt,
+    bankLevelAt: bankLevelAlong(si.reach),
     impactThreshold: si.impactThreshold ?? DEFAULT_IMPACT_THRESHOLD,
-    reachLength: model.length,
+    reachLength: reachLengthOf(si.reach),
   };
 }

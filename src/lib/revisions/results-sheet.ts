@@ -1,6 +1,6 @@
-import { reachModel } from '@/lib/hydraulics/case-reach';
 import type { CaseResult, EventResult } from '@/lib/hydraulics/case-result';
 import { caseToSI, unitScale } from '@/lib/hydraulics/case-units';
+import { bankLevelAlong } from '@/lib/hydraulics/reach-banks';
 import type { CaseInput } from '@/lib/validation/case-schema';
 
 // The engine's result arranged for drawing: long-section series and cross-section outlines, in the case's units.
@@ -38,10 +38,16 @@ function byDistance(points: XY[]): XY[] {
   return [...seen.values()].sort((a, b) => a.x - b.x);
 }
 
-/** Bank level along the reach, from the engine's reach model (it works in SI; the case may be in ft). */
+// One case, many events: the banks are read once per case (the sheet draws a long-section for each event).
+const banksOfCase = new WeakMap<CaseInput, ReturnType<typeof bankLevelAlong>>();
+function bankLevelOf(input: CaseInput): ReturnType<typeof bankLevelAlong> {
+  if (!banksOfCase.has(input)) banksOfCase.set(input, bankLevelAlong(caseToSI(input).reach));
+  return banksOfCase.get(input) ?? null;
+}
+
+/** Bank level along the reach, as the engine reads it (in SI; the case may be in ft), without building its sections. */
 function bankLine(input: CaseInput, distances: number[]): XY[] | null {
-  const model = reachModel(caseToSI(input).reach);
-  const levelAt = model.bankLevelAt;
+  const levelAt = bankLevelOf(input);
   if (!levelAt) return null;
   const k = unitScale(input.units).length;
   const stations = input.reach.kind === 'surveyed' ? input.reach.sections.map((s) => s.distanceUpstream) : [];

@@ -1,5 +1,5 @@
 import 'server-only';
-import { reachModel } from '@/lib/hydraulics/case-reach';
+import { surveyedBankLevel } from '@/lib/hydraulics/reach-banks';
 import type { DraftInputs, SurveyedReach } from '@/lib/revisions/draft-inputs';
 import type { SchemeStepInput } from '@/lib/validation/scheme-schemas';
 import type { SurveyedSectionBank } from '@/components/forms/wizard/limits-step-form';
@@ -33,8 +33,7 @@ export function structureDefaults(draft: DraftInputs): { defaults?: StructureFor
 /** Each surveyed section's own bank top, as the engine's reach model reads it from the survey (no bankLevel given). */
 export function surveyedBanks(reach: SurveyedReach): SurveyedSectionBank[] {
   try {
-    const model = reachModel({ ...reach, sections: reach.sections.map(({ bankLevel: _b, ...s }) => s) });
-    return reach.sections.map((s) => ({ distanceUpstream: s.distanceUpstream, surveyedBankLevel: model.bankLevelAt?.(s.distanceUpstream) ?? Number.NaN }));
+    return reach.sections.map(({ bankLevel: _given, ...s }) => ({ distanceUpstream: s.distanceUpstream, surveyedBankLevel: surveyedBankLevel(s) }));
   } catch {
     return reach.sections.map((s) => ({ distanceUpstream: s.distanceUpstream, surveyedBankLevel: Number.NaN }));
   }
