@@ -1,6 +1,9 @@
 import { afterAll, beforeAll, bench, describe } from 'vitest';
+import { draftCertificate } from '@/lib/certificates/certificate-draft';
 import { issueCertificate } from '@/lib/certificates/issue-certificate';
+import { signCertificate } from '@/lib/certificates/sign-certificate';
 import { removeCertificateFile } from '@/lib/certificates/certificate-files';
+import { readSnapshot } from '@/lib/db/read-snapshot';
 import { type Revision, type Scheme, type User, database } from '@/lib/db';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import type { CertificateContent } from '@/lib/pdf/certificate-content';
@@ -68,10 +71,12 @@ describe('certificate PDF (demo case, one countersigned revision)', () => {
   }, once);
 
   bench('issue: render and sign on the PDF pool, store the file and record the row and audit event (rolled back)', async () => {
+    const baseUrl = 'http://localhost:3000';
+    const signed = await signCertificate(await readSnapshot((transaction) => draftCertificate(people, { issuedAt: new Date().toISOString(), baseUrl, transaction })));
     const transaction = await database().transaction();
     let written: string | null = null;
     try {
-      await issueCertificate({ ...people, issuedAt: new Date().toISOString(), baseUrl: 'http://localhost:3000', transaction, onFileWritten: (file) => (written = file) });
+      await issueCertificate({ parties: people, signed, baseUrl, transaction, onFileWritten: (file) => (written = file) });
     } finally {
       await transaction.rollback();
       if (written) await removeCertificateFile(written);

@@ -65,13 +65,17 @@ describe('a busy PDF pool', () => {
     }
   });
 
-  it('answers a print request 503 with Retry-After while the pool is full, and records nothing', async () => {
+  it('answers a print request and a certificate check 503 with Retry-After while the pool is full, and records nothing', async () => {
     const before = await tableSnapshot();
     const running = [refusal(hugePack()), refusal(hugePack())];
-    const response = await callRoute('letters/batches/[id]/print', 'GET', { id: batchId });
-    expect(response.status).toBe(503);
-    expect(response.headers.get('retry-after')).toBe('5');
-    expect((await response.json()).error).toMatch(/busy making other documents/);
+    const upload = new FormData();
+    upload.append('file', new Blob([new TextEncoder().encode('%PDF-1.3\nan uploaded certificate\n')], { type: 'application/pdf' }), 'certificate.pdf');
+    // The signature of an uploaded certificate is checked on the PDF pool too, so it waits its turn there.
+    for (const response of [await callRoute('letters/batches/[id]/print', 'GET', { id: batchId }), await callRoute('certificates/verification', 'POST', { body: upload })]) {
+      expect(response.status).toBe(503);
+      expect(response.headers.get('retry-after')).toBe('5');
+      expect((await response.json()).error).toMatch(/busy making other documents/);
+    }
     for (const stopped of await Promise.all(running)) expect(stopped).toBeInstanceOf(UnprocessableError);
     expect(await tableSnapshot()).toEqual(before);
   });

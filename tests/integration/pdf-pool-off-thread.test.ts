@@ -3,8 +3,11 @@ import path from 'node:path';
 import { type IntervalHistogram, monitorEventLoopDelay } from 'node:perf_hooks';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { SessionUser } from '@/lib/auth/current-session';
+import { draftCertificate } from '@/lib/certificates/certificate-draft';
 import { issueCertificate } from '@/lib/certificates/issue-certificate';
+import { signCertificate } from '@/lib/certificates/sign-certificate';
 import { removeCertificateFile } from '@/lib/certificates/certificate-files';
+import { readSnapshot } from '@/lib/db/read-snapshot';
 import { Letter, type Revision, type Scheme, type User, database } from '@/lib/db';
 import { generateLetters } from '@/lib/letters/generate-letters';
 import { type LetterDocument, renderLetterPdf, renderLettersForPrint } from '@/lib/letters/render-letter-pdf';
@@ -30,10 +33,12 @@ let people: { scheme: Scheme; revision: Revision; designer: User; checker: User 
 let earlierBatch: { document: LetterDocument; stored: Buffer }[];
 
 async function issueCertificateRolledBack(): Promise<void> {
+  const baseUrl = 'http://localhost:3000';
+  const signed = await signCertificate(await readSnapshot((transaction) => draftCertificate(people, { issuedAt: new Date().toISOString(), baseUrl, transaction })));
   const transaction = await database().transaction();
   let written: string | null = null;
   try {
-    await issueCertificate({ ...people, issuedAt: new Date().toISOString(), baseUrl: 'http://localhost:3000', transaction, onFileWritten: (file) => (written = file) });
+    await issueCertificate({ parties: people, signed, baseUrl, transaction, onFileWritten: (file) => (written = file) });
   } finally {
     await transaction.rollback();
     if (written) await removeCertificateFile(written);

@@ -1,7 +1,8 @@
 import 'server-only';
-import { mkdir, readFile, readdir, rm, writeFile } from 'node:fs/promises';
+import { mkdir, readFile, readdir, rm } from 'node:fs/promises';
 import path from 'node:path';
 import { dataDirectory } from '@/lib/db/database-path';
+import { writeDurably } from '@/lib/storage/write-durably';
 
 // Certificates are stored by their id under the data directory, never under public/ and never by a user-given name.
 // The database keeps the path relative to the data directory, so a moved or restored data folder still works.
@@ -11,10 +12,11 @@ export function certificateRelativePath(certificateId: string): string {
   return path.join('certificates', `${certificateId}.pdf`);
 }
 
+/** Written under a temporary name and renamed, so a `.pdf` in the folder is always a whole file. */
 export async function writeCertificateFile(certificateId: string, pdf: Buffer): Promise<string> {
   const relative = certificateRelativePath(certificateId);
   await mkdir(dataDirectory('certificates'), { recursive: true });
-  await writeFile(dataDirectory(relative), pdf, { flag: 'wx' });
+  await writeDurably(dataDirectory(relative), pdf);
   return relative;
 }
 

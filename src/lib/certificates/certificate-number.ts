@@ -3,8 +3,9 @@ import { Op, type Transaction } from 'sequelize';
 import { Certificate } from '@/lib/db';
 
 /**
- * The next number of the year, SMC-2026-0001 onwards. Called inside the issuing transaction, which SQLite runs
- * IMMEDIATE (write lock from the start), so two countersignatures cannot draw the same number; UNIQUE guards it too.
+ * The next number of the year, SMC-2026-0001 onwards. Drawn first in a read, for the file to be made under; drawn
+ * again inside the issuing transaction, which SQLite runs IMMEDIATE (write lock from the start), where it must still
+ * be the same: so two countersignatures cannot store the same number. UNIQUE guards it too.
  */
 export async function nextCertificateNumber(issuedAt: string, transaction: Transaction): Promise<string> {
   const prefix = `SMC-${issuedAt.slice(0, 4)}-`;

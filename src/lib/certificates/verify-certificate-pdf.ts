@@ -1,6 +1,5 @@
 import 'server-only';
-import { sha256Hex } from '@/lib/revisions/revision-hashes';
-import { checkPdfSignature } from '@/lib/signing/check-pdf-signature';
+import { uploadedCertificateOffThread } from '@/lib/pdf-pool/render-off-thread';
 import { signingIdentity } from '@/lib/signing/signing-identity';
 import { lookupCertificate, type CertificateLookup } from './lookup-certificate';
 
@@ -22,20 +21,16 @@ export interface PdfVerification {
   sha256: string;
 }
 
-function claimedNumber(pdf: Buffer): string | null {
-  return /\((SMC-\d{4}-\d{4,})\)/.exec(pdf.toString('latin1'))?.[1] ?? null;
-}
-
 /**
  * The portal's own check of an uploaded certificate: the PKCS#7 signature over its byte ranges, the signer against
- * the portal's identity, the file's SHA-256 against the one stored at issue, and the certificate's status now.
+ * the portal's identity, the file's SHA-256 against the one stored at issue, and the certificate's status now. The
+ * file is read on the PDF pool, its bytes moved there: the caller must not use `pdf` afterwards.
  */
-export async function verifyCertificatePdf({ pdf }: { pdf: Buffer }): Promise<PdfVerification> {
-  const signature = checkPdfSignature(pdf);
-  const identity = await signingIdentity();
-  const sha256 = sha256Hex(pdf);
+export async function verifyCertificatePdf({ pdf }: { pdf: Uint8Array }): Promise<PdfVerification> {
+  const [reading, identity] = await Promise.all([uploadedCertificateOffThread(pdf), signingIdentity()]);
+  const { signature, sha256 } = reading;
   const issued = await lookupCertificate({ pdfSha256: sha256 });
-  const claimed = issued ? null : claimedNumber(pdf);
+  const claimed = issued ? null : reading.claimedNumber;
   const certificate = issued ?? (claimed ? await lookupCertificate({ number: claimed }) : null);
   const signedByPortal = signature.valid && signature.signerFingerprint === identity.fingerprint;
   const current = certificate?.status === 'issued';

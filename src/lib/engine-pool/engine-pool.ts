@@ -1,24 +1,22 @@
 import 'server-only';
 import os from 'node:os';
 import path from 'node:path';
-import { MessageChannel } from 'node:worker_threads';
-import Piscina from 'piscina';
 import { AppError, ThrottledError } from '@/lib/http/app-errors';
 import type { CaseResult } from '@/lib/hydraulics/case-result';
 import type { StructureRating } from '@/lib/hydraulics/structure-rating';
 import { ENGINE_VERSION } from '@/lib/hydraulics/version';
 import type { CaseInput } from '@/lib/validation/case-schema';
+import { boundedPool, positiveInteger } from '@/lib/worker-pool/bounded-pool';
 import { engineErrorOf, type EngineOutcome } from './engine-outcome';
 import type { EngineTask } from './engine-worker';
 import { caseTooLarge, caseTooSlow } from './too-large';
 
 // The engine is CPU-bound and synchronous: on the request thread one large case would hold every other request.
-// So it runs on worker threads, by default one per core but one (at least one), with a bounded queue and a time limit
-// per job, at a lower scheduling priority (nice). One core is left to the request thread, so that with the engine
-// saturated quick requests need not win the CPU back from the workers: on two cores the Harrowfield check takes some
-// 15 ms of engine time, while the portal answers an evaluation at a few tens a second, so one worker keeps up.
-
-const positiveInteger = (text: string | undefined) => (text && /^\d+$/.test(text) && Number(text) > 0 ? Number(text) : undefined);
+// So it runs on worker threads (src/lib/worker-pool/bounded-pool.ts), by default one per core but one (at least one),
+// with a bounded queue and a time limit per job, at a lower scheduling priority (nice). One core is left to the
+// request thread, so that with the engine saturated quick requests need not win the CPU back from the workers: on two
+// cores the Harrowfield check takes some 15 ms of engine time, while the portal answers an evaluation at a few tens a
+// second, so one worker keeps up.
 
 const THREADS = positiveInteger(process.env.ENGINE_THREADS) ?? Math.max(1, os.availableParallelism() - 1);
 /** Counted from the moment a worker starts the job, not from when it joined the queue. */
@@ -27,54 +25,27 @@ export const ENGINE_TIME_LIMIT_MS = positiveInteger(process.env.ENGINE_TIME_LIMI
 const QUEUE_LIMIT = positiveInteger(process.env.ENGINE_QUEUE_LIMIT) ?? os.availableParallelism() * 32;
 const RETRY_AFTER_SECONDS = 5;
 const utf8 = new TextDecoder();
-const WORKER_NICE_INCREMENT = 10;
 
 /** Built by src/cli/build-engine-worker.mjs; the same rule for where it lives is there. */
 function workerFile(): string {
   return process.env.SILLMARK_ENGINE_WORKER || path.join(/* turbopackIgnore: true */ process.cwd(), process.env.NEXT_DIST_DIR ?? '.next', 'engine-worker.mjs');
 }
 
-interface EnginePool {
-  piscina: Piscina<EngineTask, EngineOutcome>;
-  /** Jobs running or waiting. Counted here: piscina's own maxQueue does not count tasks that carry an AbortSignal. */
-  jobs: number;
-}
+const runEngineJob = boundedPool<EngineTask, EngineOutcome>({ name: 'enginePool', workerFile, threads: THREADS, queueLimit: QUEUE_LIMIT, timeLimitMs: ENGINE_TIME_LIMIT_MS });
 
-const POOL_KEY = Symbol.for('sillmark.enginePool');
-type PoolHolder = { [POOL_KEY]?: EnginePool };
-
-// Next may load this module once per route bundle; one pool per process keeps the thread count at THREADS.
-function enginePool(): EnginePool {
-  const holder = globalThis as PoolHolder;
-  holder[POOL_KEY] ??= {
-    piscina: new Piscina<EngineTask, EngineOutcome>({ filename: workerFile(), minThreads: 1, maxThreads: THREADS, idleTimeout: 60_000, niceIncrement: WORKER_NICE_INCREMENT, resourceLimits: { maxOldGenerationSizeMb: 512 } }),
-    jobs: 0,
-  };
-  return holder[POOL_KEY];
-}
-
-async function runOffThread(caseInput: CaseInput, cancelled?: AbortSignal, job: EngineTask['job'] = 'case'): Promise<EngineOutcome> {
-  const pool = enginePool();
-  if (pool.jobs >= THREADS + QUEUE_LIMIT) throw new ThrottledError('The engine is busy with other cases: try again in a few seconds.', RETRY_AFTER_SECONDS);
-  pool.jobs += 1;
-  const { port1, port2 } = new MessageChannel();
-  const deadline = new AbortController();
-  let timer: NodeJS.Timeout | undefined;
-  port1.once('message', () => (timer = setTimeout(() => deadline.abort(), ENGINE_TIME_LIMIT_MS)));
-  try {
-    // A client that has gone away (cancelled) needs no answer: its job leaves the queue or stops.
-    const signal = cancelled ? AbortSignal.any([deadline.signal, cancelled]) : deadline.signal;
-    return await pool.piscina.run({ caseInput, job, started: port2 }, { transferList: [port2], signal });
-  } catch (error) {
-    if (deadline.signal.aborted) throw caseTooSlow(caseInput, ENGINE_TIME_LIMIT_MS);
-    if (cancelled?.aborted) throw new AppError('The request was cancelled before the case was evaluated.', 400);
-    if (error instanceof Error && 'code' in error && error.code === 'ERR_WORKER_OUT_OF_MEMORY') throw caseTooLarge(caseInput);
-    throw error;
-  } finally {
-    pool.jobs -= 1;
-    clearTimeout(timer);
-    port1.close();
-  }
+function runOffThread(caseInput: CaseInput, cancelled?: AbortSignal, job: EngineTask['job'] = 'case'): Promise<EngineOutcome> {
+  return runEngineJob(
+    { caseInput, job },
+    {
+      cancelled,
+      refusals: {
+        busy: () => new ThrottledError('The engine is busy with other cases: try again in a few seconds.', RETRY_AFTER_SECONDS),
+        tooSlow: () => caseTooSlow(caseInput, ENGINE_TIME_LIMIT_MS),
+        outOfMemory: () => caseTooLarge(caseInput),
+        cancelled: () => new AppError('The request was cancelled before the case was evaluated.', 400),
+      },
+    },
+  );
 }
 
 /**

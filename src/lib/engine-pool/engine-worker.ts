@@ -1,17 +1,15 @@
 // The entry of each engine worker thread. Bundled to one plain .mjs file by src/cli/build-engine-worker.mjs, because
 // neither Next's server bundle nor vitest can hand a TypeScript file to a worker thread.
-import type { MessagePort } from 'node:worker_threads';
 import { move, transferableSymbol, valueSymbol } from 'piscina';
 import { evaluateCase, structureRating } from '@/lib/hydraulics';
 import type { CaseInput } from '@/lib/validation/case-schema';
+import { type StartSignal, startedWork } from '@/lib/worker-pool/start-signal';
 import { type EngineOutcome, outcomeOfError } from './engine-outcome';
 
-export interface EngineTask {
+export interface EngineTask extends StartSignal {
   caseInput: CaseInput;
   /** What to work out: the whole case (the default), or only the structure's rating across the events. */
   job?: 'case' | 'rating';
-  /** Told when the work starts, so that the time limit counts the run and not the wait in the queue. */
-  started: MessagePort;
 }
 
 const utf8 = new TextEncoder();
@@ -22,9 +20,9 @@ function movedBytes(resultJson: Uint8Array): EngineOutcome {
   return move({ [transferableSymbol]: [resultJson.buffer], [valueSymbol]: outcome }) as unknown as EngineOutcome;
 }
 
-export default function evaluateInWorker({ caseInput, job = 'case', started }: EngineTask): EngineOutcome {
-  started.postMessage('started');
-  started.close();
+export default function evaluateInWorker(task: EngineTask): EngineOutcome {
+  startedWork(task);
+  const { caseInput, job = 'case' } = task;
   try {
     return movedBytes(utf8.encode(JSON.stringify(job === 'rating' ? structureRating(caseInput) : evaluateCase(caseInput))));
   } catch (error) {

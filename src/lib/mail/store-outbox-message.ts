@@ -1,32 +1,17 @@
 import 'server-only';
 import { randomUUID } from 'node:crypto';
-import { mkdir, open, rename, rm } from 'node:fs/promises';
+import { mkdir, rm } from 'node:fs/promises';
 import path from 'node:path';
 import { simpleParser } from 'mailparser';
 import { UniqueConstraintError } from 'sequelize';
 import { OutboxMessage, database } from '@/lib/db';
 import { dataDirectory } from '@/lib/db/database-path';
+import { writeDurably } from '@/lib/storage/write-durably';
 
 export interface ReceivedMessage {
   raw: Buffer;
   envelopeFrom: string;
   envelopeTo: string[];
-}
-
-/**
- * Written under a temporary name, flushed to disk and then renamed: a crash mid-write leaves a `.tmp` file that the
- * file sweep removes, never a truncated `.eml` that looks whole.
- */
-async function writeDurably(finalPath: string, raw: Buffer): Promise<void> {
-  const temporary = `${finalPath}.${process.pid}.tmp`;
-  const file = await open(temporary, 'w');
-  try {
-    await file.writeFile(raw);
-    await file.sync();
-  } finally {
-    await file.close();
-  }
-  await rename(temporary, finalPath);
 }
 
 /**

@@ -1,14 +1,19 @@
 // The entry of each PDF worker thread. Bundled to one plain .mjs file by src/cli/build-pdf-worker.mjs, because
 // neither Next's server bundle nor vitest can hand a TypeScript file to a worker thread.
 import { move } from 'piscina';
+import { type UploadedCertificateReading, readUploadedCertificate } from '@/lib/certificates/read-uploaded-certificate';
 import { renderLetterPdf, renderLettersForPrint } from '@/lib/letters/render-letter-pdf';
 import { renderCalculationSheet } from '@/lib/pdf/calculation-sheet';
 import { renderCertificatePdf } from '@/lib/pdf/certificate-pdf';
 import { createSelfSignedIdentity } from '@/lib/signing/self-signed-identity';
 import { signPdf } from '@/lib/signing/sign-pdf';
+import { ownArrayBuffer } from '@/lib/worker-pool/own-array-buffer';
+import { startedWork } from '@/lib/worker-pool/start-signal';
 import type { CreatedIdentity, PdfJob, PdfTask } from './pdf-jobs';
 
-async function pdfOf(job: Exclude<PdfJob, { kind: 'signing-identity' }>): Promise<Buffer> {
+type PdfMaking = Exclude<PdfJob, { kind: 'signing-identity' | 'uploaded-certificate' }>;
+
+async function pdfOf(job: PdfMaking): Promise<Buffer> {
   switch (job.kind) {
     case 'certificate':
       return signPdf(await renderCertificatePdf(job.content), job.key, job.signature);
@@ -21,16 +26,11 @@ async function pdfOf(job: Exclude<PdfJob, { kind: 'signing-identity' }>): Promis
   }
 }
 
-/** The bytes in an ArrayBuffer of their own, which can be transferred: a Buffer may be a view into a shared pool. */
-function ownArrayBuffer(bytes: Buffer): ArrayBuffer {
-  if (bytes.byteOffset === 0 && bytes.byteLength === bytes.buffer.byteLength && bytes.buffer instanceof ArrayBuffer) return bytes.buffer;
-  return new Uint8Array(bytes).buffer;
-}
-
-export default async function renderInWorker({ job, started }: PdfTask): Promise<ArrayBuffer | CreatedIdentity> {
-  started.postMessage('started');
-  started.close();
+export default async function renderInWorker(task: PdfTask): Promise<ArrayBuffer | CreatedIdentity | UploadedCertificateReading> {
+  startedWork(task);
+  const { job } = task;
   if (job.kind === 'signing-identity') return createSelfSignedIdentity(job.passphrase);
+  if (job.kind === 'uploaded-certificate') return readUploadedCertificate(Buffer.from(job.pdf));
   // move() hands the buffer over to the request thread instead of copying it.
   return move(ownArrayBuffer(await pdfOf(job))) as ArrayBuffer;
 }

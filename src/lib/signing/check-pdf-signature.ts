@@ -2,7 +2,7 @@ import 'server-only';
 import { createHash, createVerify } from 'node:crypto';
 import forge from 'node-forge';
 import { locatePdfSignature } from './pdf-signature';
-import { certificateFingerprint } from './signing-identity';
+import { certificateFingerprint } from './certificate-fingerprint';
 
 export interface PdfSignatureCheck {
   present: boolean;
@@ -42,7 +42,7 @@ const failed = (present: boolean, coversWholeDocument: boolean, problem: string)
 /**
  * Checks a detached PKCS#7 PDF signature without trusting the file: the digest of the byte ranges must equal the
  * signed message digest, and the signed attributes (re-encoded as the DER SET they were signed as, RFC 5652 §5.4)
- * must verify with the public key of a certificate carried in the signature.
+ * must verify with the public key of a certificate carried in the signature. CPU work: the portal runs it on the PDF pool.
  */
 export function checkPdfSignature(pdf: Buffer): PdfSignatureCheck {
   const location = locatePdfSignature(pdf);

@@ -5,6 +5,7 @@ import path from 'node:path';
 import forge from 'node-forge';
 import { dataDirectory } from '@/lib/db/database-path';
 import { signingIdentityOffThread } from '@/lib/pdf-pool/render-off-thread';
+import { certificateFingerprint } from './certificate-fingerprint';
 
 /** The portal's signing identity: what a hosted signing service would hold for it. */
 export interface SigningIdentity {
@@ -27,11 +28,6 @@ const cache = globalThis as unknown as { sillmarkSigningIdentity?: Map<string, P
 /** Where the identity lives: under the data directory, which git ignores; never under public/. */
 export function signingIdentityFile(): string {
   return dataDirectory('signing', 'identity.json');
-}
-
-export function certificateFingerprint(certificate: forge.pki.Certificate): string {
-  const der = forge.asn1.toDer(forge.pki.certificateToAsn1(certificate)).getBytes();
-  return forge.md.sha256.create().update(der).digest().toHex();
 }
 
 function fromStored(stored: StoredIdentity): SigningIdentity {

@@ -14,6 +14,5 @@ export const POST = authorizedRoute(ANY_ROLE, async (request) => {
   });
   const parsed = certificatePdfFileSchema.safeParse(form.get('file'));
   if (!parsed.success) throw new InvalidRequestError([{ path: 'file', message: parsed.error.issues[0]?.message ?? 'Choose the certificate PDF file to verify.' }]);
-  const pdf = Buffer.from(await parsed.data.arrayBuffer());
-  return Response.json(await verifyCertificatePdf({ pdf }));
+  return Response.json(await verifyCertificatePdf({ pdf: new Uint8Array(await parsed.data.arrayBuffer()) }));
 });
