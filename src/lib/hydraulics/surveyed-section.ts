@@ -26,8 +26,6 @@ export interface SurveyedSection extends FlowSection {
   readonly jumpDepths: readonly Metres[];
 }
 
-const SUB_AREAS = ['left', 'channel', 'right'] as const;
-
 function highestGroundAt(ground: SurveyedGround, station: Metres): Metres {
   let highest = -Infinity;
   for (let i = 0; i < ground.stations.length; i++) if (ground.stations[i] === station) highest = Math.max(highest, ground.elevations[i]);
@@ -69,45 +67,61 @@ export function surveyedSection(spec: SurveyedSectionSpec, opts: { field?: strin
  * two checked surveys are most of a refined reach, and checking each again would cost as much as tabulating it.
  */
 export function sectionOfGround(ground: SurveyedGround): SurveyedSection {
-  const { elevations } = ground;
-  let invertLevel = elevations[0];
-  for (let i = 1; i < elevations.length; i++) invertLevel = Math.min(invertLevel, elevations[i]);
-  const lowerEndLevel = Math.min(elevations[0], elevations[elevations.length - 1]);
-  const maxDepth = lowerEndLevel - invertLevel;
-  const table = new SurveyTable({ stations: ground.stations, elevations, segmentSubAreas: segmentSubAreas(ground), order: ground.order });
-  const jumpDepths = depthsOfLevels(table.jumpLevels, invertLevel, maxDepth);
-  const roughness = SUB_AREAS.map((subArea) => ground.roughness[subArea]);
+  return new TabulatedSection(ground);
+}
 
-  function stateAtLevel(level: Metres): SectionState {
-    requireFinite(level, 'level');
-    if (level < invertLevel) throw new InvalidInputError('level', `must not be below the lowest ground point (${invertLevel} m)`);
-    const { area, wettedPerimeter, topWidth, firstMoment, conveyance, energyCoefficient } = flowAtLevel(table, roughness, level, flow);
-    return sectionState({ depth: level - invertLevel, area, wettedPerimeter, topWidth, firstMoment }, conveyance, energyCoefficient, level > lowerEndLevel);
+/**
+ * A class, not an object of closures. Why: a march calls the same few methods on thousands of sections, and sections
+ * that share one hidden class and one set of functions keep those calls monomorphic; closures would be five per section.
+ */
+class TabulatedSection implements SurveyedSection {
+  readonly shape = 'surveyed' as const;
+  readonly invertLevel: Metres;
+  readonly maxDepth: Metres;
+  readonly lowerEndLevel: Metres;
+  readonly bankLevels: { left: Metres; right: Metres };
+  readonly breakpointDepths: readonly Metres[];
+  readonly jumpDepths: readonly Metres[];
+  private readonly table: SurveyTable;
+  /** Manning's n of the left overbank, the channel and the right overbank. */
+  private readonly roughness: readonly number[];
+
+  constructor(ground: SurveyedGround) {
+    const { elevations } = ground;
+    let invertLevel = elevations[0];
+    for (let i = 1; i < elevations.length; i++) invertLevel = Math.min(invertLevel, elevations[i]);
+    this.invertLevel = invertLevel;
+    this.lowerEndLevel = Math.min(elevations[0], elevations[elevations.length - 1]);
+    this.maxDepth = this.lowerEndLevel - invertLevel;
+    this.table = new SurveyTable({ stations: ground.stations, elevations, segmentSubAreas: segmentSubAreas(ground), order: ground.order });
+    this.jumpDepths = depthsOfLevels(this.table.jumpLevels, invertLevel, this.maxDepth);
+    this.breakpointDepths = depthsOfLevels(this.table.levels, invertLevel, this.maxDepth);
+    this.roughness = [ground.roughness.left, ground.roughness.channel, ground.roughness.right];
+    this.bankLevels = { left: highestGroundAt(ground, ground.banks.left), right: highestGroundAt(ground, ground.banks.right) };
   }
 
-  return {
-    shape: 'surveyed',
-    invertLevel,
-    maxDepth,
-    lowerEndLevel,
-    bankLevels: { left: highestGroundAt(ground, ground.banks.left), right: highestGroundAt(ground, ground.banks.right) },
-    breakpointDepths: depthsOfLevels(table.levels, invertLevel, maxDepth),
-    jumpDepths,
-    stateAtLevel,
-    stateAtDepth(depth: Metres): SectionState {
-      requireDepth(depth);
-      return { ...stateAtLevel(invertLevel + depth), depth };
-    },
-    sampleInto(depth: Metres, out: SectionSample): void {
-      requireDepth(depth);
-      flowAtLevel(table, roughness, invertLevel + depth, flow);
-      out.area = flow.area;
-      out.topWidth = flow.topWidth;
-      out.conveyance = flow.conveyance;
-      out.energyCoefficient = flow.energyCoefficient;
-    },
-    froudeFactorBoundsInto(from: Metres, to: Metres, out: FroudeFactorBounds): void {
-      froudeFactorBoundsBetween(table, roughness, invertLevel, invertLevel + from, invertLevel + to, out);
-    },
-  };
+  stateAtLevel(level: Metres): SectionState {
+    requireFinite(level, 'level');
+    if (level < this.invertLevel) throw new InvalidInputError('level', `must not be below the lowest ground point (${this.invertLevel} m)`);
+    const { area, wettedPerimeter, topWidth, firstMoment, conveyance, energyCoefficient } = flowAtLevel(this.table, this.roughness, level, flow);
+    return sectionState({ depth: level - this.invertLevel, area, wettedPerimeter, topWidth, firstMoment }, conveyance, energyCoefficient, level > this.lowerEndLevel);
+  }
+
+  stateAtDepth(depth: Metres): SectionState {
+    requireDepth(depth);
+    return { ...this.stateAtLevel(this.invertLevel + depth), depth };
+  }
+
+  sampleInto(depth: Metres, out: SectionSample): void {
+    requireDepth(depth);
+    flowAtLevel(this.table, this.roughness, this.invertLevel + depth, flow);
+    out.area = flow.area;
+    out.topWidth = flow.topWidth;
+    out.conveyance = flow.conveyance;
+    out.energyCoefficient = flow.energyCoefficient;
+  }
+
+  froudeFactorBoundsInto(from: Metres, to: Metres, out: FroudeFactorBounds): void {
+    froudeFactorBoundsBetween(this.table, this.roughness, this.invertLevel, this.invertLevel + from, this.invertLevel + to, out);
+  }
 }
