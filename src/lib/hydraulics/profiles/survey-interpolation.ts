@@ -11,8 +11,8 @@ import { type LaidOutSurvey, laidOut, stationAt } from './survey-layout';
  * list for all, as a pair of surveys is matched once per reach and a list per position was most of that work's garbage.
  */
 function elevationsAlong(survey: LaidOutSurvey, at: readonly number[]): { levels: Metres[]; starts: number[] } {
-  const { points, positions } = survey;
-  const last = points.length - 1;
+  const { elevations, positions } = survey;
+  const last = elevations.length - 1;
   const levels: Metres[] = [];
   const starts: number[] = [];
   let i = 0;
@@ -20,12 +20,12 @@ function elevationsAlong(survey: LaidOutSurvey, at: readonly number[]): { levels
     starts.push(levels.length);
     while (i <= last && positions[i] < u) i++;
     if (i <= last && positions[i] === u) {
-      for (let j = i; j <= last && positions[j] === u; j++) levels.push(points[j].elevation);
-    } else if (i > last) levels.push(points[last].elevation);
-    else if (i === 0) levels.push(points[0].elevation);
+      for (let j = i; j <= last && positions[j] === u; j++) levels.push(elevations[j]);
+    } else if (i > last) levels.push(elevations[last]);
+    else if (i === 0) levels.push(elevations[0]);
     else {
       const t = (u - positions[i - 1]) / (positions[i] - positions[i - 1]);
-      levels.push(points[i - 1].elevation + t * (points[i].elevation - points[i - 1].elevation));
+      levels.push(elevations[i - 1] + t * (elevations[i] - elevations[i - 1]));
     }
   }
   starts.push(levels.length);
