@@ -1,5 +1,6 @@
 // A surveyed (station–elevation) cross-section as a FlowSection, with left overbank / channel / right overbank.
 import { InvalidInputError, requireFinite } from './errors';
+import { allocatedNumbers } from './number-arena';
 import { SCRATCH_SLOTS, scratchNumbers } from './scratch-numbers';
 import type { FlowSection, SectionState } from './section';
 import type { FroudeFactorBounds, SectionSample } from './section-sample';
@@ -45,11 +46,12 @@ function segmentSubAreas(ground: SurveyedGround): Float64Array {
   return subAreas;
 }
 
-/** Distinct depths in (0, maxDepth] of the table's levels, ascending (the levels are every ground elevation, ascending). */
-function depthsOfLevels(levels: ArrayLike<Metres>, invertLevel: Metres, maxDepth: Metres): Metres[] {
+/** Distinct depths in (0, maxDepth] of the table's levels (all of them, or those where it jumps), ascending. */
+function depthsOfLevels(table: SurveyTable, onlyJumps: boolean, invertLevel: Metres, maxDepth: Metres): Metres[] {
   const depths: Metres[] = [];
-  for (let k = 0; k < levels.length; k++) {
-    const depth = levels[k] - invertLevel;
+  for (let k = 0; k < table.levelCount; k++) {
+    if (onlyJumps && !table.jumpsAbove(k)) continue;
+    const depth = table.levelAt(k) - invertLevel;
     if (depth > 0 && depth <= maxDepth && depth !== depths[depths.length - 1]) depths.push(depth);
   }
   return depths;
@@ -70,41 +72,69 @@ export function sectionOfGround(ground: SurveyedGround): SurveyedSection {
   return new TabulatedSection(ground);
 }
 
+/** Where a section's own numbers stand in its run (see number-arena.ts): Manning's n first, as flowAtLevel reads them. */
+const AT = { roughness: 0, invertLevel: 3, lowerEndLevel: 4, leftBankLevel: 5, rightBankLevel: 6 } as const;
+const SECTION_NUMBERS = 7;
+
 /**
  * A class, not an object of closures. Why: a march calls the same few methods on thousands of sections, and sections
- * that share one hidden class and one set of functions keep those calls monomorphic; closures would be five per section.
+ * that share one hidden class and one set of functions keep those calls monomorphic. Its numbers stand in a shared
+ * block beside its table's and the lists of depths are made when asked for: a refined reach keeps some 1,600
+ * sections, and every small object each keeps (a boxed number, a short list) is work for every collection.
  */
 class TabulatedSection implements SurveyedSection {
   readonly shape = 'surveyed' as const;
-  readonly invertLevel: Metres;
-  readonly maxDepth: Metres;
-  readonly lowerEndLevel: Metres;
-  readonly bankLevels: { left: Metres; right: Metres };
-  readonly breakpointDepths: readonly Metres[];
-  readonly jumpDepths: readonly Metres[];
   private readonly table: SurveyTable;
-  /** Manning's n of the left overbank, the channel and the right overbank. */
-  private readonly roughness: readonly number[];
+  private readonly numbers: Float64Array;
+  private readonly at: number;
 
   constructor(ground: SurveyedGround) {
     const { elevations } = ground;
     let invertLevel = elevations[0];
     for (let i = 1; i < elevations.length; i++) invertLevel = Math.min(invertLevel, elevations[i]);
-    this.invertLevel = invertLevel;
-    this.lowerEndLevel = Math.min(elevations[0], elevations[elevations.length - 1]);
-    this.maxDepth = this.lowerEndLevel - invertLevel;
+    const { numbers, offset } = allocatedNumbers(SECTION_NUMBERS);
+    this.numbers = numbers;
+    this.at = offset;
+    numbers[offset + AT.roughness] = ground.roughness.left;
+    numbers[offset + AT.roughness + 1] = ground.roughness.channel;
+    numbers[offset + AT.roughness + 2] = ground.roughness.right;
+    numbers[offset + AT.invertLevel] = invertLevel;
+    numbers[offset + AT.lowerEndLevel] = Math.min(elevations[0], elevations[elevations.length - 1]);
+    numbers[offset + AT.leftBankLevel] = highestGroundAt(ground, ground.banks.left);
+    numbers[offset + AT.rightBankLevel] = highestGroundAt(ground, ground.banks.right);
     this.table = new SurveyTable({ stations: ground.stations, elevations, segmentSubAreas: segmentSubAreas(ground), order: ground.order });
-    this.jumpDepths = depthsOfLevels(this.table.jumpLevels, invertLevel, this.maxDepth);
-    this.breakpointDepths = depthsOfLevels(this.table.levels, invertLevel, this.maxDepth);
-    this.roughness = [ground.roughness.left, ground.roughness.channel, ground.roughness.right];
-    this.bankLevels = { left: highestGroundAt(ground, ground.banks.left), right: highestGroundAt(ground, ground.banks.right) };
+  }
+
+  get invertLevel(): Metres {
+    return this.numbers[this.at + AT.invertLevel];
+  }
+
+  get lowerEndLevel(): Metres {
+    return this.numbers[this.at + AT.lowerEndLevel];
+  }
+
+  get maxDepth(): Metres {
+    return this.lowerEndLevel - this.invertLevel;
+  }
+
+  get bankLevels(): { left: Metres; right: Metres } {
+    return { left: this.numbers[this.at + AT.leftBankLevel], right: this.numbers[this.at + AT.rightBankLevel] };
+  }
+
+  get breakpointDepths(): readonly Metres[] {
+    return depthsOfLevels(this.table, false, this.invertLevel, this.maxDepth);
+  }
+
+  get jumpDepths(): readonly Metres[] {
+    return depthsOfLevels(this.table, true, this.invertLevel, this.maxDepth);
   }
 
   stateAtLevel(level: Metres): SectionState {
     requireFinite(level, 'level');
-    if (level < this.invertLevel) throw new InvalidInputError('level', `must not be below the lowest ground point (${this.invertLevel} m)`);
-    const { area, wettedPerimeter, topWidth, firstMoment, conveyance, energyCoefficient } = flowAtLevel(this.table, this.roughness, level, flow);
-    return sectionState({ depth: level - this.invertLevel, area, wettedPerimeter, topWidth, firstMoment }, conveyance, energyCoefficient, level > this.lowerEndLevel);
+    const { invertLevel } = this;
+    if (level < invertLevel) throw new InvalidInputError('level', `must not be below the lowest ground point (${invertLevel} m)`);
+    const { area, wettedPerimeter, topWidth, firstMoment, conveyance, energyCoefficient } = flowAtLevel(this.table, this.numbers, this.at + AT.roughness, level, flow);
+    return sectionState({ depth: level - invertLevel, area, wettedPerimeter, topWidth, firstMoment }, conveyance, energyCoefficient, level > this.lowerEndLevel);
   }
 
   stateAtDepth(depth: Metres): SectionState {
@@ -114,7 +144,7 @@ class TabulatedSection implements SurveyedSection {
 
   sampleInto(depth: Metres, out: SectionSample): void {
     requireDepth(depth);
-    flowAtLevel(this.table, this.roughness, this.invertLevel + depth, flow);
+    flowAtLevel(this.table, this.numbers, this.at + AT.roughness, this.invertLevel + depth, flow);
     out.area = flow.area;
     out.topWidth = flow.topWidth;
     out.conveyance = flow.conveyance;
@@ -122,6 +152,7 @@ class TabulatedSection implements SurveyedSection {
   }
 
   froudeFactorBoundsInto(from: Metres, to: Metres, out: FroudeFactorBounds): void {
-    froudeFactorBoundsBetween(this.table, this.roughness, this.invertLevel, this.invertLevel + from, this.invertLevel + to, out);
+    const { invertLevel } = this;
+    froudeFactorBoundsBetween(this.table, this.numbers, this.at + AT.roughness, invertLevel, invertLevel + from, invertLevel + to, out);
   }
 }
