@@ -51,7 +51,8 @@ export class SurveyTable {
     this.values = numbers;
     this.levelsAt = offset;
     this.base = offset + 2 * count;
-    const [lowest, highest] = [found.levels[0], found.levels[count - 1]];
+    const lowest = found.levels[0];
+    const highest = found.levels[count - 1];
     const changes = levelChanges(ground, found.pointLevels, count, Math.max(highest - lowest, Math.abs(lowest), Math.abs(highest), Number.MIN_VALUE));
     for (let j = 0; j < SUB_AREA_COUNT; j++) this.accumulate(j, changes);
     for (let k = 0; k < count; k++) numbers[offset + count + k] = jumpsAt(changes, k) ? 1 : 0;

@@ -78,7 +78,8 @@ export function stationBetween(a: ReachStation, b: ReachStation, weight: number)
   const distanceUpstream = a.distanceUpstream + weight * (b.distanceUpstream - a.distanceUpstream);
   const bankLevel = a.bankLevel !== undefined && b.bankLevel !== undefined ? a.bankLevel + weight * (b.bankLevel - a.bankLevel) : undefined;
   if (a.section === b.section) return { distanceUpstream, section: a.section, bedLevel: a.bedLevel + weight * (b.bedLevel - a.bedLevel), bankLevel };
-  const [from, to] = [surveyOf(a), surveyOf(b)];
+  const from = surveyOf(a);
+  const to = surveyOf(b);
   if (from === undefined || to === undefined) throw new InvalidInputError('reach.sections', 'differing sections need surveys to be interpolated');
   const section = sectionOfGround(interpolatedGround(from, to, weight));
   // Both fields present from the start, so that writing the survey out later keeps the station's shape.
