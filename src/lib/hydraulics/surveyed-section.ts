@@ -72,6 +72,13 @@ export function sectionOfGround(ground: SurveyedGround): SurveyedSection {
   return new TabulatedSection(ground);
 }
 
+/**
+ * The lists of depths last made, for one section only. Why: a critical-depth search reads them a few times over for
+ * the section in hand, and keeping them for every section is what they are made when asked for to avoid.
+ */
+let lastBreakpoints: { section: SurveyedSection | null; depths: readonly Metres[] } = { section: null, depths: [] };
+let lastJumps: { section: SurveyedSection | null; depths: readonly Metres[] } = { section: null, depths: [] };
+
 /** Where a section's own numbers stand in its run (see number-arena.ts): Manning's n first, as flowAtLevel reads them. */
 const AT = { roughness: 0, invertLevel: 3, lowerEndLevel: 4, leftBankLevel: 5, rightBankLevel: 6 } as const;
 const SECTION_NUMBERS = 7;
@@ -122,11 +129,13 @@ class TabulatedSection implements SurveyedSection {
   }
 
   get breakpointDepths(): readonly Metres[] {
-    return depthsOfLevels(this.table, false, this.invertLevel, this.maxDepth);
+    if (lastBreakpoints.section !== this) lastBreakpoints = { section: this, depths: depthsOfLevels(this.table, false, this.invertLevel, this.maxDepth) };
+    return lastBreakpoints.depths;
   }
 
   get jumpDepths(): readonly Metres[] {
-    return depthsOfLevels(this.table, true, this.invertLevel, this.maxDepth);
+    if (lastJumps.section !== this) lastJumps = { section: this, depths: depthsOfLevels(this.table, true, this.invertLevel, this.maxDepth) };
+    return lastJumps.depths;
   }
 
   stateAtLevel(level: Metres): SectionState {
