@@ -53,9 +53,3 @@ export function levelChanges(ground: SurveyGround, pointLevels: ArrayLike<number
   }
   return changes;
 }
-
-/** Whether top width or perimeter jumps just above level k in any sub-area (flat ground starts to flood there). */
-export function jumpsAt(changes: Float64Array, k: number): boolean {
-  for (let j = 0, at = 4 * SUB_AREA_COUNT * k; j < SUB_AREA_COUNT; j++, at += 4) if (changes[at] > 0 || changes[at + 1] > 0) return true;
-  return false;
-}

@@ -1,10 +1,14 @@
 // A surveyed section's wetted geometry tabulated once against the water level, exactly, for every sub-area.
 import { groundLevels } from './ground-levels';
 import { allocatedNumbers } from './number-arena';
-import { type SurveyGround, SUB_AREA_COUNT, jumpsAt, levelChanges } from './surveyed-table-changes';
+import { type SurveyGround, SUB_AREA_COUNT as SUB_AREAS_IN_CHANGES, levelChanges } from './surveyed-table-changes';
 import type { Metres } from './units';
 
 export type { SurveyGround } from './surveyed-table-changes';
+
+// Read once into this module: the loops below use it at every level, and under vitest's module loader (which the
+// benchmark runs in) every use of an imported binding is a property read through a getter.
+const SUB_AREA_COUNT = SUB_AREAS_IN_CHANGES;
 
 /** Wetted area, perimeter, top width and first moment of one sub-area at one level (the same four as WettedPiece). */
 export interface PieceValues {
@@ -12,6 +16,16 @@ export interface PieceValues {
   wettedPerimeter: number;
   topWidth: number;
   firstMoment: number;
+}
+
+/**
+ * Whether top width or perimeter jumps just above level k in any sub-area (flat ground starts to flood there). Here
+ * rather than beside levelChanges: it is asked once per level of every table, and a call into another module costs
+ * more than the test under vitest's module loader, which the benchmark runs in.
+ */
+function jumpsAt(changes: Float64Array, k: number): boolean {
+  for (let j = 0, at = 4 * SUB_AREA_COUNT * k; j < SUB_AREA_COUNT; j++, at += 4) if (changes[at] > 0 || changes[at + 1] > 0) return true;
+  return false;
 }
 
 /** Numbers per level: the level, 1 if the top width or the perimeter jumps just above it, and six per sub-area. */
