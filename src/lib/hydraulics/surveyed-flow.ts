@@ -69,8 +69,8 @@ function cubedAreaOverWidth(area: number, topWidth: number, rise: Metres): numbe
 }
 
 /**
- * Bounds on αT/A³ holding at every level in [from, to] (roughness as for flowAtLevel). Every piece of ground is wet over a length and a width that
- * never shrink as the water rises (surveyed-table.ts), so each sub-area's A, P and T at `from` and at `to` bound them
+ * Bounds on αT/A³ holding at every level in [from, to] (roughness as for flowAtLevel). Every piece of ground is wet
+ * over a length and a width that never shrink as the water rises (surveyed-table.ts), so each sub-area's A, P and T at `from` and at `to` bound them
  * in between. With vᵢ = Rᵢ^(2/3)/nᵢ, dividedEnergyCoefficient's α is the greater of 1 and (Σ Aᵢvᵢ³)·A²/K³, so
  * αT/A³ ≤ T(to)·max(1/A(from)³, (Σ Aᵢ(to)Rᵢ,most²/nᵢ³)/(A(from)·K_least³)), where Rᵢ,most is the lesser of
  * Aᵢ(to)/Pᵢ(from) and the depth (Aᵢ ≤ Tᵢ·depth ≤ Pᵢ·depth) and K_least = Σ Aᵢ(from)(Aᵢ(from)/Pᵢ(to))^(2/3)/nᵢ;
