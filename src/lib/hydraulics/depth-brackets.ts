@@ -12,7 +12,8 @@ const MAX_HALVINGS = 1100;
 export const DEEPEST_OPEN_DEPTH: Metres = 1e5;
 
 export function hasBreakpoints(section: FlowSection): section is FlowSection & { breakpointDepths: readonly Metres[] } {
-  return 'breakpointDepths' in section && Array.isArray((section as { breakpointDepths?: unknown }).breakpointDepths);
+  // Asked by name only: a surveyed section makes the list each time it is read.
+  return 'breakpointDepths' in section;
 }
 
 /**

@@ -38,14 +38,17 @@ function dividedEnergyCoefficient(area: number, conveyance: number): number {
   return Number.isFinite(alpha) ? Math.max(1, alpha) : 1;
 }
 
-/** Fills `out` at `level`; roughness holds Manning's n of the left overbank, the channel and the right overbank. */
-export function flowAtLevel(table: SurveyTable, roughness: readonly number[], level: Metres, out: FlowAtLevel): FlowAtLevel {
+/**
+ * Fills `out` at `level`. Manning's n of the left overbank, the channel and the right overbank are roughness[at] to
+ * roughness[at + 2]: a section keeps them beside its other numbers (see surveyed-section.ts).
+ */
+export function flowAtLevel(table: SurveyTable, roughness: ArrayLike<number>, at: number, level: Metres, out: FlowAtLevel): FlowAtLevel {
   const k = table.interval(level);
   out.area = out.wettedPerimeter = out.topWidth = out.firstMoment = out.conveyance = 0;
   for (let j = 0; j < 3; j++) {
     table.fill(k, j, level, piece);
     subAreaAreas[j] = piece.area;
-    subAreaConveyances[j] = manningConveyance(piece.area, piece.wettedPerimeter, roughness[j]);
+    subAreaConveyances[j] = manningConveyance(piece.area, piece.wettedPerimeter, roughness[at + j]);
     out.conveyance += subAreaConveyances[j];
     out.area += piece.area;
     out.wettedPerimeter += piece.wettedPerimeter;
@@ -66,19 +69,25 @@ function cubedAreaOverWidth(area: number, topWidth: number, rise: Metres): numbe
 }
 
 /**
- * Bounds on αT/A³ holding at every level in [from, to]. Every piece of ground is wet over a length and a width that
- * never shrink as the water rises (surveyed-table.ts), so each sub-area's A, P and T at `from` and at `to` bound them
+ * Bounds on αT/A³ holding at every level in [from, to] (roughness as for flowAtLevel). Every piece of ground is wet
+ * over a length and a width that never shrink as the water rises (surveyed-table.ts), so each sub-area's A, P and T at `from` and at `to` bound them
  * in between. With vᵢ = Rᵢ^(2/3)/nᵢ, dividedEnergyCoefficient's α is the greater of 1 and (Σ Aᵢvᵢ³)·A²/K³, so
  * αT/A³ ≤ T(to)·max(1/A(from)³, (Σ Aᵢ(to)Rᵢ,most²/nᵢ³)/(A(from)·K_least³)), where Rᵢ,most is the lesser of
  * Aᵢ(to)/Pᵢ(from) and the depth (Aᵢ ≤ Tᵢ·depth ≤ Pᵢ·depth) and K_least = Σ Aᵢ(from)(Aᵢ(from)/Pᵢ(to))^(2/3)/nᵢ;
  * and, α being at least 1, αT/A³ ≥ T(from)/A(to)³, and ≥ T/(A(from) + T·(to − from))³ (as A ≤ A(from) + T·rise), whose
  * least over T between T(from) and T(to) is at one of the two (it falls and then rises with T).
  */
-export function froudeFactorBoundsBetween(table: SurveyTable, roughness: readonly number[], invertLevel: Metres, from: Metres, to: Metres, out: FroudeFactorBounds): FroudeFactorBounds {
+export function froudeFactorBoundsBetween(table: SurveyTable, roughness: ArrayLike<number>, at: number, invertLevel: Metres, from: Metres, to: Metres, out: FroudeFactorBounds): FroudeFactorBounds {
   const kFrom = table.interval(from);
   const kTo = table.interval(to);
   const depth = to - invertLevel;
-  let [leastArea, mostArea, leastTopWidth, mostTopWidth, leastConveyance, mostCubedVelocityArea] = [0, 0, 0, 0, 0, 0];
+  // Six declarations, not one destructured list: destructuring walks an iterator, garbage at every call.
+  let leastArea = 0;
+  let mostArea = 0;
+  let leastTopWidth = 0;
+  let mostTopWidth = 0;
+  let leastConveyance = 0;
+  let mostCubedVelocityArea = 0;
   for (let j = 0; j < 3; j++) {
     table.fill(kFrom, j, from, lower);
     table.fill(kTo, j, to, upper);
@@ -86,10 +95,10 @@ export function froudeFactorBoundsBetween(table: SurveyTable, roughness: readonl
     mostArea += upper.area;
     leastTopWidth += lower.topWidth;
     mostTopWidth += upper.topWidth;
-    leastConveyance += manningConveyance(lower.area, upper.wettedPerimeter, roughness[j]);
+    leastConveyance += manningConveyance(lower.area, upper.wettedPerimeter, roughness[at + j]);
     if (upper.area > 0) {
       const radius = lower.wettedPerimeter > 0 ? Math.min(depth, upper.area / lower.wettedPerimeter) : depth;
-      const n = roughness[j];
+      const n = roughness[at + j];
       mostCubedVelocityArea += (upper.area * radius * radius) / (n * n * n);
     }
   }

@@ -28,8 +28,8 @@ function checkedPoints(points: unknown, field: string): { station: Metres; eleva
       requireFinite(point[0], `${at}.station`);
       requireFinite(point[1], `${at}.elevation`);
     }
-    const [station, elevation] = point as [number, number];
-    return { station, elevation };
+    // Indexed, not destructured: destructuring walks an iterator, an object per point of every survey.
+    return { station: (point as [number, number])[0], elevation: (point as [number, number])[1] };
   });
   checked.forEach((point, i) => {
     if (i > 0 && point.station < checked[i - 1].station) {
@@ -81,16 +81,4 @@ export function validatedSurvey(spec: SurveyedSectionSpec, field: string): Valid
   const roughness = checkedRoughness(spec.manningN, field);
   const banks = checkedBanks(spec, points[0].station, points[points.length - 1].station, field);
   return { points, roughness, banks };
-}
-
-type GroundPoint = ValidatedSurvey['points'][number];
-
-/** The ground with a point at `station` (on the line between its neighbours), so that a bank station is a vertex. */
-export function withGroundPointAt(points: GroundPoint[], station: Metres): GroundPoint[] {
-  if (points.some((p) => p.station === station)) return points;
-  const i = points.findIndex((p) => p.station > station);
-  const a = points[i - 1];
-  const b = points[i];
-  const elevation = a.elevation + ((station - a.station) * (b.elevation - a.elevation)) / (b.station - a.station);
-  return [...points.slice(0, i), { station, elevation }, ...points.slice(i)];
 }

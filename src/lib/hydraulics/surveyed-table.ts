@@ -1,8 +1,14 @@
 // A surveyed section's wetted geometry tabulated once against the water level, exactly, for every sub-area.
 import { groundLevels } from './ground-levels';
 import { allocatedNumbers } from './number-arena';
-import { SCRATCH_SLOTS, scratchNumbers } from './scratch-numbers';
+import { type SurveyGround, SUB_AREA_COUNT as SUB_AREAS_IN_CHANGES, levelChanges } from './surveyed-table-changes';
 import type { Metres } from './units';
+
+export type { SurveyGround } from './surveyed-table-changes';
+
+// Read once into this module: the loops below use it at every level, and under vitest's module loader (which the
+// benchmark runs in) every use of an imported binding is a property read through a getter.
+const SUB_AREA_COUNT = SUB_AREAS_IN_CHANGES;
 
 /** Wetted area, perimeter, top width and first moment of one sub-area at one level (the same four as WettedPiece). */
 export interface PieceValues {
@@ -13,18 +19,17 @@ export interface PieceValues {
 }
 
 /**
- * Ground points across a section, left to right, and per point i ≥ 1 the sub-area (0, 1 or 2) of the segment from
- * point i − 1 to point i; −1 leaves that segment out of every sub-area.
+ * Whether top width or perimeter jumps just above level k in any sub-area (flat ground starts to flood there). Here
+ * rather than beside levelChanges: it is asked once per level of every table, and a call into another module costs
+ * more than the test under vitest's module loader, which the benchmark runs in.
  */
-export interface SurveyGround {
-  stations: ArrayLike<Metres>;
-  elevations: ArrayLike<Metres>;
-  segmentSubAreas: ArrayLike<number>;
-  /** The point indices by elevation as a neighbouring section had them, sorted here in place (see ground-levels.ts). */
-  order?: number[];
+function jumpsAt(changes: Float64Array, k: number): boolean {
+  for (let j = 0, at = 4 * SUB_AREA_COUNT * k; j < SUB_AREA_COUNT; j++, at += 4) if (changes[at] > 0 || changes[at + 1] > 0) return true;
+  return false;
 }
 
-const SUB_AREA_COUNT = 3;
+/** Numbers per level: the level, 1 if the top width or the perimeter jumps just above it, and six per sub-area. */
+const NUMBERS_PER_LEVEL = 2 + 6 * SUB_AREA_COUNT;
 
 /**
  * Between two consecutive ground elevations every piece of ground is dry, wholly wet, or wet over a fraction that
@@ -36,75 +41,51 @@ const SUB_AREA_COUNT = 3;
  * levels; clipping every piece of ground each time costs a pass over the survey, this a binary search.
  */
 export class SurveyTable {
-  /** Distinct ground elevations, ascending. */
-  readonly levels: Float64Array;
-  /** The levels just above which the top width or the wetted perimeter jumps (flat ground starts to flood), ascending. */
-  readonly jumpLevels: number[] = [];
+  /** How many distinct ground elevations the section has. */
+  readonly levelCount: number;
   /**
-   * Per interval k (above levels[k]), per sub-area j, from index 6(3k + j): area, first moment, top width, its rate,
-   * perimeter, its rate, the values just above levels[k], stored from `values[base]` (see number-arena.ts).
+   * From `values[levelsAt]`: the distinct ground elevations ascending, then per level 1 where the top width or the
+   * perimeter jumps just above it (flat ground starts to flood), else 0; then from `values[base]`, per interval k (above
+   * level k), per sub-area j, from index 6(3k + j): area, first moment, top width, its rate, perimeter, its rate, the
+   * values just above level k. All in one run of a shared block (see number-arena.ts); offsets only, so that a table
+   * is one small object for the collector however many levels it has.
    */
   private readonly values: Float64Array;
+  private readonly levelsAt: number;
   private readonly base: number;
   /** The interval last found. Why: a scan or a root search asks for level after level in one or the next interval. */
   private lastInterval = -1;
 
   constructor(ground: SurveyGround) {
-    const { stations: x, elevations: z, segmentSubAreas } = ground;
-    const found = groundLevels(z, ground.order);
-    const { pointLevels } = found;
+    const found = groundLevels(ground.elevations, ground.order);
     const count = found.levels.length;
-    // The levels and the values side by side in one run of numbers kept with the section (see number-arena.ts).
-    const { numbers, offset } = allocatedNumbers((1 + 6 * SUB_AREA_COUNT) * count);
-    const levels = numbers.subarray(offset, offset + count);
-    levels.set(found.levels);
-    this.levels = levels;
+    const { numbers, offset } = allocatedNumbers(NUMBERS_PER_LEVEL * count);
+    numbers.set(found.levels, offset);
+    this.levelCount = count;
     this.values = numbers;
-    this.base = offset + count;
-    // Per level and sub-area, from index 4(3k + j): jumps in top width and perimeter, then changes in their rates.
-    const changes = scratchNumbers(4 * SUB_AREA_COUNT * count, SCRATCH_SLOTS.changes);
-    const negligibleRise = 1e-13 * Math.max(levels[count - 1] - levels[0], Math.abs(levels[0]), Math.abs(levels[count - 1]), Number.MIN_VALUE);
-    for (let i = 1; i < z.length; i++) {
-      const j = segmentSubAreas[i];
-      if (j < 0) continue;
-      const z1 = z[i - 1];
-      const z2 = z[i];
-      const low = 4 * (SUB_AREA_COUNT * Math.min(pointLevels[i - 1], pointLevels[i]) + j);
-      const high = 4 * (SUB_AREA_COUNT * Math.max(pointLevels[i - 1], pointLevels[i]) + j);
-      const width = Math.abs(x[i] - x[i - 1]);
-      const rise = Math.abs(z2 - z1);
-      // Not Math.hypot: ground in metres cannot overflow a square, and hypot costs twenty times as much per segment.
-      const length = Math.sqrt(width * width + rise * rise);
-      if (rise === 0) {
-        changes[low] += width;
-        changes[low + 1] += width;
-      } else if (rise <= negligibleRise || !Number.isFinite(length / rise)) {
-        // A rise far below the precision of the levels (its slope would be all rounding): wholly wet just above its upper end.
-        changes[high] += width;
-        changes[high + 1] += length;
-      } else {
-        // A vertical wall (width 0) only adds perimeter, one metre per metre of rise.
-        changes[low + 2] += width / rise;
-        changes[high + 2] -= width / rise;
-        changes[low + 3] += length / rise;
-        changes[high + 3] -= length / rise;
-      }
-    }
+    this.levelsAt = offset;
+    this.base = offset + 2 * count;
+    const lowest = found.levels[0];
+    const highest = found.levels[count - 1];
+    const changes = levelChanges(ground, found.pointLevels, count, Math.max(highest - lowest, Math.abs(lowest), Math.abs(highest), Number.MIN_VALUE));
     for (let j = 0; j < SUB_AREA_COUNT; j++) this.accumulate(j, changes);
-    for (let k = 0; k < count; k++) {
-      for (let j = 0, at = 4 * SUB_AREA_COUNT * k; j < SUB_AREA_COUNT; j++, at += 4) {
-        if (changes[at] > 0 || changes[at + 1] > 0) {
-          this.jumpLevels.push(levels[k]);
-          break;
-        }
-      }
-    }
+    for (let k = 0; k < count; k++) numbers[offset + count + k] = jumpsAt(changes, k) ? 1 : 0;
   }
 
-  /** Sub-area j's values at every level, from the changes at each (see the constructor). */
+  /** The k-th distinct ground elevation, ascending. */
+  levelAt(k: number): Metres {
+    return this.values[this.levelsAt + k];
+  }
+
+  /** Whether the top width or the perimeter jumps just above level k (flat ground starts to flood). */
+  jumpsAbove(k: number): boolean {
+    return this.values[this.levelsAt + this.levelCount + k] === 1;
+  }
+
+  /** Sub-area j's values at every level, from the changes at each (see levelChanges). */
   private accumulate(j: number, changes: Float64Array): void {
-    const { levels, values } = this;
-    const count = levels.length;
+    const { values, levelsAt } = this;
+    const count = this.levelCount;
     let area = 0;
     let moment = 0;
     let width = 0;
@@ -127,7 +108,7 @@ export class SurveyTable {
       values[at + 4] = perimeter;
       values[at + 5] = perimeterRate;
       if (k === count - 1) break;
-      const s = levels[k + 1] - levels[k];
+      const s = values[levelsAt + k + 1] - values[levelsAt + k];
       moment += area * s + (width * s * s) / 2 + (widthRate * s * s * s) / 6;
       area += width * s + (widthRate * s * s) / 2;
       width = Math.max(0, width + widthRate * s);
@@ -135,19 +116,19 @@ export class SurveyTable {
     }
   }
 
-  /** The interval holding `level`: the last k with levels[k] < level, or −1 at or below the lowest ground. */
+  /** The interval holding `level`: the last k with level k below it, or −1 at or below the lowest ground. */
   interval(level: Metres): number {
-    const levels = this.levels;
-    if (!(level > levels[0])) return -1;
-    const last = levels.length - 1;
+    const { values, levelsAt } = this;
+    if (!(level > values[levelsAt])) return -1;
+    const last = this.levelCount - 1;
     for (let k = Math.max(0, this.lastInterval); k <= this.lastInterval + 1 && k <= last; k++) {
-      if (levels[k] < level && (k === last || !(levels[k + 1] < level))) return (this.lastInterval = k);
+      if (values[levelsAt + k] < level && (k === last || !(values[levelsAt + k + 1] < level))) return (this.lastInterval = k);
     }
     let lo = 0;
-    let hi = levels.length;
+    let hi = this.levelCount;
     while (hi - lo > 1) {
       const mid = (lo + hi) >> 1;
-      if (levels[mid] < level) lo = mid;
+      if (values[levelsAt + mid] < level) lo = mid;
       else hi = mid;
     }
     this.lastInterval = lo;
@@ -162,7 +143,7 @@ export class SurveyTable {
     }
     const values = this.values;
     const at = this.base + 6 * (3 * k + j);
-    const s = level - this.levels[k];
+    const s = level - values[this.levelsAt + k];
     const area = values[at];
     const width = values[at + 2];
     const widthRate = values[at + 3];

@@ -1,10 +1,12 @@
 // A reach as a list of cross-sections by distance upstream of the control, filled in where too far apart.
 import { InvalidInputError, requireFinite, requirePositive } from '../errors';
 import type { FlowSection } from '../section';
-import { sectionOfGround, surveyedSection } from '../surveyed-section';
-import type { SurveyedSectionSpec } from '../surveyed-spec';
+import { groundOfSurvey } from '../surveyed-ground';
+import { sectionOfGround } from '../surveyed-section';
+import { type SurveyedSectionSpec, validatedSurvey } from '../surveyed-spec';
 import type { Metres, Slope } from '../units';
 import { interpolatedGround, interpolatedSurvey } from './survey-interpolation';
+import { rememberLayout } from './survey-layout';
 
 export interface ReachStation {
   distanceUpstream: Metres;
@@ -58,7 +60,10 @@ export function surveyedReach(sections: readonly { distanceUpstream: Metres; sur
     requireFinite(entry.distanceUpstream, `${at}.distanceUpstream`);
     if (i === 0 && entry.distanceUpstream !== 0) throw new InvalidInputError(`${at}.distanceUpstream`, 'must be 0: the first section is the control section');
     if (i > 0 && !(entry.distanceUpstream > sections[i - 1].distanceUpstream)) throw new InvalidInputError(`${at}.distanceUpstream`, 'must be greater than the distance of the section before it');
-    const section = surveyedSection(entry.survey, { field: `${at}.survey` });
+    // Checked once: the same ground makes the section and the layout its neighbours are interpolated from.
+    const ground = groundOfSurvey(validatedSurvey(entry.survey, `${at}.survey`));
+    rememberLayout(entry.survey, ground);
+    const section = sectionOfGround(ground);
     return { distanceUpstream: entry.distanceUpstream, section, bedLevel: section.invertLevel, bankLevel: entry.bankLevel, survey: entry.survey };
   });
 }
@@ -73,7 +78,8 @@ export function stationBetween(a: ReachStation, b: ReachStation, weight: number)
   const distanceUpstream = a.distanceUpstream + weight * (b.distanceUpstream - a.distanceUpstream);
   const bankLevel = a.bankLevel !== undefined && b.bankLevel !== undefined ? a.bankLevel + weight * (b.bankLevel - a.bankLevel) : undefined;
   if (a.section === b.section) return { distanceUpstream, section: a.section, bedLevel: a.bedLevel + weight * (b.bedLevel - a.bedLevel), bankLevel };
-  const [from, to] = [surveyOf(a), surveyOf(b)];
+  const from = surveyOf(a);
+  const to = surveyOf(b);
   if (from === undefined || to === undefined) throw new InvalidInputError('reach.sections', 'differing sections need surveys to be interpolated');
   const section = sectionOfGround(interpolatedGround(from, to, weight));
   // Both fields present from the start, so that writing the survey out later keeps the station's shape.

@@ -1,4 +1,5 @@
 // A cross-section between two surveyed ones, by linear interpolation of the ground itself.
+import { allocatedNumbers } from '../number-arena';
 import { type SurveyedGround, withBankPoints } from '../surveyed-ground';
 import { type SurveyedSectionSpec, requireHoldsWater } from '../surveyed-spec';
 import type { Metres } from '../units';
@@ -11,8 +12,8 @@ import { type LaidOutSurvey, laidOut, stationAt } from './survey-layout';
  * list for all, as a pair of surveys is matched once per reach and a list per position was most of that work's garbage.
  */
 function elevationsAlong(survey: LaidOutSurvey, at: readonly number[]): { levels: Metres[]; starts: number[] } {
-  const { points, positions } = survey;
-  const last = points.length - 1;
+  const { elevations, positions } = survey;
+  const last = elevations.length - 1;
   const levels: Metres[] = [];
   const starts: number[] = [];
   let i = 0;
@@ -20,12 +21,12 @@ function elevationsAlong(survey: LaidOutSurvey, at: readonly number[]): { levels
     starts.push(levels.length);
     while (i <= last && positions[i] < u) i++;
     if (i <= last && positions[i] === u) {
-      for (let j = i; j <= last && positions[j] === u; j++) levels.push(points[j].elevation);
-    } else if (i > last) levels.push(points[last].elevation);
-    else if (i === 0) levels.push(points[0].elevation);
+      for (let j = i; j <= last && positions[j] === u; j++) levels.push(elevations[j]);
+    } else if (i > last) levels.push(elevations[last]);
+    else if (i === 0) levels.push(elevations[0]);
     else {
       const t = (u - positions[i - 1]) / (positions[i] - positions[i - 1]);
-      levels.push(points[i - 1].elevation + t * (points[i].elevation - points[i - 1].elevation));
+      levels.push(elevations[i - 1] + t * (elevations[i] - elevations[i - 1]));
     }
   }
   starts.push(levels.length);
@@ -45,12 +46,15 @@ function mergedPositions(a: LaidOutSurvey, b: LaidOutSurvey): number[] {
 
 const mix = (a: number, b: number, w: number) => a + (b - a) * w;
 
-/** Everything about blending two surveys that does not depend on the weight: matched stations and ground levels. */
+/**
+ * Everything about blending two surveys that does not depend on the weight: per matched point, its stations and ground
+ * levels in both, from numbers[at]: `count` stations in `from`, then as many in `to`, then the levels in each, in one
+ * run of a shared block (see number-arena.ts), as a reach keeps a pair for every two neighbouring surveys.
+ */
 interface MatchedPair {
-  stationsFrom: number[];
-  stationsTo: number[];
-  levelsFrom: number[];
-  levelsTo: number[];
+  numbers: Float64Array;
+  at: number;
+  count: number;
   from: LaidOutSurvey;
   to: LaidOutSurvey;
   /** The blended points by elevation at the weight last blended (see ground-levels.ts). */
@@ -61,21 +65,28 @@ function matchedPair(a: LaidOutSurvey, b: LaidOutSurvey): MatchedPair {
   const positions = mergedPositions(a, b);
   const elevationsA = elevationsAlong(a, positions);
   const elevationsB = elevationsAlong(b, positions);
-  const pair: MatchedPair = { stationsFrom: [], stationsTo: [], levelsFrom: [], levelsTo: [], from: a, to: b, order: [] };
+  let count = 0;
   for (let p = 0; p < positions.length; p++) {
+    count += Math.max(elevationsA.starts[p + 1] - elevationsA.starts[p], elevationsB.starts[p + 1] - elevationsB.starts[p]);
+  }
+  const { numbers, offset: at } = allocatedNumbers(4 * count);
+  for (let p = 0, i = 0; p < positions.length; p++) {
     const stationA = stationAt(a, positions[p]);
     const stationB = stationAt(b, positions[p]);
-    const [startA, countA] = [elevationsA.starts[p], elevationsA.starts[p + 1] - elevationsA.starts[p]];
-    const [startB, countB] = [elevationsB.starts[p], elevationsB.starts[p + 1] - elevationsB.starts[p]];
-    for (let k = 0; k < Math.max(countA, countB); k++) {
-      pair.stationsFrom.push(stationA);
-      pair.stationsTo.push(stationB);
-      pair.levelsFrom.push(elevationsA.levels[startA + Math.min(k, countA - 1)]);
-      pair.levelsTo.push(elevationsB.levels[startB + Math.min(k, countB - 1)]);
+    const startA = elevationsA.starts[p];
+    const countA = elevationsA.starts[p + 1] - startA;
+    const startB = elevationsB.starts[p];
+    const countB = elevationsB.starts[p + 1] - startB;
+    for (let k = 0; k < Math.max(countA, countB); k++, i++) {
+      numbers[at + i] = stationA;
+      numbers[at + count + i] = stationB;
+      numbers[at + 2 * count + i] = elevationsA.levels[startA + Math.min(k, countA - 1)];
+      numbers[at + 3 * count + i] = elevationsB.levels[startB + Math.min(k, countB - 1)];
     }
   }
-  pair.order = pair.levelsFrom.map((_, i) => i);
-  return pair;
+  const order = new Array<number>(count);
+  for (let i = 0; i < count; i++) order[i] = i;
+  return { numbers, at, count, from: a, to: b, order };
 }
 
 /** Pairs already matched. Why: refinement interpolates a section at several weights between the same two surveys. */
@@ -100,12 +111,12 @@ function rememberedPair(from: SurveyedSectionSpec, to: SurveyedSectionSpec, fiel
 export function interpolatedGround(from: SurveyedSectionSpec, to: SurveyedSectionSpec, weight: number, field = 'reach.sections'): SurveyedGround {
   const pair = rememberedPair(from, to, field);
   const { from: a, to: b } = pair;
-  const count = pair.stationsFrom.length;
+  const { numbers, at, count } = pair;
   const stations: Metres[] = new Array(count);
   const elevations: Metres[] = new Array(count);
   for (let i = 0; i < count; i++) {
-    stations[i] = mix(pair.stationsFrom[i], pair.stationsTo[i], weight);
-    elevations[i] = mix(pair.levelsFrom[i], pair.levelsTo[i], weight);
+    stations[i] = mix(numbers[at + i], numbers[at + count + i], weight);
+    elevations[i] = mix(numbers[at + 2 * count + i], numbers[at + 3 * count + i], weight);
   }
   requireHoldsWater(elevations, `${field}.points`);
   const roughness = {
