@@ -2,10 +2,13 @@
 // it means the same on a busy machine; a target missed is printed as "TARGET MISSED" and fails the run.
 import { readFileSync } from 'node:fs';
 import { bench, describe } from 'vitest';
-import { directStepProfile, evaluateCase, normalDepth, prismaticSection, standardStepProfile, surveyedReach } from '@/lib/hydraulics';
+import type { standardStepProfile as StandardStepProfile } from '@/lib/hydraulics';
 import { Solver } from '@/lib/hydraulics/profiles/odex-solver';
 import { parseCase } from '@/lib/validation/parse-case';
+import { bundledEngine } from './bundled-engine';
 import { machineDescription } from './machine';
+
+const { directStepProfile, evaluateCase, normalDepth, prismaticSection, standardStepProfile, surveyedReach } = await bundledEngine();
 
 const TARGET_PROFILE_RATIO = 10;
 const TARGET_CASE_FLOOR_PROFILES = 2500;
@@ -131,9 +134,9 @@ const SURVEY_WARM_RUNS = 10;
 /** Runs after the first that the JIT still spends optimising (each a fifth to half slower here); not counted. */
 const SURVEY_WARM_UP_RUNS = 4;
 /** Milliseconds per run on fresh surveys; building the stations from them is part of the work timed. */
-function surveyRunTimes(runs: number): { times: number[]; profile: ReturnType<typeof standardStepProfile> } {
+function surveyRunTimes(runs: number): { times: number[]; profile: ReturnType<typeof StandardStepProfile> } {
   const times: number[] = [];
-  let profile: ReturnType<typeof standardStepProfile> | undefined;
+  let profile: ReturnType<typeof StandardStepProfile> | undefined;
   for (let run = 0; run < runs; run++) {
     const surveys = freshSurveys();
     const start = performance.now();
@@ -141,7 +144,7 @@ function surveyRunTimes(runs: number): { times: number[]; profile: ReturnType<ty
     profile = standardStepProfile({ reach, discharge: 25, controlLevel: reach[0].bedLevel + 2.6 });
     times.push(performance.now() - start);
   }
-  return { times, profile: profile as ReturnType<typeof standardStepProfile> };
+  return { times, profile: profile as ReturnType<typeof StandardStepProfile> };
 }
 // The first run in the process is shown for information (the code still cold); the target is on the mean of the warm runs.
 const { times: surveyTimes, profile: surveyProfile } = surveyRunTimes(1 + SURVEY_WARM_UP_RUNS + SURVEY_WARM_RUNS);
