@@ -73,17 +73,41 @@ export function canInterpolate(a: ReachStation, b: ReachStation): boolean {
   return a.section === b.section || ((a.survey ?? a.blend) !== undefined && (b.survey ?? b.blend) !== undefined);
 }
 
-/** The station a fraction `weight` of the way from `a` to `b`. */
+/** Two stations between the same two surveys: those surveys and how far from the first each station lies. */
+interface SharedSpan {
+  from: SurveyedSectionSpec;
+  to: SurveyedSectionSpec;
+  weightOfA: number;
+  weightOfB: number;
+}
+
+function sharedSpan(a: ReachStation, b: ReachStation): SharedSpan | null {
+  if (a.blend !== undefined && b.blend !== undefined) {
+    return a.blend.from === b.blend.from && a.blend.to === b.blend.to ? { from: a.blend.from, to: a.blend.to, weightOfA: a.blend.weight, weightOfB: b.blend.weight } : null;
+  }
+  if (a.blend !== undefined && b.survey === a.blend.to) return { from: a.blend.from, to: a.blend.to, weightOfA: a.blend.weight, weightOfB: 1 };
+  if (b.blend !== undefined && a.survey === b.blend.from) return { from: b.blend.from, to: b.blend.to, weightOfA: 0, weightOfB: b.blend.weight };
+  return null;
+}
+
+/**
+ * The station a fraction `weight` of the way from `a` to `b`. Between stations that lie between the same two surveys
+ * (a step halved near critical depth) the ground is blended from those two surveys themselves. Why: a survey written
+ * out from a blend has the points of both its surveys, and blending it again adds the other's once more, so sections
+ * halved forty times over would carry exponentially many points.
+ */
 export function stationBetween(a: ReachStation, b: ReachStation, weight: number): ReachStation {
   const distanceUpstream = a.distanceUpstream + weight * (b.distanceUpstream - a.distanceUpstream);
   const bankLevel = a.bankLevel !== undefined && b.bankLevel !== undefined ? a.bankLevel + weight * (b.bankLevel - a.bankLevel) : undefined;
   if (a.section === b.section) return { distanceUpstream, section: a.section, bedLevel: a.bedLevel + weight * (b.bedLevel - a.bedLevel), bankLevel };
-  const from = surveyOf(a);
-  const to = surveyOf(b);
+  const span = sharedSpan(a, b);
+  const from = span?.from ?? surveyOf(a);
+  const to = span?.to ?? surveyOf(b);
   if (from === undefined || to === undefined) throw new InvalidInputError('reach.sections', 'differing sections need surveys to be interpolated');
-  const section = sectionOfGround(interpolatedGround(from, to, weight));
+  const blendWeight = span === null ? weight : span.weightOfA + weight * (span.weightOfB - span.weightOfA);
+  const section = sectionOfGround(interpolatedGround(from, to, blendWeight));
   // Both fields present from the start, so that writing the survey out later keeps the station's shape.
-  return { distanceUpstream, section, bedLevel: section.invertLevel, bankLevel, survey: undefined, blend: { from, to, weight } };
+  return { distanceUpstream, section, bedLevel: section.invertLevel, bankLevel, survey: undefined, blend: { from, to, weight: blendWeight } };
 }
 
 /**

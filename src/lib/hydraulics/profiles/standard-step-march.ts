@@ -62,6 +62,11 @@ function stopAt(pass: StandardStepPass, previous: ProfilePoint, previousStation:
 
 /** Halvings of a step whose energy balance has no subcritical level, before the profile is stopped there. */
 const MAX_HALVINGS = 40;
+/**
+ * A step no longer than this is not halved again: a millimetre along the reach is far finer than any survey, and
+ * each halving costs a section and its critical depth (several hundred per place the flow chokes, before this).
+ */
+const SHORTEST_HALVED_STEP: Metres = 0.001;
 /** Sub-steps allowed within one gap between stations. */
 const MAX_SUBSTEPS = 400;
 
@@ -74,7 +79,7 @@ type StepOutcome = { station: ReachStation; result: BalanceResult };
 function stepTowards(from: ReachStation, depth: Metres, to: ReachStation, settings: BalanceSettings): StepOutcome {
   let station = to;
   let result = upstreamDepth(from, depth, station, settings);
-  for (let halvings = 0; result.kind === 'critical-depth' && halvings < MAX_HALVINGS && canInterpolate(from, station); halvings++) {
+  for (let halvings = 0; result.kind === 'critical-depth' && halvings < MAX_HALVINGS && station.distanceUpstream - from.distanceUpstream > SHORTEST_HALVED_STEP && canInterpolate(from, station); halvings++) {
     station = stationBetween(from, station, 0.5);
     result = upstreamDepth(from, depth, station, settings);
   }
