@@ -1,4 +1,5 @@
 // Critical depth: the depth at which the Froude number αQ²T/(gA³) equals 1.
+import { FROUDE_PROOF_MARGIN } from './above-critical';
 import { DEEPEST_OPEN_DEPTH, breakpointDepthGrid, downwardBracket, finiteDepthGrid, hasBreakpoints, openDepthBracket } from './depth-brackets';
 import { NoPhysicalSolutionError, requirePositive } from './errors';
 import { specificEnergy } from './flow-properties';
@@ -54,9 +55,6 @@ export function criticalResidual(section: FlowSection, discharge: CubicMetresPer
   };
 }
 
-/** Relative margin by which a bound must clear 0 to prove a sign: far above the rounding of either side. */
-const PROOF_MARGIN = 1e-9;
-
 /**
  * The sign of criticalResidual over a range of depths, proven from the section's bounds on αT/A³ there: the residual
  * is positive where Fr² = Q²·αT/(gA³) < 1 and negative where Fr² > 1 (Chow 1959 §4-2 criterion — from memory). Why:
@@ -71,8 +69,8 @@ function criticalResidualProof(section: FlowSection, discharge: CubicMetresPerSe
   const boundsOf = section as Required<Pick<FlowSection, 'froudeFactorBoundsInto'>>;
   return (from, to) => {
     boundsOf.froudeFactorBoundsInto(from, to, bounds);
-    if (scale * bounds.most < 1 - PROOF_MARGIN) return 1;
-    if (scale * bounds.least > 1 + PROOF_MARGIN) return -1;
+    if (scale * bounds.most < 1 - FROUDE_PROOF_MARGIN) return 1;
+    if (scale * bounds.least > 1 + FROUDE_PROOF_MARGIN) return -1;
     return 0;
   };
 }

@@ -4,18 +4,8 @@ import { interpolatedGround, interpolatedSurvey } from '@/lib/hydraulics/profile
 import type { FroudeFactorBounds } from '@/lib/hydraulics/section-sample';
 import { sectionOfGround, surveyedSection } from '@/lib/hydraulics/surveyed-section';
 import { InvalidInputError } from '@/lib/hydraulics/errors';
+import { randomSurvey as survey } from './random-surveys';
 import { caught } from './test-helpers';
-
-// Invented grounds: random polylines with flat runs and walls between two high ends, three sub-areas of differing n.
-const interior = fc.array(fc.tuple(fc.integer({ min: 0, max: 4 }), fc.integer({ min: 0, max: 40 })), { minLength: 2, maxLength: 25 });
-const survey = fc.tuple(interior, fc.double({ min: 0.01, max: 0.1, noNaN: true }), fc.double({ min: 0.01, max: 0.1, noNaN: true })).map(([steps, nChannel, nBanks]) => {
-  let station = 0;
-  const points: [number, number][] = [[0, 106]];
-  for (const [step, tenths] of steps) points.push([(station += step), 100 + tenths / 10]);
-  points.push([station + 1, 106]);
-  const width = station + 1;
-  return { points, manningN: { left: nBanks, channel: nChannel, right: 1.5 * nBanks }, bankStations: [0.3 * width, 0.7 * width] as [number, number] };
-});
 
 describe('bounds on αT/A³ over a range of depths (for the critical-depth scan)', () => {
   it('hold at every depth in the range, against the section’s own α, T and A there', () => {

@@ -2,7 +2,8 @@
 import { sequentDepth } from '../sequent-depth';
 import type { FlowSection } from '../section';
 import type { CubicMetresPerSecond, Metres } from '../units';
-import { type BalanceResult, type BalanceSettings, upstreamDepth } from './energy-balance';
+import { aboveEveryCriticalDepth } from '../above-critical';
+import { type BalanceResult, type BalanceSettings, criticalDepthOf, upstreamDepth } from './energy-balance';
 import { profilePointAt } from './point-state';
 import { blendPoints } from './profile-interpolation';
 import type { JumpLocation, ProfilePoint, ProfileRun } from './profile-point';
@@ -43,10 +44,17 @@ function normalCrossing(previousDeparture: number, departure: number, tolerance:
 
 type StationStop = { point: ProfilePoint; stoppedBy: 'normal-depth' | 'hydraulic-jump'; jump: JumpLocation | null } | null;
 
-function stopAt(pass: StandardStepPass, previous: ProfilePoint, previousStation: ReachStation, point: ProfilePoint, station: ReachStation, critical: Metres): StationStop {
+/** Normal depth below the least-energy critical depth: a steep section, where the profile ends in a jump. */
+function supercriticalNormalFlow(section: FlowSection, discharge: CubicMetresPerSecond, yn: Metres): boolean {
+  if (aboveEveryCriticalDepth(section, discharge, yn)) return false;
+  const critical = criticalDepthOf(section, discharge);
+  return critical !== null && yn < critical;
+}
+
+function stopAt(pass: StandardStepPass, previous: ProfilePoint, previousStation: ReachStation, point: ProfilePoint, station: ReachStation): StationStop {
   const yn = pass.normalDepthAt(station);
   if (yn === null) return null;
-  if (yn < critical) {
+  if (supercriticalNormalFlow(station.section, pass.settings.discharge, yn)) {
     const jumpDepth = pass.jumpDepthAt(station.section, yn);
     if (point.depth > jumpDepth) return null;
     const t = previous.depth > point.depth ? (previous.depth - jumpDepth) / (previous.depth - point.depth) : 1;
@@ -106,7 +114,7 @@ export function standardStepMarch(pass: StandardStepPass): ProfileRun {
         return run('section-overtopped', [`at ${station.distanceUpstream.toFixed(1)} m the water would rise above the top of the section; the profile stops at ${previous.distanceUpstream.toFixed(1)} m`]);
       }
       const point = profilePointAt(station.section, settings.discharge, result.depth, station.distanceUpstream, station.bedLevel);
-      const stop = stopAt(pass, previous, from, point, station, result.criticalDepth);
+      const stop = stopAt(pass, previous, from, point, station);
       if (stop !== null) {
         points.push(stop.point);
         const warnings = stop.jump === null ? [] : [`a hydraulic jump forms ${stop.jump.distanceUpstream.toFixed(1)} m upstream of the control; upstream of it the flow is supercritical at normal depth`];
