@@ -33,14 +33,14 @@ function elevationsAlong(survey: LaidOutSurvey, at: readonly number[]): { levels
   return { levels, starts };
 }
 
-/** The positions of both surveys, ascending, each once. */
+/** The positions of both surveys, ascending, each once: one merge, as each survey's positions ascend already. */
 function mergedPositions(a: LaidOutSurvey, b: LaidOutSurvey): number[] {
-  const sorted = new Float64Array(a.positions.length + b.positions.length);
-  sorted.set(a.positions);
-  sorted.set(b.positions, a.positions.length);
-  sorted.sort();
+  const [p, q] = [a.positions, b.positions];
   const distinct: number[] = [];
-  for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) distinct.push(sorted[i]);
+  for (let i = 0, j = 0; i < p.length || j < q.length; ) {
+    const next = j >= q.length || (i < p.length && p[i] <= q[j]) ? p[i++] : q[j++];
+    if (distinct.length === 0 || next !== distinct[distinct.length - 1]) distinct.push(next);
+  }
   return distinct;
 }
 
