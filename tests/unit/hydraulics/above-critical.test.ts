@@ -32,6 +32,8 @@ describe('a depth proven above every critical depth', () => {
         if (!aboveEveryCriticalDepth(section, discharge, depth)) return;
         proven++;
         const roots = everyCriticalDepth(section, discharge);
+        // A slit of no width at the invert holds water without area, and the full search finds no critical depth in it.
+        if (roots === null && !(section.stateAtDepth(1e-3 * section.maxDepth).area > 0)) return;
         expect(roots).not.toBeNull();
         for (const root of roots!) expect(root).toBeLessThan(depth);
       }),
